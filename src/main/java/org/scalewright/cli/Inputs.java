@@ -1,0 +1,49 @@
+package org.scalewright.cli;
+
+import java.nio.file.Path;
+import org.scalewright.io.BadInputException;
+import org.scalewright.io.BuiltInData;
+import org.scalewright.io.ScaleSheetReader;
+import org.scalewright.io.StrengthTableReader;
+import org.scalewright.model.PitchStandard;
+import org.scalewright.model.Scale;
+import org.scalewright.physics.AnalysisSettings;
+import org.scalewright.physics.StrengthTable;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** The inputs most commands share: the scale sheet, the pitch standard and the strength table. */
+public final class Inputs {
+    @Parameters(index = "0", paramLabel = "SCALE.csv", description = "the scale sheet (CSV, see scales/README.md)")
+    Path scaleFile;
+
+    @Option(names = "--a4", paramLabel = "HZ",
+            description = "pitch standard: frequency of A4 in Hz (default: the sheet's '# a4_hz:' or 440)")
+    Double a4;
+
+    @Option(names = "--strength", paramLabel = "TABLE.csv",
+            description = "a wire maker's strength table (default: ASTM A228 minimum tensile strength)")
+    Path strengthFile;
+
+    /** @return the scale as read, tuned to {@code --a4} where given */
+    public Scale scale() throws BadInputException {
+        Scale s = ScaleSheetReader.standard().read(scaleFile);
+        if (a4 != null) {
+            if (!(a4 > 0 && a4 < 1000)) {
+                throw new UserError("--a4 must be a frequency in Hz between 0 and 1000, was " + a4);
+            }
+            s = s.withPitch(new PitchStandard(a4));
+        }
+        return s;
+    }
+
+    /** @return the strength table chosen */
+    public StrengthTable strength() throws BadInputException {
+        return strengthFile == null ? BuiltInData.astmMinimum() : StrengthTableReader.read(strengthFile);
+    }
+
+    /** @return the analysis settings for the chosen strength table */
+    public AnalysisSettings settings() throws BadInputException {
+        return BuiltInData.defaultSettings().withStrength(strength());
+    }
+}

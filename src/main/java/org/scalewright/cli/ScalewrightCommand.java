@@ -1,0 +1,51 @@
+package org.scalewright.cli;
+
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The headless command line: {@code scalewright COMMAND …}. */
+@Command(name = "scalewright", mixinStandardHelpOptions = true, version = "Scalewright 0.1",
+        description = {"Piano scaling workstation: string tension, stress and inharmonicity.",
+                "Without a command the desktop window opens; 'open FILE' opens a sheet in it."},
+        subcommands = {AnalyzeCommand.class})
+public final class ScalewrightCommand implements Runnable {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Runs the command line on the process's standard output and error; returns the exit status. */
+    public static int runOnConsole(String[] args) {
+        PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out,
+                java.nio.charset.StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err,
+                java.nio.charset.StandardCharsets.UTF_8), true);
+        return run(args, out, err);
+    }
+
+    /**
+     * Runs the command line and returns the exit status: 0 success, 2 bad input or arguments
+     * (one line per problem on stderr), 1 internal error. Never prints a stack trace.
+     */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new ScalewrightCommand());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("error: " + ex.getMessage());
+            err.println("try: scalewright " + ex.getCommandLine().getCommandName() + " --help");
+            err.flush();
+            return ExitStatus.BAD_INPUT;
+        });
+        cl.setExecutionExceptionHandler(new Failures(err));
+        int rc = cl.execute(args);
+        out.flush();
+        err.flush();
+        return rc;
+    }
+}

@@ -1,0 +1,51 @@
+package org.scalewright.io;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+import org.scalewright.model.UnitConversions;
+import org.scalewright.physics.Flag;
+import org.scalewright.physics.NoteResult;
+import org.scalewright.physics.ScaleAnalysis;
+
+/** The per-note results of an analysis as CSV rows in SI (DESIGN §5, {@code analyze --out}). */
+public final class AnalysisCsv {
+    /** The columns, in order. */
+    public static final List<String> HEADER = List.of("key", "note", "section", "frequency_hz", "strings", "wound",
+            "core_mm", "mass_per_length_g_m", "tension_n", "tension_lbf", "note_tension_n", "stress_mpa",
+            "breaking_strength_mpa", "break_pct", "inharmonicity_b", "headroom_cents", "break_hz",
+            "impedance_kg_s", "elongation_mm", "band", "flags");
+
+    private AnalysisCsv() {
+    }
+
+    /** @return header comments naming the scale, pitch standard and strength table */
+    public static List<String> comments(ScaleAnalysis a) {
+        List<String> c = new ArrayList<>();
+        if (!a.scale().title().isEmpty()) {
+            c.add("scale: " + a.scale().title());
+        }
+        c.add("a4_hz: " + CsvCells.number(a.scale().pitch().a4()));
+        c.add("strength table: " + a.settings().strength().name());
+        c.add("total tension: " + CsvCells.fixed(a.totalTension(), 0) + " N");
+        return c;
+    }
+
+    /** @return one row per note */
+    public static List<List<String>> rows(ScaleAnalysis a) {
+        List<List<String>> rows = new ArrayList<>(a.notes().size());
+        for (NoteResult r : a.notes()) {
+            rows.add(List.of(Integer.toString(r.key()), r.noteName(), r.section(), CsvCells.fixed(r.frequency(), 4),
+                    Integer.toString(r.strings()), Boolean.toString(r.wound()),
+                    CsvCells.fixed(r.coreDiameter() * 1e3, 4), CsvCells.fixed(r.massPerLength() * 1e3, 5),
+                    CsvCells.fixed(r.tension(), 2), CsvCells.fixed(UnitConversions.newtonsToLbf(r.tension()), 2),
+                    CsvCells.fixed(r.noteTension(), 2), CsvCells.fixed(r.stress() / 1e6, 2),
+                    CsvCells.fixed(r.breakingStrength() / 1e6, 2), CsvCells.fixed(r.breakPct(), 3),
+                    CsvCells.scientific(r.inharmonicity()), CsvCells.fixed(r.headroomCents(), 1),
+                    CsvCells.fixed(r.breakingFrequency(), 3), CsvCells.fixed(r.impedance(), 4),
+                    CsvCells.fixed(r.elongation() * 1e3, 3), r.band().word(),
+                    r.flags().stream().map(Flag::detail).collect(Collectors.joining("; "))));
+        }
+        return rows;
+    }
+}

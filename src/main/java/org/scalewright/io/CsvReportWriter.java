@@ -1,0 +1,50 @@
+package org.scalewright.io;
+
+import com.opencsv.CSVWriter;
+import com.opencsv.ICSVWriter;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+
+/**
+ * Writes a table of results as CSV: a header row of column names, then the rows. Text cells are
+ * made spreadsheet-safe ({@link CsvCells#safeText}); the file is written atomically.
+ */
+public final class CsvReportWriter {
+    private CsvReportWriter() {
+    }
+
+    /**
+     * @param file     the file to write (replaced atomically)
+     * @param comments lines written first, each after {@code # } (may be empty)
+     * @param header   column names
+     * @param rows     cells, one list per row, as many as the header
+     */
+    public static void write(Path file, List<String> comments, List<String> header, List<List<String>> rows)
+            throws IOException {
+        AtomicFiles.write(file, toText(comments, header, rows).getBytes(StandardCharsets.UTF_8), false);
+    }
+
+    /** @return the CSV text */
+    public static String toText(List<String> comments, List<String> header, List<List<String>> rows) {
+        StringWriter out = new StringWriter();
+        for (String c : comments) {
+            out.write("# " + c.replace('\n', ' ') + "\n");
+        }
+        try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.DEFAULT_QUOTE_CHARACTER,
+                ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n")) {
+            csv.writeNext(header.toArray(String[]::new), false);
+            for (List<String> row : rows) {
+                if (row.size() != header.size()) {
+                    throw new IllegalArgumentException("row has " + row.size() + " cells, header " + header.size());
+                }
+                csv.writeNext(row.stream().map(CsvCells::safeText).toArray(String[]::new), false);
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException("writing to memory failed", e);
+        }
+        return out.toString();
+    }
+}

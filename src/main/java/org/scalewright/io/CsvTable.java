@@ -1,0 +1,89 @@
+package org.scalewright.io;
+
+import com.opencsv.CSVParser;
+import com.opencsv.CSVParserBuilder;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * A CSV file split into its comment lines, its header and its data rows, each row keeping its
+ * line number. Lines whose first non-blank character is {@code #} are comments; blank lines
+ * are skipped. Quoted cells may hold commas and quotes (OpenCSV's parser).
+ *
+ * @param file     the file read
+ * @param comments the text of the comment lines before the header, without the {@code #}
+ * @param header   the header cells, trimmed and lower-cased
+ * @param headerLine line number of the header
+ * @param rows     the data rows
+ */
+record CsvTable(Path file, List<String> comments, List<String> header, int headerLine, List<Row> rows) {
+
+    /** One data row. @param line 1-based line number @param cells the cells, trimmed */
+    record Row(int line, List<String> cells) {
+    }
+
+    static CsvTable read(Path file) throws BadInputException {
+        return parse(file, TextFile.lines(file));
+    }
+
+    static CsvTable parse(Path file, List<String> lines) throws BadInputException {
+        CSVParser parser = new CSVParserBuilder().withIgnoreLeadingWhiteSpace(true).build();
+        List<String> comments = new ArrayList<>();
+        List<String> header = null;
+        int headerLine = 0;
+        List<Row> rows = new ArrayList<>();
+        for (int i = 0; i < lines.size(); i++) {
+            String line = lines.get(i);
+            String stripped = line.strip();
+            if (stripped.isEmpty()) {
+                continue;
+            }
+            if (stripped.startsWith("#")) {
+                if (header == null) {
+                    comments.add(stripped.substring(1).strip());
+                }
+                continue;
+            }
+            String[] cells;
+            try {
+                cells = parser.parseLine(line);
+            } catch (IOException e) {
+                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "",
+                        "cannot be split into cells: " + e.getMessage())));
+            }
+            if (parser.isPending()) {
+                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "",
+                        "a quoted cell is not closed on this line")));
+            }
+            List<String> trimmed = new ArrayList<>(cells.length);
+            for (String c : cells) {
+                trimmed.add(c.strip());
+            }
+            if (header == null) {
+                header = trimmed.stream().map(h -> h.toLowerCase(Locale.ROOT)).toList();
+                headerLine = i + 1;
+            } else {
+                rows.add(new Row(i + 1, trimmed));
+            }
+        }
+        if (header == null) {
+            throw BadInputException.of(file, lines.isEmpty() ? "the file is empty; expected a header line and rows"
+                    : "has no header line; expected a line of column names such as key,strings,length_mm,wire");
+        }
+        return new CsvTable(file, List.copyOf(comments), header, headerLine, List.copyOf(rows));
+    }
+
+    /** @return the value of a {@code # name: value} comment, or null */
+    String commentValue(String name) {
+        for (String c : comments) {
+            int colon = c.indexOf(':');
+            if (colon > 0 && c.substring(0, colon).strip().equalsIgnoreCase(name)) {
+                return c.substring(colon + 1).strip();
+            }
+        }
+        return null;
+    }
+}

@@ -1,0 +1,279 @@
+package org.scalewright.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import org.scalewright.model.CoreWire;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.Note;
+import org.scalewright.model.PitchStandard;
+import org.scalewright.model.Scale;
+import org.scalewright.model.SheetColumn;
+import org.scalewright.model.WireSize;
+import org.scalewright.model.WireSizeTable;
+import org.scalewright.model.Wrap;
+import org.scalewright.model.WrapMetal;
+
+/**
+ * Reads a scale sheet (DESIGN §4). Every problem is collected with its file, line and column;
+ * when there is any, nothing is returned (no half-loaded scale).
+ */
+public final class ScaleSheetReader {
+    private static final int MAX_PROBLEMS = 50;
+    private final WireSizeTable sizes;
+
+    /** @param sizes the music-wire sizes a {@code wire} cell may name */
+    public ScaleSheetReader(WireSizeTable sizes) {
+        this.sizes = sizes;
+    }
+
+    /** A reader with the built-in music-wire sizes. */
+    public static ScaleSheetReader standard() {
+        return new ScaleSheetReader(BuiltInData.musicWireSizes());
+    }
+
+    /**
+     * @param file a UTF-8 CSV scale sheet
+     * @return the scale, with the sheet's layout kept for writing back
+     * @throws BadInputException listing every problem (file, line, column, what was expected)
+     */
+    public Scale read(Path file) throws BadInputException {
+        return parse(file, CsvTable.read(file));
+    }
+
+    /** Reads a sheet from bytes already in memory; {@code file} names it in messages. */
+    public Scale read(Path file, byte[] content) throws BadInputException {
+        return parse(file, CsvTable.parse(file, TextFile.lines(file, content)));
+    }
+
+    private Scale parse(Path file, CsvTable table) throws BadInputException {
+        List<SheetProblem> problems = new ArrayList<>();
+        PitchStandard pitch = PitchStandard.ISO_16;
+        String a4 = table.commentValue("a4_hz");
+        if (a4 != null) {
+            try {
+                pitch = new PitchStandard(Double.parseDouble(a4));
+            } catch (IllegalArgumentException e) {
+                problems.add(new SheetProblem(file, 0, "", "the '# a4_hz:' comment must give a frequency in Hz "
+                        + "between 0 and 1000, was '" + a4 + "'"));
+            }
+        }
+        String title = table.commentValue("title");
+        SheetHeader header = SheetHeader.parse(file, table.header(), table.headerLine(), problems);
+        if (!problems.isEmpty()) {
+            throw new BadInputException(problems);
+        }
+        if (table.rows().isEmpty()) {
+            throw new BadInputException(List.of(new SheetProblem(file, table.headerLine(), "",
+                    "the sheet has a header but no notes")));
+        }
+        List<Note> notes = new ArrayList<>();
+        Map<Integer, Integer> keyLines = new HashMap<>();
+        for (CsvTable.Row row : table.rows()) {
+            Note n = new RowReader(file, header, row, sizes, problems).note();
+            if (n != null) {
+                Integer earlier = keyLines.putIfAbsent(n.key(), row.line());
+                if (earlier != null) {
+                    problems.add(new SheetProblem(file, row.line(), header.name(SheetColumn.KEY),
+                            "key " + n.key() + " appears twice (first on line " + earlier + ")"));
+                } else {
+                    notes.add(n);
+                }
+            }
+            if (problems.size() >= MAX_PROBLEMS) {
+                problems.add(new SheetProblem(file, row.line(), "", "too many problems; stopped reading here"));
+                break;
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new BadInputException(problems);
+        }
+        return new Scale(title == null ? "" : title, pitch, notes, header.layout());
+    }
+
+    /** Reads one row; adds its problems and returns null when it has any. */
+    private static final class RowReader {
+        private final Path file;
+        private final SheetHeader header;
+        private final CsvTable.Row row;
+        private final WireSizeTable sizes;
+        private final List<SheetProblem> problems;
+        private final int before;
+
+        RowReader(Path file, SheetHeader header, CsvTable.Row row, WireSizeTable sizes, List<SheetProblem> problems) {
+            this.file = file;
+            this.header = header;
+            this.row = row;
+            this.sizes = sizes;
+            this.problems = problems;
+            this.before = problems.size();
+        }
+
+        Note note() {
+            if (row.cells().size() > header.width()) {
+                problem("", "the row has " + row.cells().size() + " cells but the header has " + header.width()
+                        + " columns");
+                return null;
+            }
+            Integer key = integer(SheetColumn.KEY, true);
+            Integer strings = integer(SheetColumn.STRINGS, true);
+            if (strings != null && (strings < 1 || strings > 3)) {
+                problem(SheetColumn.STRINGS, "strings per note must be 1, 2 or 3, was " + strings);
+            }
+            Double length = length(SheetColumn.SPEAKING_LENGTH, true);
+            CoreWire wire = wire();
+            Wrap wrap = wrap();
+            Double pitchHz = number(SheetColumn.PITCH_HZ, false, true);
+            Double cents = number(SheetColumn.CENTS, false, false);
+            Double strike = length(SheetColumn.STRIKE, false);
+            Double total = length(SheetColumn.TOTAL_LENGTH, false);
+            Double winding = length(SheetColumn.WINDING_LENGTH, false);
+            if (problems.size() > before) {
+                return null;
+            }
+            try {
+                return new Note(key, strings, length, wire, wrap, opt(pitchHz), cents == null ? 0 : cents,
+                        opt(strike), opt(total), opt(winding), text(SheetColumn.SECTION), text(SheetColumn.REMARK));
+            } catch (IllegalArgumentException e) {
+                problem("", e.getMessage());
+                return null;
+            }
+        }
+
+        private CoreWire wire() {
+            String size = cell(SheetColumn.WIRE_SIZE);
+            String diam = cell(SheetColumn.WIRE_DIAMETER);
+            if (!size.isEmpty() && !diam.isEmpty()) {
+                problem(SheetColumn.WIRE_DIAMETER, "give the wire either as a size number (wire) or as a diameter ("
+                        + header.name(SheetColumn.WIRE_DIAMETER) + "), not both");
+                return null;
+            }
+            if (size.isEmpty() && diam.isEmpty()) {
+                problem("wire", "the wire is missing; give a size number (wire) or a diameter (wire_mm or wire_in)");
+                return null;
+            }
+            if (!size.isEmpty()) {
+                Double s = number(SheetColumn.WIRE_SIZE, true, false);
+                if (s == null) {
+                    return null;
+                }
+                var found = sizes.bySize(s);
+                if (found.isEmpty()) {
+                    problem(SheetColumn.WIRE_SIZE, "wire size " + size + " is not in the music-wire size table ("
+                            + sizes.rangeText() + " in half steps); give a diameter in wire_mm or wire_in instead");
+                    return null;
+                }
+                WireSize w = found.get();
+                return CoreWire.ofSize(w.size(), w.diameter());
+            }
+            Double d = length(SheetColumn.WIRE_DIAMETER, true);
+            return d == null ? null : CoreWire.ofDiameter(d);
+        }
+
+        private Wrap wrap() {
+            Double w1 = length(SheetColumn.WRAP1, false);
+            Double w2 = length(SheetColumn.WRAP2, false);
+            String metalText = cell(SheetColumn.WRAP_METAL);
+            WrapMetal metal = WrapMetal.COPPER;
+            if (!metalText.isEmpty()) {
+                metal = WrapMetal.parse(metalText);
+                if (metal == null) {
+                    problem(SheetColumn.WRAP_METAL, "wrap metal must be copper, iron or steel, was '" + metalText + "'");
+                    return null;
+                }
+            }
+            if (w2 != null && w1 == null) {
+                problem(SheetColumn.WRAP2, "a second wrap needs a first wrap (" + header.name(SheetColumn.WRAP1) + ")");
+                return null;
+            }
+            if (w1 == null) {
+                return null;
+            }
+            return new Wrap(w1, w2 == null ? 0 : w2, metal);
+        }
+
+        private static OptionalDouble opt(Double v) {
+            return v == null ? OptionalDouble.empty() : OptionalDouble.of(v);
+        }
+
+        private String cell(SheetColumn c) {
+            int p = header.position(c);
+            if (p < 0 || p >= row.cells().size()) {
+                return "";
+            }
+            return row.cells().get(p);
+        }
+
+        /** Free text; a leading apostrophe the writer put before {@code = + - @} is taken off again. */
+        private String text(SheetColumn c) {
+            String t = cell(c);
+            if (t.length() > 1 && t.charAt(0) == '\'' && "=+-@".indexOf(t.charAt(1)) >= 0) {
+                return t.substring(1);
+            }
+            return t;
+        }
+
+        private Integer integer(SheetColumn c, boolean required) {
+            String t = cell(c);
+            if (t.isEmpty()) {
+                if (required) {
+                    problem(c, "a value is required here (a whole number)");
+                }
+                return null;
+            }
+            try {
+                return Integer.parseInt(t);
+            } catch (NumberFormatException e) {
+                problem(c, "expected a whole number, was '" + t + "'");
+                return null;
+            }
+        }
+
+        private Double number(SheetColumn c, boolean required, boolean positive) {
+            String t = cell(c);
+            if (t.isEmpty()) {
+                if (required) {
+                    problem(c, "a value is required here (a number)");
+                }
+                return null;
+            }
+            double v;
+            try {
+                v = Double.parseDouble(t);
+            } catch (NumberFormatException e) {
+                problem(c, "expected a number, was '" + t + "'");
+                return null;
+            }
+            if (!Double.isFinite(v)) {
+                problem(c, "expected a finite number, was '" + t + "'");
+                return null;
+            }
+            if (positive && !(v > 0)) {
+                problem(c, "must be greater than 0, was " + t);
+                return null;
+            }
+            return v;
+        }
+
+        /** @return the length in metres */
+        private Double length(SheetColumn c, boolean required) {
+            Double v = number(c, required, true);
+            if (v == null) {
+                return null;
+            }
+            LengthUnit u = header.unit(c);
+            return u.toMetres(v);
+        }
+
+        private void problem(SheetColumn c, String message) {
+            problem(header.name(c), message);
+        }
+
+        private void problem(String column, String message) {
+            problems.add(new SheetProblem(file, row.line(), column, message));
+        }
+    }
+}

@@ -1,0 +1,63 @@
+package org.scalewright.model;
+
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Key numbers and note names of the piano keyboard: A0 = key 1, C4 = key 40, A4 = key 49,
+ * C8 = key 88; keys below 1 are extended bass (key 0 = G#0). Names are written with sharps.
+ */
+public final class KeyNames {
+    private static final String[] NAMES = {"A", "A#", "B", "C", "C#", "D", "D#", "E", "F", "F#", "G", "G#"};
+    private static final Pattern NAME = Pattern.compile("([A-Ga-g])([#b]?)(-?\\d+)");
+    private static final int[] SEMITONE_OF_LETTER = {0, 2, 3, 5, 7, 8, 10}; // A B C D E F G from A
+
+    private KeyNames() {
+    }
+
+    /** @return the note name of a key number, sharps on output (key 49 → {@code A4}, key 2 → {@code A#0}) */
+    public static String name(int key) {
+        int fromA0 = key - 1;
+        int idx = Math.floorMod(fromA0, 12);
+        // octave numbers change at C: key 4 (C1) is the first of octave 1
+        int octave = Math.floorDiv(fromA0 + 9, 12);
+        return NAMES[idx] + octave;
+    }
+
+    /**
+     * @param text a key number ({@code 49}) or note name ({@code A4}, {@code C#4}, {@code Bb2})
+     * @return the key number
+     * @throws IllegalArgumentException if the text is neither
+     */
+    public static int parse(String text) {
+        String t = text.trim();
+        if (t.matches("-?\\d+")) {
+            return Integer.parseInt(t);
+        }
+        Matcher m = NAME.matcher(t);
+        if (!m.matches()) {
+            throw new IllegalArgumentException("not a key number or note name: '" + text + "'");
+        }
+        int letter = "ABCDEFG".indexOf(m.group(1).toUpperCase(Locale.ROOT));
+        int semitone = SEMITONE_OF_LETTER[letter];
+        if (m.group(2).equals("#")) {
+            semitone++;
+        } else if (m.group(2).equals("b")) {
+            semitone--;
+        }
+        int octave = Integer.parseInt(m.group(3));
+        // semitone counted from A of the same "A-octave"; letters C..G belong to the octave that starts at C
+        int cBased = Math.floorMod(semitone - 3, 12);
+        // key of C in this octave: C(octave) = 4 + 12*(octave-1)
+        int keyOfC = 4 + 12 * (octave - 1);
+        int key = keyOfC + cBased;
+        if (m.group(2).equals("b") && m.group(1).equalsIgnoreCase("C")) {
+            key = keyOfC - 1; // Cb is B of the octave below
+        }
+        if (m.group(2).equals("#") && m.group(1).equalsIgnoreCase("B")) {
+            key = keyOfC + 12; // B# is C of the next octave
+        }
+        return key;
+    }
+}

@@ -1,0 +1,45 @@
+package org.scalewright.model;
+
+/**
+ * A unit of length used at the edges of the program (scale sheets, display).
+ * Inside the engine every length is in metres.
+ */
+public enum LengthUnit {
+    /** Millimetres; column suffix {@code _mm}. */
+    MM("mm", 1e-3),
+    /** Inches; column suffix {@code _in}. 1 in = 0.0254 m exactly (NIST SP 811, B.8). */
+    IN("in", UnitConversions.METRES_PER_INCH);
+
+    private final String suffix;
+    private final double metres;
+
+    LengthUnit(String suffix, double metres) {
+        this.suffix = suffix;
+        this.metres = metres;
+    }
+
+    /** @return the column suffix and display symbol, {@code mm} or {@code in} */
+    public String symbol() {
+        return suffix;
+    }
+
+    /** @param value a length in this unit @return the same length in metres */
+    public double toMetres(double value) {
+        return value * metres;
+    }
+
+    /** @param metresValue a length in metres @return the same length in this unit */
+    public double fromMetres(double metresValue) {
+        return metresValue / metres;
+    }
+
+    /** @return the unit whose suffix is {@code symbol} (case-insensitive), or null */
+    public static LengthUnit ofSymbol(String symbol) {
+        for (LengthUnit u : values()) {
+            if (u.suffix.equalsIgnoreCase(symbol)) {
+                return u;
+            }
+        }
+        return null;
+    }
+}

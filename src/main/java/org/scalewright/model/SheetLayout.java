@@ -1,0 +1,65 @@
+package org.scalewright.model;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * How a scale sheet was laid out: its columns in order and the unit of each length column,
+ * so that writing a scale keeps the columns and units it was read with.
+ *
+ * @param columns the sheet's columns in file order
+ * @param units   the unit of each length column present
+ */
+public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units) {
+
+    public SheetLayout {
+        columns = List.copyOf(columns);
+        units = Map.copyOf(units);
+    }
+
+    /** The layout used for a scale that has none yet: every column, lengths in millimetres. */
+    public static SheetLayout metricDefault() {
+        List<SheetColumn> cols = new ArrayList<>(List.of(SheetColumn.values()));
+        Map<SheetColumn, LengthUnit> u = new EnumMap<>(SheetColumn.class);
+        for (SheetColumn c : cols) {
+            if (c.isLength()) {
+                u.put(c, LengthUnit.MM);
+            }
+        }
+        return new SheetLayout(cols, u);
+    }
+
+    /** @return the unit of a length column: its own, else that of the speaking length, else mm */
+    public LengthUnit unitOf(SheetColumn column) {
+        LengthUnit u = units.get(column);
+        if (u != null) {
+            return u;
+        }
+        if (column == SheetColumn.WRAP2 && units.containsKey(SheetColumn.WRAP1)) {
+            return units.get(SheetColumn.WRAP1);
+        }
+        return units.getOrDefault(SheetColumn.SPEAKING_LENGTH, LengthUnit.MM);
+    }
+
+    /** @return true when the sheet has this column */
+    public boolean has(SheetColumn column) {
+        return columns.contains(column);
+    }
+
+    /** @return a layout with the column appended (if absent), lengths in {@link #unitOf} */
+    public SheetLayout with(SheetColumn column) {
+        if (has(column)) {
+            return this;
+        }
+        List<SheetColumn> cols = new ArrayList<>(columns);
+        cols.add(column);
+        Map<SheetColumn, LengthUnit> u = new EnumMap<>(SheetColumn.class);
+        u.putAll(units);
+        if (column.isLength()) {
+            u.put(column, unitOf(column));
+        }
+        return new SheetLayout(cols, u);
+    }
+}

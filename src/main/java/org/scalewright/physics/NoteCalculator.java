@@ -1,0 +1,54 @@
+package org.scalewright.physics;
+
+import org.scalewright.model.KeyNames;
+import org.scalewright.model.Materials;
+import org.scalewright.model.Note;
+import org.scalewright.model.PitchStandard;
+
+/**
+ * Computes one note's strings at a given pitch. The flags of a single note (bands,
+ * implausible values, strength-table range) are raised here; neighbour steps are the
+ * {@link ScaleAnalyzer}'s.
+ */
+public final class NoteCalculator {
+    private NoteCalculator() {
+    }
+
+    /**
+     * @param note     the note
+     * @param pitch    the scale's pitch standard
+     * @param settings materials, strength table, bands
+     * @return the note's result at its working pitch
+     */
+    public static NoteResult compute(Note note, PitchStandard pitch, AnalysisSettings settings) {
+        return computeAt(note, Pitch.working(note, pitch), settings);
+    }
+
+    /**
+     * @param note      the note
+     * @param frequency the pitch to compute at, Hz, &gt; 0
+     * @param settings  materials, strength table, bands
+     * @return the note's result at {@code frequency}
+     */
+    public static NoteResult computeAt(Note note, double frequency, AnalysisSettings settings) {
+        Materials m = settings.materials();
+        double d = note.wire().diameter();
+        double length = note.speakingLength();
+        double mu = StringPhysics.massPerLength(d, note.wrap(), m);
+        double k = StringPhysics.stiffness(d, length, m.youngsModulus());
+        double t = StringPhysics.tension(length, mu, frequency, k);
+        double sigma = StringPhysics.stress(t, d);
+        double sigmaB = settings.strength().strengthAt(d);
+        double pct = 100.0 * sigma / sigmaB;
+        double b = StringPhysics.inharmonicity(k, t);
+        double fb = StringPhysics.breakingFrequency(sigmaB, d, k, length, mu);
+        double headroom = Pitch.cents(frequency, fb);
+        double z = StringPhysics.impedance(t, mu);
+        double dl = StringPhysics.elongation(t, note.elongationLength(), d, m.youngsModulus());
+        StressBand band = settings.bands().bandOf(pct);
+        var flags = NoteFlags.of(note, pct, t, band, settings);
+        return new NoteResult(note.key(), KeyNames.name(note.key()), note.section(), frequency, note.strings(),
+                note.isWound(), d, mu, k, t, note.strings() * t, sigma, sigmaB, pct, b, headroom, fb, z, dl,
+                band, flags);
+    }
+}

@@ -1,0 +1,79 @@
+package org.scalewright.arch;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The layer rule of DESIGN §6: model → physics → design → io → chart → cli | app, each
+ * depending only on those before it; only cli writes to standard output; only app imports
+ * JavaFX; cli and app do not depend on each other. The root package holds only the launcher,
+ * which may call cli and app.
+ */
+class LayerRulesTest {
+    private static JavaClasses classes;
+
+    @BeforeAll
+    static void importClasses() {
+        classes = new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+                .importPackages("org.scalewright");
+    }
+
+    @Test
+    void layersDependOnlyOnTheLayersBeforeThem() {
+        layeredArchitecture().consideringOnlyDependenciesInLayers()
+                .layer("model").definedBy("org.scalewright.model..")
+                .layer("physics").definedBy("org.scalewright.physics..")
+                .layer("design").definedBy("org.scalewright.design..")
+                .layer("io").definedBy("org.scalewright.io..")
+                .layer("chart").definedBy("org.scalewright.chart..")
+                .layer("cli").definedBy("org.scalewright.cli..")
+                .layer("app").definedBy("org.scalewright.app..")
+                .layer("launcher").definedBy("org.scalewright")
+                .whereLayer("launcher").mayNotBeAccessedByAnyLayer()
+                .whereLayer("app").mayOnlyBeAccessedByLayers("launcher")
+                .whereLayer("cli").mayOnlyBeAccessedByLayers("launcher")
+                .whereLayer("chart").mayOnlyBeAccessedByLayers("cli", "app")
+                .whereLayer("io").mayOnlyBeAccessedByLayers("chart", "cli", "app")
+                .whereLayer("design").mayOnlyBeAccessedByLayers("io", "chart", "cli", "app")
+                .whereLayer("physics").mayOnlyBeAccessedByLayers("design", "io", "chart", "cli", "app")
+                .withOptionalLayers(true)
+                .check(classes);
+    }
+
+    @Test
+    void onlyTheCommandLineWritesToStandardOutput() {
+        noClasses().that().resideOutsideOfPackage("org.scalewright.cli..")
+                .should().accessField(System.class, "out")
+                .orShould().accessField(System.class, "err")
+                .check(classes);
+    }
+
+    @Test
+    void onlyTheDesktopAppUsesJavaFx() {
+        noClasses().that().resideOutsideOfPackage("org.scalewright.app..")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx..", "org.jfree.chart.fx..")
+                .check(classes);
+    }
+
+    @Test
+    void engineLayersDoNoInputOrOutput() {
+        noClasses().that().resideInAnyPackage("org.scalewright.model..", "org.scalewright.physics..",
+                        "org.scalewright.design..")
+                .should().dependOnClassesThat().resideInAnyPackage("java.io..", "java.nio.file..", "com.opencsv..")
+                .check(classes);
+    }
+
+    @Test
+    void chartsAreBuiltWithoutTheGuiToolkit() {
+        noClasses().that().resideInAPackage("org.scalewright.chart..")
+                .should().dependOnClassesThat().resideInAnyPackage("javafx..", "org.scalewright.app..")
+                .allowEmptyShould(true)
+                .check(classes);
+    }
+}
