@@ -43,6 +43,12 @@ public final class ScalewrightCommand implements Runnable {
             return ExitStatus.BAD_INPUT;
         });
         cl.setExecutionExceptionHandler(new Failures(err));
+        if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
+            err.println("error: unknown command '" + args[0] + "'; commands: "
+                    + String.join(", ", cl.getSubcommands().keySet()));
+            err.flush();
+            return ExitStatus.BAD_INPUT;
+        }
         int rc = cl.execute(args);
         out.flush();
         err.flush();
