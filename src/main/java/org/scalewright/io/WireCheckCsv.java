@@ -55,6 +55,11 @@ public final class WireCheckCsv {
         }
         if (s.advised() && s.hasPlan()) {
             c.add("  plan: " + s.stages().size() + " passes");
+            for (String line : planLines(s)) {
+                c.add("  " + line);
+            }
+        } else if (s.advised()) {
+            c.add("  no plan of up to " + StageAdvice.MAX_STAGES + " passes keeps every pass within the limits");
         }
         return c;
     }
@@ -84,9 +89,10 @@ public final class WireCheckCsv {
     public static List<String> planLines(StageAdvice s) {
         List<String> lines = new ArrayList<>();
         for (RaiseStage st : s.stages()) {
-            lines.add(String.format(Locale.ROOT, "pass %d: to %.0f %% of the raise; total %s -> %s N at the peak",
-                    st.number(), 100 * st.endFraction(), CsvCells.fixed(st.totalAtStart(), 0),
-                    CsvCells.fixed(st.totalAtPeak(), 0)));
+            lines.add(String.format(Locale.ROOT, "pass %d: to %.0f %% of the raise; total %s -> %s N at the peak; "
+                            + "highest %.1f %% of breaking strength (key %d)", st.number(), 100 * st.endFraction(),
+                    CsvCells.fixed(st.totalAtStart(), 0), CsvCells.fixed(st.totalAtPeak(), 0), st.maxPeakPct(),
+                    st.maxPeakKey()));
         }
         return lines;
     }

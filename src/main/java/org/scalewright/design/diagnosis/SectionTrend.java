@@ -6,12 +6,15 @@ import org.scalewright.design.SmoothTrend;
  * A robust smooth trend of one section that a group of notes standing out together cannot drag:
  * the {@link SmoothTrend} is fitted, the note furthest from it (by more than the margin) is left
  * out, and the trend fitted again, until no note left in is further out than the margin or half
- * the section has been left out. At the notes left out, the trend is interpolated linearly
+ * the section has been left out. This is done first with a wide trend (bandwidth 1: every local
+ * fit spans the section), then with the ordinary bandwidth, which gives the final trend; a note
+ * left out that lies within the margin of the trend fitted with it put back stays in. At the notes left out, the trend is interpolated linearly
  * between its neighbours (extrapolated by a straight line through the nearest five at the ends).
  *
  * <p>Why: a local robust fit (LOESS, bandwidth one half) follows a group of neighbouring notes
- * that fill a good part of its window; taking them out one at a time, worst first, leaves the
- * trend of the rest.
+ * that fill a good part of its window, bending into a ramp so that the normal notes beside the
+ * group look furthest out; the wide fit cannot bend that far, so the group's own notes are
+ * taken out first, one at a time, leaving the trend of the rest.
  *
  * @param keys     the section's key numbers, increasing
  * @param values   the fitted values
@@ -19,6 +22,8 @@ import org.scalewright.design.SmoothTrend;
  * @param leftOut  true where a note was left out of the final fit
  */
 public record SectionTrend(double[] keys, double[] values, double[] trend, boolean[] leftOut) {
+    /** Bandwidth of the first, wide trend. */
+    static final double WIDE_BANDWIDTH = 1.0;
 
     /**
      * @param keys      key numbers, strictly increasing
@@ -34,12 +39,47 @@ public record SectionTrend(double[] keys, double[] values, double[] trend, boole
         if (!(marginPct > 0)) {
             throw new IllegalArgumentException("margin must be > 0 %, was " + marginPct);
         }
+        boolean[] out = new boolean[keys.length];
+        // first against a wide trend, which a group of neighbours cannot bend into a ramp, then against
+        // the ordinary one
+        peel(keys, values, marginPct, out, WIDE_BANDWIDTH);
+        peel(keys, values, marginPct, out, SmoothTrend.DEFAULT_BANDWIDTH);
+        double[] trend = trendWithout(keys, values, out, SmoothTrend.DEFAULT_BANDWIDTH);
+        // a note the wide trend left out wrongly (on a curved section) comes back when, fitted with it
+        // put back, it lies within the margin of the trend
+        for (int round = 0; round < keys.length; round++) {
+            boolean back = false;
+            for (int i = 0; i < keys.length; i++) {
+                if (!out[i]) {
+                    continue;
+                }
+                out[i] = false;
+                double with = trendWithout(keys, values, out, SmoothTrend.DEFAULT_BANDWIDTH)[i];
+                if (Math.abs(deviationPct(values[i], with)) <= marginPct) {
+                    back = true;
+                } else {
+                    out[i] = true;
+                }
+            }
+            if (!back) {
+                break;
+            }
+            peel(keys, values, marginPct, out, SmoothTrend.DEFAULT_BANDWIDTH);
+            trend = trendWithout(keys, values, out, SmoothTrend.DEFAULT_BANDWIDTH);
+        }
+        return new SectionTrend(keys, values, trend, out);
+    }
+
+    /** Leaves out, worst first, the notes further than the margin from the trend of the rest. */
+    private static void peel(double[] keys, double[] values, double marginPct, boolean[] out, double bandwidth) {
         int n = keys.length;
-        boolean[] out = new boolean[n];
         int maxLeftOut = n / 2;
         int leftOut = 0;
-        double[] trend = trendWithout(keys, values, out);
+        for (boolean o : out) {
+            leftOut += o ? 1 : 0;
+        }
         while (n - leftOut > 3 && leftOut < maxLeftOut) {
+            double[] trend = trendWithout(keys, values, out, bandwidth);
             int worst = -1;
             double worstDev = 0;
             for (int i = 0; i < n; i++) {
@@ -52,13 +92,11 @@ public record SectionTrend(double[] keys, double[] values, double[] trend, boole
                 }
             }
             if (worst < 0 || worstDev <= marginPct) {
-                break;
+                return;
             }
             out[worst] = true;
             leftOut++;
-            trend = trendWithout(keys, values, out);
         }
-        return new SectionTrend(keys, values, trend, out);
     }
 
     public SectionTrend {
@@ -99,7 +137,7 @@ public record SectionTrend(double[] keys, double[] values, double[] trend, boole
         if (otherValues.length != keys.length) {
             throw new IllegalArgumentException("needs one value per key, had " + otherValues.length);
         }
-        return trendWithout(keys, otherValues, leftOut);
+        return trendWithout(keys, otherValues, leftOut, SmoothTrend.DEFAULT_BANDWIDTH);
     }
 
     /** @return 100 · (value − trend) / trend, % */
@@ -107,7 +145,7 @@ public record SectionTrend(double[] keys, double[] values, double[] trend, boole
         return 100.0 * (value - trend) / trend;
     }
 
-    private static double[] trendWithout(double[] keys, double[] values, boolean[] out) {
+    private static double[] trendWithout(double[] keys, double[] values, boolean[] out, double bandwidth) {
         int n = keys.length;
         int m = 0;
         for (boolean o : out) {
@@ -121,7 +159,7 @@ public record SectionTrend(double[] keys, double[] values, double[] trend, boole
                 v[j++] = values[i];
             }
         }
-        double[] fitted = SmoothTrend.fit(k, v);
+        double[] fitted = SmoothTrend.fit(k, v, bandwidth, SmoothTrend.DEFAULT_ROBUSTNESS_ITERATIONS);
         double[] trend = new double[n];
         for (int i = 0, j = 0; i < n; i++) {
             trend[i] = out[i] ? at(keys[i], k, fitted) : fitted[j++];

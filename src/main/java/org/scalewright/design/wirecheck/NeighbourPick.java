@@ -45,7 +45,9 @@ public record NeighbourPick(int index, boolean exact, boolean fellBack) {
                 if (below < 0) {
                     yield new NeighbourPick(0, false, false);
                 }
-                yield new NeighbourPick(d - offered[below] < offered[above] - d ? below : above, false, false);
+                // a tie (within 1 nm) goes to the larger diameter
+                boolean lower = d - offered[below] < offered[above] - d - 1e-9;
+                yield new NeighbourPick(lower ? below : above, false, false);
             }
         };
     }
