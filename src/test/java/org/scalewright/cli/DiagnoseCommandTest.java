@@ -1,0 +1,94 @@
+package org.scalewright.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code diagnose} run in-process through {@link ScalewrightCommand#run}. */
+class DiagnoseCommandTest {
+    @TempDir
+    Path dir;
+
+    private Path sheet(double hotFactor) throws IOException {
+        StringBuilder b = new StringBuilder("key,strings,length_mm,wire,section\n");
+        for (int k = 40; k <= 88; k++) {
+            double l = 610 * Math.pow(0.9445, k - 40) * (k == 70 ? hotFactor : 1.0);
+            b.append(k).append(",3,").append(String.format(java.util.Locale.ROOT, "%.1f", l)).append(",15,treble\n");
+        }
+        Path p = dir.resolve("sheet.csv");
+        Files.writeString(p, b);
+        return p;
+    }
+
+    @Test
+    void writesTheContractColumnsAndNamesThePlantedNote() throws IOException {
+        Path out = dir.resolve("d.csv");
+        CheckWireCommandTest.Run r = CheckWireCommandTest.run("diagnose", sheet(1.15).toString(), "--keys", "F5-C7",
+                "--out", out.toString());
+        assertEquals(0, r.rc(), r.err());
+        List<Map<String, String>> rows = CheckWireCommandTest.csv(out);
+        assertEquals(76 - 57 + 1, rows.size());
+        for (String col : List.of("key", "note", "stress_mpa", "break_pct", "headroom_cents", "break_hz",
+                "trend_deviation_pct", "stands_out")) {
+            assertTrue(rows.get(0).containsKey(col), col);
+        }
+        for (Map<String, String> m : rows) {
+            assertEquals(m.get("key").equals("70"), m.get("stands_out").equals("true"), "key " + m.get("key"));
+        }
+        assertTrue(r.out().contains("Finding (length and pitch)"), r.out());
+        assertTrue(r.out().contains("What the figures cannot see"));
+        assertTrue(r.out().contains("Cautions:"));
+        assertTrue(Files.readString(out).contains("# inspect: "));
+    }
+
+    @Test
+    void badArgumentsGiveExitTwoAndNoFile() throws IOException {
+        Path sheet = sheet(1.0);
+        Path out = dir.resolve("never.csv");
+        Path badTable = dir.resolve("t.csv");
+        Files.writeString(badTable, "diameter_mm\n0.8\n");
+        for (String[] args : List.of(new String[]{"diagnose", sheet.toString(), "--out", out.toString()},
+                new String[]{"diagnose", sheet.toString(), "--keys", "X9-C8", "--out", out.toString()},
+                new String[]{"diagnose", sheet.toString(), "--keys", "1-20", "--out", out.toString()},
+                new String[]{"diagnose", sheet.toString(), "--keys", "60-80", "--compare", badTable.toString(),
+                        "--out", out.toString()},
+                new String[]{"diagnose", sheet.toString(), "--keys", "60-80", "--margin", "0", "--out",
+                        out.toString()})) {
+            CheckWireCommandTest.Run r = CheckWireCommandTest.run(args);
+            assertEquals(2, r.rc(), String.join(" ", args) + "\n" + r.err());
+            assertTrue(r.err().startsWith("error: "), r.err());
+            assertFalse(Files.exists(out));
+        }
+    }
+
+    @Test
+    void contractRunOnTheDemoGrandMarksItsHotTrebleGroup() throws IOException {
+        assumeTrue(Files.exists(CheckWireCommandTest.GRAND), "demo grand not present");
+        Path out = dir.resolve("d.csv");
+        CheckWireCommandTest.Run r = CheckWireCommandTest.run("diagnose", CheckWireCommandTest.GRAND.toString(),
+                "--keys", "60-88", "--out", out.toString());
+        assertEquals(0, r.rc(), r.err());
+        List<Map<String, String>> rows = CheckWireCommandTest.csv(out);
+        assertEquals(29, rows.size());
+        // the planted group of the demo's README: keys 65–71 (64 as the shoulder)
+        for (Map<String, String> m : rows) {
+            int key = Integer.parseInt(m.get("key"));
+            if (key >= 65 && key <= 71) {
+                assertEquals("true", m.get("stands_out"), "key " + key);
+            }
+            if (key < 64 || key > 71) {
+                assertEquals("false", m.get("stands_out"), "key " + key);
+            }
+        }
+        assertTrue(r.out().contains("[brings it under]"), r.out());
+    }
+}
