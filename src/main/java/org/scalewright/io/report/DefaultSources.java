@@ -34,11 +34,13 @@ public final class DefaultSources {
      */
     public static List<String> lines(AnalysisSettings settings, WireAllowances allowances) {
         List<String> l = new ArrayList<>();
-        l.add("Tension of a stiff string with hinged ends, T = 4 L^2 mu f^2 - K, B = K / T and the partials "
-                + "f_n = n f1 sqrt((1 + B n^2)/(1 + B)): Fletcher 1964, J. Acoust. Soc. Am. 36, 203.");
+        l.add("Tension of a stiff string with hinged ends, T = 4 L² μ f² − K with K = π³ E d⁴ / (64 L²), "
+                + "inharmonicity B = K / T and partial n at n f₁ √((1 + B n²)/(1 + B)): Fletcher 1964, "
+                + "J. Acoust. Soc. Am. 36, 203.");
         l.add("Pitch standard A4 = 440 Hz unless the sheet or the user sets another: ISO 16:1975.");
-        l.add("Breaking strength - " + settings.strength().name() + ": "
-                + String.join(" ", settings.strength().sourceNotes()));
+        String name = settings.strength().name();
+        l.add("Breaking strength - " + name + ": " + String.join(" ", settings.strength().sourceNotes().stream()
+                .filter(n -> !n.strip().equals(name.strip())).toList()));
         for (String m : materials()) {
             l.add(m);
         }

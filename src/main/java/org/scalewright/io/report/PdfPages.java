@@ -6,6 +6,8 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
@@ -28,6 +30,17 @@ final class PdfPages implements AutoCloseable {
     private static final float TABLE_MAX = 8.5f;
     private static final float TABLE_MIN = 6.0f;
     private static final float PAD = 2.6f;
+
+    /**
+     * PDFBox looks for system fonts to render the standard-14 fonts on screen and logs each
+     * substitute it picks; a report only writes text, so those notes are kept off the console.
+     * Held here so that the logger (and its level) is not garbage-collected.
+     */
+    private static final Logger PDFBOX_FONTS = Logger.getLogger("org.apache.pdfbox.pdmodel.font");
+
+    static {
+        PDFBOX_FONTS.setLevel(Level.SEVERE);
+    }
 
     private final PDDocument doc = new PDDocument();
     private final PDRectangle size;
@@ -94,13 +107,13 @@ final class PdfPages implements AutoCloseable {
         ensure(30 + keepWith);
         y -= 6;
         line(bold, boldText, text, 13, MARGIN, new Color(0x1F3B5A));
-        y -= 5;
+        y -= 13 + 4;
         cs.setStrokingColor(new Color(0x1F3B5A));
         cs.setLineWidth(0.7f);
         cs.moveTo(MARGIN, y);
         cs.lineTo(MARGIN + width(), y);
         cs.stroke();
-        y -= 13;
+        y -= 9;
     }
 
     /** A bold line of body text. */
@@ -274,7 +287,8 @@ final class PdfPages implements AutoCloseable {
                 PdfText text = t.totalRows().contains(r) ? boldText : regularText;
                 data = Math.max(data, text.width(text.safe(t.rows().get(r).get(c)), fs));
             }
-            w[c] = Math.max(m, col.wrap() ? Math.min(data, 60 * fs) : data) + 2 * PAD;
+            // a little slack so that rounding never wraps a header word that was measured to fit
+            w[c] = Math.max(m, col.wrap() ? Math.min(data, 60 * fs) : data) + 2 * PAD + 0.5f;
             if (col.wrap()) {
                 wrapNatural += w[c];
             }
@@ -287,14 +301,6 @@ final class PdfPages implements AutoCloseable {
             for (int c = 0; c < n; c++) {
                 if (t.columns().get(c).wrap()) {
                     w[c] = Math.max(w[c] * room / wrapNatural, 14 * fs);
-                }
-            }
-        } else if (wrapNatural > 0) {
-            // give the wrapping columns the spare width
-            float spare = width() - total;
-            for (int c = 0; c < n; c++) {
-                if (t.columns().get(c).wrap()) {
-                    w[c] += spare * (w[c] / wrapNatural);
                 }
             }
         }
@@ -372,6 +378,9 @@ final class PdfPages implements AutoCloseable {
             try (PDPageContentStream f = new PDPageContentStream(doc, page, PDPageContentStream.AppendMode.APPEND,
                     true, true)) {
                 String left = regularText.safe(footer);
+                while (left.length() > 10 && regularText.width(left, 7.5f) > width() - 70) {
+                    left = left.substring(0, left.length() - 4) + "...";
+                }
                 String right = "page " + (i + 1) + " of " + total;
                 f.beginText();
                 f.setNonStrokingColor(Color.DARK_GRAY);

@@ -42,9 +42,8 @@ public final class PdfReportWriter {
      */
     public static byte[] toBytes(ReportDocument r) {
         PDRectangle size = r.units() == ReportUnits.IMPERIAL ? PDRectangle.LETTER : PDRectangle.A4;
-        try (PdfPages p = new PdfPages(size, r.title() + " - string scale report" + (r.program().isEmpty() ? ""
-                : " - " + r.program()))) {
-            p.info(r.title(), r.program());
+        try (PdfPages p = new PdfPages(size, r.title() + " - string scale report - Scalewright")) {
+            p.info(r.title(), "Scalewright");
             titlePage(p, r);
             curves(p, r);
             flags(p, r);
@@ -79,7 +78,7 @@ public final class PdfReportWriter {
         p.field("Units", r.units() == ReportUnits.IMPERIAL ? "imperial: inches (mm beside), lbf (N beside)"
                 : "metric: millimetres, newtons");
         if (r.reference().isPresent()) {
-            ReportDocument.Reference ref = r.reference().get();
+            ReportContent.Reference ref = r.reference().get();
             String t = ref.analysis().scale().title();
             p.field("Reference scale", ref.sheetName() + (t.isEmpty() ? "" : " (" + t + ")") + ", total tension "
                     + kN(ref.analysis().totalTension()) + "; drawn grey beside the working scale on the curves");
@@ -130,7 +129,7 @@ public final class PdfReportWriter {
         p.newPage();
         p.heading("Curves over the keyboard", 200);
         float each = (p.left() - 2 * 30) / 2;
-        for (ReportFigure f : r.curves()) {
+        for (ReportChart f : r.curves()) {
             p.image(f.image(), f.caption(), Math.max(each, 250));
         }
     }
@@ -177,8 +176,7 @@ public final class PdfReportWriter {
 
     private static void woundOrder(PdfPages p, ReportDocument r) throws IOException {
         boolean imp = r.units() == ReportUnits.IMPERIAL;
-        p.newPage();
-        p.heading("Wound-string order", 80);
+        p.heading("Wound-string order", 120);
         if (r.woundOrder().rows().isEmpty()) {
             p.paragraph("The scale has no wound strings.");
             return;
@@ -231,7 +229,7 @@ public final class PdfReportWriter {
             List<String> c = new ArrayList<>();
             for (String name : shown) {
                 String v = row.get(h.indexOf(name));
-                c.add(name.equals("size") && !v.isEmpty() && !v.equals(WireOrderCsv.TOTAL) ? "#" + v : v);
+                c.add(display(name, v));
             }
             rows.add(c);
         }
@@ -264,12 +262,13 @@ public final class PdfReportWriter {
                 + "sounds with the upper note's partial m (octave types 2:1, 4:2, 6:3 for m = 1, 2, 3), with each "
                 + "note's B at its working pitch. Cents from equal temperament, sharp positive. This is what the "
                 + "scale's inharmonicity asks of the tuner, not a tuning to copy.");
-        if (r.stretchFigure() != null) {
-            p.image(r.stretchFigure().image(), r.stretchFigure().caption(), 330);
+        if (r.stretchChart() != null) {
+            p.image(r.stretchChart().image(), r.stretchChart().caption(), 330);
         }
         List<Column> cols = new ArrayList<>(List.of(Column.number("key"), Column.text("note"),
                 Column.number("B"), Column.number("equal tempered Hz")));
-        for (StretchCurve c : r.stretch()) {
+        List<StretchCurve> ordered = r.content().stretchInOrder();
+        for (StretchCurve c : ordered) {
             cols.add(Column.number(c.octave().label() + " cents"));
         }
         cols.add(Column.number(chosen.octave().label() + " tuned Hz"));
@@ -278,7 +277,7 @@ public final class PdfReportWriter {
             StretchPoint pt = chosen.points().get(i);
             List<String> c = new ArrayList<>(List.of(Integer.toString(pt.key()), pt.noteName(),
                     String.format(Locale.ROOT, "%.2e", pt.inharmonicity()), Cells.f(pt.equalTemperedHz(), 2)));
-            for (StretchCurve sc : r.stretch()) {
+            for (StretchCurve sc : ordered) {
                 StretchPoint q = sc.points().get(i);
                 c.add(q.stretchCents().isPresent() ? String.format(Locale.ROOT, "%+.2f",
                         q.stretchCents().getAsDouble()) : "");
@@ -302,6 +301,27 @@ public final class PdfReportWriter {
         for (String s : r.sources()) {
             p.paragraph(s, 8.5f, true, 0);
         }
+    }
+
+    /** @return a wire-order cell as shown: sizes with '#', lengths and masses to fixed decimals */
+    private static String display(String column, String cell) {
+        if (cell.isEmpty()) {
+            return cell;
+        }
+        int places = switch (column) {
+            case "diameter_mm", "length_m" -> 3;
+            case "diameter_in" -> 4;
+            case "length_ft" -> 2;
+            case "mass_g" -> 1;
+            default -> -1;
+        };
+        if (places >= 0) {
+            return new java.math.BigDecimal(cell).setScale(places, java.math.RoundingMode.UNNECESSARY).toPlainString();
+        }
+        if (column.equals("size") && !cell.equals(WireOrderCsv.TOTAL)) {
+            return "#" + cell;
+        }
+        return cell;
     }
 
     private static String kN(double newtons) {

@@ -20,7 +20,7 @@ public final class StretchCsv {
      *               {@code stretch_M_N_cents} column; may be empty
      */
     public static CsvSheet sheet(StretchCurve chosen, List<StretchCurve> others, List<String> comments) {
-        List<String> h = new ArrayList<>(List.of("key", "note", "stretch_cents", "octave", "inharmonicity_b",
+        List<String> h = new ArrayList<>(List.of("key", "note", "stretch_cents", "octave_type", "inharmonicity_b",
                 "equal_tempered_hz", "tuned_hz"));
         for (StretchCurve o : others) {
             if (o.points().size() != chosen.points().size()) {
@@ -32,7 +32,7 @@ public final class StretchCsv {
         for (int i = 0; i < chosen.points().size(); i++) {
             StretchPoint p = chosen.points().get(i);
             List<String> c = new ArrayList<>(List.of(Integer.toString(p.key()), p.noteName(),
-                    cents(p), chosen.octave().label(), CsvCells.scientific(p.inharmonicity()),
+                    cents(p), octaveCell(chosen), CsvCells.scientific(p.inharmonicity()),
                     CsvCells.fixed(p.equalTemperedHz(), 4),
                     p.tunedHz().isPresent() ? CsvCells.fixed(p.tunedHz().getAsDouble(), 4) : ""));
             for (StretchCurve o : others) {
@@ -49,6 +49,11 @@ public final class StretchCsv {
             com.add(p);
         }
         return new CsvSheet(com, h, rows);
+    }
+
+    /** @return e.g. {@code 2:1 (m=1)}: with the words, a spreadsheet cannot take it for a time of day */
+    static String octaveCell(StretchCurve c) {
+        return c.octave().label() + " (m=" + c.octave().upperPartial() + ")";
     }
 
     private static String cents(StretchPoint p) {
