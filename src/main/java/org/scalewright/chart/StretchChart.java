@@ -2,18 +2,15 @@ package org.scalewright.chart;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
 import java.awt.geom.Ellipse2D;
 import java.util.List;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
-import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
@@ -23,7 +20,6 @@ import org.jfree.data.xy.XYSeriesCollection;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.design.stretch.TuningStretch;
-import org.scalewright.model.KeyNames;
 
 /**
  * The tuning-stretch curve: cents from equal temperament over key number, one line per octave
@@ -33,9 +29,6 @@ import org.scalewright.model.KeyNames;
 public final class StretchChart {
     private static final Color[] LINE = {new Color(0x1F4E79), new Color(0xB5562B), new Color(0x3C7A3A)};
     private static final float[][] DASH = {null, {6f, 3f}, {1.5f, 2.5f}};
-    private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 13);
-    private static final Font AXIS = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
-    private static final Font TICKS = new Font(Font.SANS_SERIF, Font.PLAIN, 10);
 
     private StretchChart() {
     }
@@ -62,15 +55,18 @@ public final class StretchChart {
             }
             data.addSeries(s);
         }
-        NumberAxis keys = new CTickAxis("key number (note)");
+        NumberAxis keys = new KeyAxis();
         keys.setRange(Math.min(minKey, 1) - 1, Math.max(maxKey, 88) + 1);
-        keys.setTickUnit(new NumberTickUnit(12, new KeyTickFormat()));
-        keys.setLabelFont(AXIS);
-        keys.setTickLabelFont(TICKS);
+        keys.setLabelFont(CurveLook.AXIS);
+        keys.setTickLabelFont(CurveLook.TICKS);
+        keys.setLabelPaint(CurveLook.TEXT);
+        keys.setTickLabelPaint(CurveLook.TEXT);
         NumberAxis cents = new NumberAxis("stretch, cents from equal temperament");
         cents.setAutoRangeIncludesZero(true);
-        cents.setLabelFont(AXIS);
-        cents.setTickLabelFont(TICKS);
+        cents.setLabelFont(CurveLook.AXIS);
+        cents.setTickLabelFont(CurveLook.TICKS);
+        cents.setLabelPaint(CurveLook.TEXT);
+        cents.setTickLabelPaint(CurveLook.TEXT);
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, true);
         for (int i = 0; i < curves.size(); i++) {
             int look = curves.get(i).octave().ordinal() % LINE.length;
@@ -82,67 +78,29 @@ public final class StretchChart {
         }
         r.setDrawSeriesLineAsPath(false);
         XYPlot plot = new XYPlot(data, keys, cents, r);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(new Color(0xDDDDDD));
-        plot.setRangeGridlinePaint(new Color(0xDDDDDD));
+        plot.setBackgroundPaint(CurveLook.PLOT);
+        plot.setDomainGridlinePaint(CurveLook.GRID);
+        plot.setRangeGridlinePaint(CurveLook.GRID);
+        plot.setOutlinePaint(CurveLook.GRID);
         IntervalMarker band = new IntervalMarker(TuningStretch.EQUAL_TEMPERED_BAND.first() - 0.5,
                 TuningStretch.EQUAL_TEMPERED_BAND.last() + 0.5, new Color(0xE9E4D4));
         band.setLabel("equal temperament A3-A4");
-        band.setLabelFont(TICKS);
+        band.setLabelFont(CurveLook.MARKER);
+        band.setLabelPaint(CurveLook.TEXT);
         band.setLabelAnchor(RectangleAnchor.TOP);
         band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
         plot.addDomainMarker(band, Layer.BACKGROUND);
         ValueMarker zero = new ValueMarker(0, Color.GRAY, new BasicStroke(0.8f));
         plot.addRangeMarker(zero, Layer.BACKGROUND);
-        JFreeChart chart = new JFreeChart(null, TITLE, plot, true);
-        chart.setTitle(new TextTitle((title == null || title.isEmpty() ? "" : title + ": ")
-                + "tuning stretch from inharmonicity", TITLE));
-        chart.setBackgroundPaint(Color.WHITE);
+        JFreeChart chart = new JFreeChart(title == null || title.isEmpty() ? "Tuning stretch from inharmonicity"
+                : title + ": tuning stretch from inharmonicity", CurveLook.TITLE, plot, true);
+        chart.getTitle().setHorizontalAlignment(org.jfree.chart.ui.HorizontalAlignment.LEFT);
+        chart.setBackgroundPaint(CurveLook.BACKGROUND);
+        chart.getTitle().setPaint(CurveLook.TEXT);
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.BOTTOM);
-        legend.setItemFont(TICKS);
+        legend.setItemFont(CurveLook.TICKS);
+        legend.setBackgroundPaint(CurveLook.BACKGROUND);
         return chart;
-    }
-
-    /** A key-number axis whose ticks fall on the C keys (4 = C1, 40 = C4, 88 = C8). */
-    static final class CTickAxis extends NumberAxis {
-        private static final long serialVersionUID = 1L;
-
-        CTickAxis(String label) {
-            super(label);
-        }
-
-        @Override
-        protected double calculateLowestVisibleTickValue() {
-            double unit = getTickUnit().getSize();
-            double low = getRange().getLowerBound();
-            return 4 + Math.ceil((low - 4) / unit) * unit;
-        }
-
-        @Override
-        protected int calculateVisibleTickCount() {
-            double unit = getTickUnit().getSize();
-            return (int) Math.floor((getRange().getUpperBound() - calculateLowestVisibleTickValue()) / unit) + 1;
-        }
-    }
-
-    /** Key-number ticks with the note name: {@code 40 C4}. */
-    static final class KeyTickFormat extends java.text.NumberFormat {
-        private static final long serialVersionUID = 1L;
-
-        @Override
-        public StringBuffer format(double number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
-            return format(Math.round(number), toAppendTo, pos);
-        }
-
-        @Override
-        public StringBuffer format(long number, StringBuffer toAppendTo, java.text.FieldPosition pos) {
-            return toAppendTo.append(number).append(' ').append(KeyNames.name((int) number));
-        }
-
-        @Override
-        public Number parse(String source, java.text.ParsePosition parsePosition) {
-            return null;
-        }
     }
 }
