@@ -11,7 +11,6 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Locale;
 import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
 import javax.imageio.ImageTypeSpecifier;
@@ -23,6 +22,7 @@ import javax.imageio.stream.ImageOutputStream;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
+import org.jfree.svg.ViewBox;
 import org.scalewright.io.report.ReportChart;
 import org.scalewright.io.report.ReportContent;
 import org.scalewright.io.report.ReportUnits;
@@ -90,17 +90,15 @@ public final class ChartFiles {
              ImageOutputStream out = ImageIO.createImageOutputStream(bytes)) {
             ImageWriteParam param = writer.getDefaultWriteParam();
             IIOMetadata meta = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(img), param);
-            String mmPerPixel = String.format(Locale.ROOT, "%.6f", 25.4 / dpi);
-            IIOMetadataNode h = new IIOMetadataNode("HorizontalPixelSize");
-            h.setAttribute("value", mmPerPixel);
-            IIOMetadataNode v = new IIOMetadataNode("VerticalPixelSize");
-            v.setAttribute("value", mmPerPixel);
-            IIOMetadataNode dim = new IIOMetadataNode("Dimension");
-            dim.appendChild(h);
-            dim.appendChild(v);
-            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_1.0");
-            root.appendChild(dim);
-            meta.mergeTree("javax_imageio_1.0", root);
+            // the PNG pHYs chunk: pixels per metre (1 in = 0.0254 m)
+            String perMetre = Long.toString(Math.round(dpi / 0.0254));
+            IIOMetadataNode phys = new IIOMetadataNode("pHYs");
+            phys.setAttribute("pixelsPerUnitXAxis", perMetre);
+            phys.setAttribute("pixelsPerUnitYAxis", perMetre);
+            phys.setAttribute("unitSpecifier", "meter");
+            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
+            root.appendChild(phys);
+            meta.mergeTree("javax_imageio_png_1.0", root);
             writer.setOutput(out);
             writer.write(null, new IIOImage(img, null, meta), param);
             out.flush();
@@ -121,8 +119,11 @@ public final class ChartFiles {
     public static String svg(JFreeChart chart, int width, int height) {
         check(width, height);
         SVGGraphics2D g = new SVGGraphics2D(width, height, SVGUnits.PT);
+        g.setDefsKeyPrefix("chart-"); // fixed ids (the default takes the clock): the same chart gives the same file
         chart.draw(g, new Rectangle2D.Double(0, 0, width, height));
-        return g.getSVGDocument();
+        // the view box maps the drawing's units onto the size in points, so it fills the page size
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n"
+                + g.getSVGElement(null, true, new ViewBox(0, 0, width, height), null, null) + "\n";
     }
 
     /** @return {@link #svg} as UTF-8 bytes */
