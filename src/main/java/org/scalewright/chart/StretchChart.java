@@ -89,6 +89,7 @@ public final class StretchChart {
         band.setLabelPaint(CurveLook.TEXT);
         band.setLabelAnchor(RectangleAnchor.TOP);
         band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
+        band.setLabelBackgroundColor(new Color(0, 0, 0, 0));
         plot.addDomainMarker(band, Layer.BACKGROUND);
         ValueMarker zero = new ValueMarker(0, Color.GRAY, new BasicStroke(0.8f));
         plot.addRangeMarker(zero, Layer.BACKGROUND);

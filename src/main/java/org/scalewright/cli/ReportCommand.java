@@ -103,7 +103,11 @@ public final class ReportCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new UserError("cannot write the report into " + out + ": " + Outputs.describe(e));
         }
-        print(content, written, spec.commandLine().getOut());
+        java.util.Map<String, Integer> sizes = new java.util.HashMap<>();
+        for (String name : files.names()) {
+            sizes.put(name, files.content(name).length);
+        }
+        print(content, written, sizes, spec.commandLine().getOut());
         return ExitStatus.OK;
     }
 
@@ -133,7 +137,8 @@ public final class ReportCommand implements Callable<Integer> {
         return a;
     }
 
-    private static void print(ReportContent c, List<Path> written, PrintWriter w) {
+    private static void print(ReportContent c, List<Path> written, java.util.Map<String, Integer> sizes,
+                              PrintWriter w) {
         ScaleAnalysis a = c.analysis();
         w.println(c.title() + ": " + a.notes().size() + " notes, A4 = " + Formats.trim(a.scale().pitch().a4())
                 + " Hz, strength table: " + a.settings().strength().name());
@@ -153,8 +158,10 @@ public final class ReportCommand implements Callable<Integer> {
         }
         w.println();
         w.println("wrote " + written.size() + " files into " + written.get(0).getParent() + ":");
+        TextTable t = new TextTable("file", ">bytes");
         for (Path p : written) {
-            w.println("  " + p.getFileName());
+            t.row(p.getFileName(), sizes.getOrDefault(p.getFileName().toString(), 0));
         }
+        t.print(w);
     }
 }

@@ -168,7 +168,9 @@ final class PdfPages implements AutoCloseable {
             h = maxHeight;
             w = h * image.getWidth() / image.getHeight();
         }
-        ensure(h + 18);
+        float captionHeight = caption == null || caption.isEmpty() ? 0
+                : wrap(regularText, caption, 8, width()).size() * 8 * 1.3f + 4;
+        ensure(h + 10 + captionHeight); // the caption stays with its figure
         PDImageXObject x = LosslessFactory.createFromImage(doc, image);
         cs.drawImage(x, MARGIN + (width() - w) / 2, y - h, w, h);
         y -= h + 10;
