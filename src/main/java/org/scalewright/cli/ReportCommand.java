@@ -32,9 +32,10 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code report}: the PDF report, charts and order sheets of an instrument, into one directory. */
 @Command(name = "report", mixinStandardHelpOptions = true,
-        description = {"Write a report of a scale into a directory: report.pdf; the curves as PNG and SVG",
-                "(tension, break-percent, inharmonicity, stretch); results.csv, schedule.csv,",
-                "wound-order.csv, wire-order.csv and stretch.csv. Nothing is written if any input is bad."})
+        description = {"Write a report of a scale into a directory.",
+                "Writes report.pdf; the curves as PNG and SVG (tension, break-percent, inharmonicity, "
+                        + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv. "
+                        + "Nothing is written if any input is bad."})
 public final class ReportCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;

@@ -22,9 +22,10 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stretch}: the tuning stretch a scale's inharmonicity asks for. */
 @Command(name = "stretch", mixinStandardHelpOptions = true,
-        description = {"Tuning stretch from inharmonicity: keys A3-A4 (37-49) at equal temperament, each",
-                "octave outward tuned so that the lower note's partial 2m sounds with the upper note's",
-                "partial m, with each note's B at its working pitch. Cents from equal temperament."})
+        description = {"Tuning stretch from the scale's inharmonicity, cents from equal temperament.",
+                "Keys A3-A4 (37-49) stay at equal temperament; each octave outward is tuned so that the lower "
+                        + "note's partial 2m sounds with the upper note's partial m, with each note's B at its "
+                        + "working pitch."})
 public final class StretchCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
