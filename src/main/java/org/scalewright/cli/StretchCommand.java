@@ -1,0 +1,97 @@
+package org.scalewright.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.scalewright.design.stretch.OctaveType;
+import org.scalewright.design.stretch.StretchCurve;
+import org.scalewright.design.stretch.StretchPoint;
+import org.scalewright.design.stretch.TuningStretch;
+import org.scalewright.io.CsvCells;
+import org.scalewright.io.report.CsvSheet;
+import org.scalewright.io.report.StretchCsv;
+import org.scalewright.model.Scale;
+import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.physics.ScaleAnalyzer;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code stretch}: the tuning stretch a scale's inharmonicity asks for. */
+@Command(name = "stretch", mixinStandardHelpOptions = true,
+        description = {"Tuning stretch from the scale's inharmonicity, cents from equal temperament.",
+                "Keys A3-A4 (37-49) stay at equal temperament; each octave outward is tuned so that the lower "
+                        + "note's partial 2m sounds with the upper note's partial m, with each note's B at its "
+                        + "working pitch."})
+public final class StretchCommand implements Callable<Integer> {
+    @Mixin
+    Inputs inputs;
+
+    @Option(names = "--octave", paramLabel = "2:1|4:2|6:3", defaultValue = "2:1",
+            description = "octave type tuned beatless (default: ${DEFAULT-VALUE})")
+    String octave;
+
+    @Option(names = "--out", paramLabel = "FILE.csv",
+            description = "write key, note, stretch_cents (and pitches, B) as CSV")
+    Path out;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        OctaveType type = octaveType(octave);
+        Scale scale = inputs.scale();
+        ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
+        StretchCurve curve = TuningStretch.of(a, type);
+        CsvSheet sheet = StretchCsv.sheet(curve, List.of(), header(scale));
+        PrintWriter w = spec.commandLine().getOut();
+        print(scale, curve, w);
+        if (out != null) {
+            Outputs.csv(out, sheet.comments(), sheet.header(), sheet.rows());
+            w.println();
+            w.println("wrote " + out);
+        }
+        return ExitStatus.OK;
+    }
+
+    static OctaveType octaveType(String text) {
+        try {
+            return OctaveType.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw new UserError("--octave: " + e.getMessage());
+        }
+    }
+
+    private static List<String> header(Scale s) {
+        return s.title().isEmpty() ? List.of() : List.of("scale: " + s.title());
+    }
+
+    private static void print(Scale s, StretchCurve c, PrintWriter w) {
+        w.println((s.title().isEmpty() ? "Scale" : s.title()) + ": tuning stretch for " + c.octave().label()
+                + " octaves, A4 = " + Formats.trim(c.a4()) + " Hz, keys 37-49 (A3-A4) at equal temperament");
+        w.println();
+        TextTable t = new TextTable(">key", "note", ">B", ">equal tempered Hz", ">tuned Hz", ">stretch cents");
+        for (StretchPoint p : c.points()) {
+            t.row(p.key(), p.noteName(), Formats.b(p.inharmonicity()), Formats.f(p.equalTemperedHz(), 3),
+                    p.tunedHz().isPresent() ? Formats.f(p.tunedHz().getAsDouble(), 3) : "-",
+                    p.stretchCents().isPresent() ? String.format(java.util.Locale.ROOT, "%+.2f",
+                            p.stretchCents().getAsDouble()) : "-");
+        }
+        t.print(w);
+        for (String p : c.problems()) {
+            w.println(p);
+        }
+        StretchPoint low = c.points().get(0);
+        StretchPoint high = c.points().get(c.points().size() - 1);
+        if (low.stretchCents().isPresent() && high.stretchCents().isPresent()) {
+            w.println();
+            w.println("Stretch from " + CsvCells.fixed(low.stretchCents().getAsDouble(), 1) + " cents at "
+                    + low.noteName() + " to " + CsvCells.fixed(high.stretchCents().getAsDouble(), 1) + " cents at "
+                    + high.noteName() + ".");
+        }
+    }
+}

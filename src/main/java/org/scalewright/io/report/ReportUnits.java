@@ -1,0 +1,53 @@
+package org.scalewright.io.report;
+
+import java.util.Locale;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.UnitConversions;
+
+/**
+ * The units a report shows lengths and forces in. Metric: millimetres and newtons. Imperial:
+ * inches and pounds-force, with millimetres and newtons beside them.
+ */
+public enum ReportUnits {
+    /** Millimetres, newtons, metres of wire. */
+    METRIC(LengthUnit.MM),
+    /** Inches (with mm beside), pounds-force (with N beside), feet of wire (with m beside). */
+    IMPERIAL(LengthUnit.IN);
+
+    /** Metres per foot, 0.3048 m exactly (NIST SP 811, B.8). */
+    public static final double METRES_PER_FOOT = 12 * UnitConversions.METRES_PER_INCH;
+
+    private final LengthUnit length;
+
+    ReportUnits(LengthUnit length) {
+        this.length = length;
+    }
+
+    /** @return the unit lengths are shown in */
+    public LengthUnit length() {
+        return length;
+    }
+
+    /** @return the units of a scale sheet whose speaking lengths are in {@code unit} */
+    public static ReportUnits of(LengthUnit unit) {
+        return unit == LengthUnit.IN ? IMPERIAL : METRIC;
+    }
+
+    /**
+     * @param text {@code metric} or {@code imperial} (case ignored)
+     * @throws IllegalArgumentException naming the text and the choices
+     */
+    public static ReportUnits parse(String text) {
+        String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
+        return switch (t) {
+            case "metric" -> METRIC;
+            case "imperial" -> IMPERIAL;
+            default -> throw new IllegalArgumentException("units must be metric or imperial, was '" + text + "'");
+        };
+    }
+
+    /** @return {@code metric} or {@code imperial} */
+    public String word() {
+        return name().toLowerCase(Locale.ROOT);
+    }
+}
