@@ -5,6 +5,10 @@ import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 
 /**
  * Writes files so that a reader never sees a half-written one: the content goes to a
@@ -13,6 +17,19 @@ import java.nio.file.StandardCopyOption;
  */
 public final class AtomicFiles {
     private AtomicFiles() {
+    }
+
+    /**
+     * A temporary file is created readable by its owner only; give the new file the old one's
+     * permissions, or the usual rw-r--r-- for a new file, where the file system has them.
+     */
+    private static void keepPermissions(Path target, Path tmp) throws IOException {
+        if (!Files.getFileStore(tmp).supportsFileAttributeView(PosixFileAttributeView.class)) {
+            return;
+        }
+        Set<PosixFilePermission> perms = Files.exists(target) ? Files.getPosixFilePermissions(target)
+                : PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(tmp, perms);
     }
 
     /**
@@ -27,6 +44,7 @@ public final class AtomicFiles {
         Path tmp = Files.createTempFile(dir, "." + abs.getFileName(), ".tmp");
         try {
             Files.write(tmp, content);
+            keepPermissions(abs, tmp);
             if (keepBackup && Files.exists(abs)) {
                 Files.copy(abs, dir.resolve(abs.getFileName() + ".bak"), StandardCopyOption.REPLACE_EXISTING);
             }
