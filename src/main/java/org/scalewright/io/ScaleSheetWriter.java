@@ -39,8 +39,9 @@ public final class ScaleSheetWriter {
             out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
         }
         out.write("# a4_hz: " + CsvCells.number(scale.pitch().a4()) + "\n");
+        // quoting and quote doubling are done by quoteWhereNeeded alone; the CSVWriter must not escape again
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.NO_QUOTE_CHARACTER,
-                ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n") {
+                ICSVWriter.NO_ESCAPE_CHARACTER, "\n") {
             @Override
             public void writeNext(String[] line) {
                 super.writeNext(quoteWhereNeeded(line), false);
