@@ -59,6 +59,10 @@ class UnitConversionsTest {
                 assertEquals(v, u.fromMetres(u.toMetres(v)), Math.ulp(v) * 4, u + " " + v);
             }
         }
+        // a millimetre value converts like the decimal literal in metres (division by the exact 1000)
+        assertEquals(1.3e-3, LengthUnit.MM.toMetres(1.3), 0.0);
+        assertEquals(0.925e-3, LengthUnit.MM.toMetres(0.925), 0.0);
+        assertEquals(1.3, LengthUnit.MM.fromMetres(1.3e-3), 0.0);
         assertEquals("mm", LengthUnit.MM.symbol());
         assertEquals("in", LengthUnit.IN.symbol());
         assertSame(LengthUnit.IN, LengthUnit.ofSymbol("IN"));
