@@ -13,6 +13,7 @@ import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.model.SheetLayout;
+import org.scalewright.model.WrapMetal;
 
 /**
  * Writes a scale as a scale sheet (DESIGN §4), keeping the columns and units it was read with
@@ -90,7 +91,10 @@ public final class ScaleSheetWriter {
                 if (n.wrap().isDouble()) {
                     l = l.with(SheetColumn.WRAP2);
                 }
-                l = l.with(SheetColumn.WRAP_METAL);
+                // copper is what a blank or missing wrap_metal means: add the column only for other metals
+                if (n.wrap().metal() != WrapMetal.COPPER) {
+                    l = l.with(SheetColumn.WRAP_METAL);
+                }
             }
             l = n.pitchHz().isPresent() ? l.with(SheetColumn.PITCH_HZ) : l;
             l = n.cents() != 0 ? l.with(SheetColumn.CENTS) : l;
