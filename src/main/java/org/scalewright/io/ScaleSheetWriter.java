@@ -4,11 +4,15 @@ import com.opencsv.CSVWriter;
 import com.opencsv.ICSVWriter;
 import java.io.IOException;
 import java.io.StringWriter;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
+import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
@@ -39,7 +43,7 @@ public final class ScaleSheetWriter {
         if (!scale.title().isEmpty()) {
             out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
         }
-        out.write("# a4_hz: " + CsvCells.number(scale.pitch().a4()) + "\n");
+        out.write("# a4_hz: " + exact(scale.pitch().a4(), x -> x) + "\n");
         // quoting and quote doubling are done by quoteWhereNeeded alone; the CSVWriter must not escape again
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.NO_QUOTE_CHARACTER,
                 ICSVWriter.NO_ESCAPE_CHARACTER, "\n") {
@@ -118,8 +122,8 @@ public final class ScaleSheetWriter {
             case WRAP1 -> n.isWound() ? length(n.wrap().inner(), c, layout) : "";
             case WRAP2 -> n.isWound() && n.wrap().isDouble() ? length(n.wrap().outer(), c, layout) : "";
             case WRAP_METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
-            case PITCH_HZ -> optional(n.pitchHz(), 1);
-            case CENTS -> n.cents() == 0 ? "" : CsvCells.number(n.cents());
+            case PITCH_HZ -> n.pitchHz().isPresent() ? exact(n.pitchHz().getAsDouble(), x -> x) : "";
+            case CENTS -> n.cents() == 0 ? "" : exact(n.cents(), x -> x);
             case STRIKE -> optionalLength(n.strikePoint(), c, layout);
             case TOTAL_LENGTH -> optionalLength(n.stretchedLength(), c, layout);
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
@@ -129,14 +133,29 @@ public final class ScaleSheetWriter {
     }
 
     private static String length(double metres, SheetColumn c, SheetLayout layout) {
-        return CsvCells.number(layout.unitOf(c).fromMetres(metres));
+        LengthUnit unit = layout.unitOf(c);
+        return exact(metres, unit::toMetres, unit.fromMetres(metres));
+    }
+
+    private static String exact(double value, DoubleUnaryOperator readBack) {
+        return exact(value, readBack, value);
+    }
+
+    /**
+     * @return the shortest decimal for {@code shown} with 10 to 17 significant digits that the reader
+     *         turns back into exactly {@code value} ({@code readBack} of the parsed text), so that
+     *         read → write → read keeps every value as it was, not only the first 10 digits
+     */
+    private static String exact(double value, DoubleUnaryOperator readBack, double shown) {
+        String text = CsvCells.number(shown);
+        for (int digits = 11; digits <= 17 && readBack.applyAsDouble(Double.parseDouble(text)) != value; digits++) {
+            text = new BigDecimal(shown).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+        }
+        return text;
     }
 
     private static String optionalLength(OptionalDouble v, SheetColumn c, SheetLayout layout) {
         return v.isPresent() ? length(v.getAsDouble(), c, layout) : "";
     }
 
-    private static String optional(OptionalDouble v, double factor) {
-        return v.isPresent() ? CsvCells.number(v.getAsDouble() * factor) : "";
-    }
 }
