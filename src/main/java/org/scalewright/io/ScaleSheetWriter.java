@@ -127,9 +127,14 @@ public final class ScaleSheetWriter {
             case STRIKE -> optionalLength(n.strikePoint(), c, layout);
             case TOTAL_LENGTH -> optionalLength(n.stretchedLength(), c, layout);
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
-            case SECTION -> CsvCells.safeText(n.section());
-            case REMARK -> CsvCells.safeText(n.remark());
+            case SECTION -> CsvCells.safeText(oneLine(n.section()));
+            case REMARK -> CsvCells.safeText(oneLine(n.remark()));
         };
+    }
+
+    /** A sheet row is one line (the reader reads line by line): line breaks in free text become spaces. */
+    private static String oneLine(String text) {
+        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ');
     }
 
     private static String length(double metres, SheetColumn c, SheetLayout layout) {
