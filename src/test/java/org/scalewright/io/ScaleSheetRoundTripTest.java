@@ -149,5 +149,52 @@ class ScaleSheetRoundTripTest {
         Scale first = read("key,strings,length_mm,wire_in\n1,1,1987.123456789,0.0591\n2,1,1234.5678901234,0.05905\n");
         Scale second = read(ScaleSheetWriter.toText(first));
         assertEquals(first, second, ScaleSheetWriter.toText(first));
+        assertTrue(ScaleSheetWriter.toText(first).contains("\n2,1,1234.5678901234,0.05905\n"));
+        // computed values (as a design tool makes them) come back within a unit in the last place, in mm and
+        // in inches (not always exactly: not every double in metres is a decimal in mm or inches divided out),
+        // and a second write → read changes nothing
+        java.util.Random rnd = new java.util.Random(7);
+        List<Note> notes = new ArrayList<>();
+        for (int k = 1; k <= 88; k++) {
+            double d = (0.8 + rnd.nextDouble()) * 1e-3;
+            Note n = Note.plain(k, 3, 0.05 + rnd.nextDouble() * 2, CoreWire.ofDiameter(d))
+                    .withPitch(OptionalDouble.of(27.5 * Math.pow(2, (k - 1) / 12.0) * (1 + rnd.nextGaussian() * 1e-3)),
+                            rnd.nextGaussian() * 3);
+            notes.add(k < 30 ? n.withWrap(new Wrap(d * rnd.nextDouble(), d * rnd.nextDouble(), WrapMetal.COPPER)) : n);
+        }
+        Scale computed = new Scale("computed", new PitchStandard(440 + rnd.nextDouble()), notes, null);
+        Scale inches = read(INCH).withNotes(notes).withPitch(computed.pitch());
+        for (Scale sc : List.of(computed, inches)) {
+            Scale back = read(ScaleSheetWriter.toText(sc));
+            assertEquals(sc.pitch(), back.pitch());
+            for (int i = 0; i < notes.size(); i++) {
+                assertClose(sc.notes().get(i), back.notes().get(i));
+            }
+            assertEquals(back, read(ScaleSheetWriter.toText(back)));
+        }
+    }
+
+    private static void assertClose(Note a, Note b) {
+        String what = a.toString();
+        assertEquals(a.speakingLength(), b.speakingLength(), Math.ulp(a.speakingLength()), what);
+        assertEquals(a.wire().diameter(), b.wire().diameter(), Math.ulp(a.wire().diameter()), what);
+        assertEquals(a.pitchHz().getAsDouble(), b.pitchHz().getAsDouble(), 0, what);
+        assertEquals(a.cents(), b.cents(), 0, what);
+        assertEquals(a.isWound(), b.isWound(), what);
+        if (a.isWound()) {
+            assertEquals(a.wrap().inner(), b.wrap().inner(), Math.ulp(a.wrap().inner()), what);
+            assertEquals(a.wrap().outer(), b.wrap().outer(), Math.ulp(a.wrap().outer()), what);
+        }
+    }
+
+    @Test
+    @DisplayName("a remark with a line break is written so that the sheet still loads")
+    void lineBreakInRemark() throws Exception {
+        Scale s = new Scale("", null, List.of(Note.plain(40, 3, 0.62, CoreWire.ofDiameter(1e-3))
+                .withRemark("first line\nsecond line").withSection("ten\r\nor")), null);
+        Scale back = read(ScaleSheetWriter.toText(s));
+        assertEquals(1, back.notes().size());
+        assertEquals("first line second line", back.note(40).orElseThrow().remark());
+        assertEquals("ten or", back.note(40).orElseThrow().section());
     }
 }
