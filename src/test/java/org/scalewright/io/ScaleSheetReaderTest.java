@@ -174,7 +174,12 @@ class ScaleSheetReaderTest {
         only(HEADER + "1,1,15OO,1.5\n", 2, "length_mm", "expected a number, was '15OO'");
         only(HEADER + "1.5,1,1500,1.5\n", 2, "key", "expected a whole number, was '1.5'");
         only(HEADER + "1,one,1500,1.5\n", 2, "strings", "expected a whole number, was 'one'");
-        only("key,strings,length_mm,wire_mm,cents\n1,1,1500,1.5,NaN\n", 2, "cents", "finite");
+        only("key,strings,length_mm,wire_mm,cents\n1,1,1500,1.5,NaN\n", 2, "cents", "expected a number, was 'NaN'");
+        only("key,strings,length_mm,wire_mm,cents\n1,1,1500,1.5,1e999\n", 2, "cents", "finite");
+        // what Java alone would take for a number, a user would not write
+        only(HEADER + "1,1,1500d,1.5\n", 2, "length_mm", "expected a number, was '1500d'");
+        only(HEADER + "1,1,0x1p10,1.5\n", 2, "length_mm", "expected a number, was '0x1p10'");
+        only(HEADER + "1,1,Infinity,1.5\n", 2, "length_mm", "expected a number, was 'Infinity'");
         only("key,strings,length_mm,wire_mm,pitch_hz\n1,1,1500,1.5,27,5\n", 2, "", "cells");
     }
 

@@ -112,6 +112,7 @@ class StrengthTableReaderTest {
     @Test
     void badValues() throws IOException {
         only("diameter_mm,tensile_mpa\n1.0,2300\n1.2,lots\n", 3, "tensile_mpa", "expected a number, was 'lots'");
+        only("diameter_mm,tensile_mpa\n1.0,2300\n1.2,2200f\n", 3, "tensile_mpa", "expected a number, was '2200f'");
         only("diameter_mm,tensile_mpa\n1.0,2300\n-1.2,2200\n", 3, "diameter_mm", "must be greater than 0");
         only("diameter_mm,tensile_mpa\n1.0,2300\n1.2,0\n", 3, "tensile_mpa", "must be greater than 0");
         only("diameter_mm,tensile_mpa\n1.0,2300\n1.2,\n", 3, "tensile_mpa", "a value is required");
