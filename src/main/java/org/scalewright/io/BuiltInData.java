@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Materials;
 import org.scalewright.model.UnitConversions;
 import org.scalewright.model.WireSize;
@@ -77,7 +78,7 @@ public final class BuiltInData {
     public static List<Double> metricPlainWire() {
         if (metric == null) {
             metric = resource("metric-plain-wire.csv").rows().stream()
-                    .map(r -> Double.parseDouble(r.cells().get(0)) * 1e-3).sorted().toList();
+                    .map(r -> LengthUnit.MM.toMetres(Double.parseDouble(r.cells().get(0)))).sorted().toList();
         }
         return metric;
     }

@@ -76,6 +76,18 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
         return new CsvTable(file, List.copyOf(comments), header, headerLine, List.copyOf(rows));
     }
 
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?");
+
+    /**
+     * @return true when a cell is a plain decimal number such as {@code 12}, {@code -3.5} or {@code 1e-3};
+     *         false for what Java would also read as a number but a user would not write ({@code 12d},
+     *         {@code 0x1p3}, {@code NaN}, {@code Infinity})
+     */
+    static boolean isDecimal(String cell) {
+        return DECIMAL.matcher(cell).matches();
+    }
+
     /** @return the value of a {@code # name: value} comment, or null */
     String commentValue(String name) {
         for (String c : comments) {

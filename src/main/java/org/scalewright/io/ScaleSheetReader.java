@@ -240,13 +240,11 @@ public final class ScaleSheetReader {
                 }
                 return null;
             }
-            double v;
-            try {
-                v = Double.parseDouble(t);
-            } catch (NumberFormatException e) {
+            if (!CsvTable.isDecimal(t)) {
                 problem(c, "expected a number, was '" + t + "'");
                 return null;
             }
+            double v = Double.parseDouble(t);
             if (!Double.isFinite(v)) {
                 problem(c, "expected a finite number, was '" + t + "'");
                 return null;

@@ -4,15 +4,20 @@ import com.opencsv.CSVWriter;
 import com.opencsv.ICSVWriter;
 import java.io.IOException;
 import java.io.StringWriter;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
+import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.model.SheetLayout;
+import org.scalewright.model.WrapMetal;
 
 /**
  * Writes a scale as a scale sheet (DESIGN §4), keeping the columns and units it was read with
@@ -38,9 +43,10 @@ public final class ScaleSheetWriter {
         if (!scale.title().isEmpty()) {
             out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
         }
-        out.write("# a4_hz: " + CsvCells.number(scale.pitch().a4()) + "\n");
+        out.write("# a4_hz: " + exact(scale.pitch().a4(), x -> x) + "\n");
+        // quoting and quote doubling are done by quoteWhereNeeded alone; the CSVWriter must not escape again
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.NO_QUOTE_CHARACTER,
-                ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n") {
+                ICSVWriter.NO_ESCAPE_CHARACTER, "\n") {
             @Override
             public void writeNext(String[] line) {
                 super.writeNext(quoteWhereNeeded(line), false);
@@ -89,7 +95,10 @@ public final class ScaleSheetWriter {
                 if (n.wrap().isDouble()) {
                     l = l.with(SheetColumn.WRAP2);
                 }
-                l = l.with(SheetColumn.WRAP_METAL);
+                // copper is what a blank or missing wrap_metal means: add the column only for other metals
+                if (n.wrap().metal() != WrapMetal.COPPER) {
+                    l = l.with(SheetColumn.WRAP_METAL);
+                }
             }
             l = n.pitchHz().isPresent() ? l.with(SheetColumn.PITCH_HZ) : l;
             l = n.cents() != 0 ? l.with(SheetColumn.CENTS) : l;
@@ -113,25 +122,45 @@ public final class ScaleSheetWriter {
             case WRAP1 -> n.isWound() ? length(n.wrap().inner(), c, layout) : "";
             case WRAP2 -> n.isWound() && n.wrap().isDouble() ? length(n.wrap().outer(), c, layout) : "";
             case WRAP_METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
-            case PITCH_HZ -> optional(n.pitchHz(), 1);
-            case CENTS -> n.cents() == 0 ? "" : CsvCells.number(n.cents());
+            case PITCH_HZ -> n.pitchHz().isPresent() ? exact(n.pitchHz().getAsDouble(), x -> x) : "";
+            case CENTS -> n.cents() == 0 ? "" : exact(n.cents(), x -> x);
             case STRIKE -> optionalLength(n.strikePoint(), c, layout);
             case TOTAL_LENGTH -> optionalLength(n.stretchedLength(), c, layout);
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
-            case SECTION -> CsvCells.safeText(n.section());
-            case REMARK -> CsvCells.safeText(n.remark());
+            case SECTION -> CsvCells.safeText(oneLine(n.section()));
+            case REMARK -> CsvCells.safeText(oneLine(n.remark()));
         };
     }
 
+    /** A sheet row is one line (the reader reads line by line): line breaks in free text become spaces. */
+    private static String oneLine(String text) {
+        return text.replace("\r\n", " ").replace('\n', ' ').replace('\r', ' ');
+    }
+
     private static String length(double metres, SheetColumn c, SheetLayout layout) {
-        return CsvCells.number(layout.unitOf(c).fromMetres(metres));
+        LengthUnit unit = layout.unitOf(c);
+        return exact(metres, unit::toMetres, unit.fromMetres(metres));
+    }
+
+    private static String exact(double value, DoubleUnaryOperator readBack) {
+        return exact(value, readBack, value);
+    }
+
+    /**
+     * @return the shortest decimal for {@code shown} with 10 to 17 significant digits that the reader
+     *         turns back into exactly {@code value} ({@code readBack} of the parsed text), so that
+     *         read → write → read keeps every value as it was, not only the first 10 digits
+     */
+    private static String exact(double value, DoubleUnaryOperator readBack, double shown) {
+        String text = CsvCells.number(shown);
+        for (int digits = 11; digits <= 17 && readBack.applyAsDouble(Double.parseDouble(text)) != value; digits++) {
+            text = new BigDecimal(shown).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+        }
+        return text;
     }
 
     private static String optionalLength(OptionalDouble v, SheetColumn c, SheetLayout layout) {
         return v.isPresent() ? length(v.getAsDouble(), c, layout) : "";
     }
 
-    private static String optional(OptionalDouble v, double factor) {
-        return v.isPresent() ? CsvCells.number(v.getAsDouble() * factor) : "";
-    }
 }

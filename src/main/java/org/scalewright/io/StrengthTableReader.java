@@ -129,6 +129,9 @@ public final class StrengthTableReader {
             return null;
         }
         try {
+            if (!CsvTable.isDecimal(text)) {
+                throw new NumberFormatException(text);
+            }
             double v = Double.parseDouble(text);
             if (!(v > 0) || Double.isInfinite(v)) {
                 problems.add(new SheetProblem(file, r.line(), name, "must be greater than 0, was " + text));

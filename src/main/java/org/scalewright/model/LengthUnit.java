@@ -6,16 +6,20 @@ package org.scalewright.model;
  */
 public enum LengthUnit {
     /** Millimetres; column suffix {@code _mm}. */
-    MM("mm", 1e-3),
+    MM("mm", 1, 1000),
     /** Inches; column suffix {@code _in}. 1 in = 0.0254 m exactly (NIST SP 811, B.8). */
-    IN("in", UnitConversions.METRES_PER_INCH);
+    IN("in", UnitConversions.METRES_PER_INCH, 1);
 
     private final String suffix;
+    // one unit = metres / per metres; both factors are applied so that millimetres convert by an exact
+    // division by 1000 (1.3 mm → 0.0013 m exactly as the literal 1.3e-3, not 1.3 × 1e-3 = 0.0013000000000000002)
     private final double metres;
+    private final double per;
 
-    LengthUnit(String suffix, double metres) {
+    LengthUnit(String suffix, double metres, double per) {
         this.suffix = suffix;
         this.metres = metres;
+        this.per = per;
     }
 
     /** @return the column suffix and display symbol, {@code mm} or {@code in} */
@@ -25,12 +29,12 @@ public enum LengthUnit {
 
     /** @param value a length in this unit @return the same length in metres */
     public double toMetres(double value) {
-        return value * metres;
+        return value * metres / per;
     }
 
     /** @param metresValue a length in metres @return the same length in this unit */
     public double fromMetres(double metresValue) {
-        return metresValue / metres;
+        return metresValue * per / metres;
     }
 
     /** @return the unit whose suffix is {@code symbol} (case-insensitive), or null */
