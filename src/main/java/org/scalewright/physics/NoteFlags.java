@@ -2,7 +2,6 @@ package org.scalewright.physics;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.scalewright.model.Note;
 
 /** The flags of a single note: stress bands, implausible values, strength-table range. */
@@ -15,37 +14,41 @@ final class NoteFlags {
         int key = note.key();
         StressBands bands = s.bands();
         if (pct >= 100) {
-            flags.add(new Flag(key, FlagKind.OVER_STRENGTH, String.format(Locale.ROOT,
-                    "%.1f %% of breaking strength: the wire would break at this pitch", pct)));
+            flags.add(new Flag(key, FlagKind.OVER_STRENGTH,
+                    Decimals.of(pct, 1) + " % of breaking strength: the wire would break at this pitch"));
         } else if (band == StressBand.DANGER) {
-            flags.add(new Flag(key, FlagKind.DANGER, String.format(Locale.ROOT,
-                    "%.1f %% of breaking strength, at or above the danger band (%.0f %%)", pct, bands.danger())));
+            flags.add(new Flag(key, FlagKind.DANGER,
+                    Decimals.of(pct, 1) + " % of breaking strength, at or above the danger band ("
+                    + Decimals.of(bands.danger(), 0) + " %)"));
         } else if (band == StressBand.CAUTION) {
-            flags.add(new Flag(key, FlagKind.CAUTION, String.format(Locale.ROOT,
-                    "%.1f %% of breaking strength, in the caution band (%.0f %%)", pct, bands.caution())));
+            flags.add(new Flag(key, FlagKind.CAUTION,
+                    Decimals.of(pct, 1) + " % of breaking strength, in the caution band ("
+                    + Decimals.of(bands.caution(), 0) + " %)"));
         } else if (band == StressBand.LOW) {
-            flags.add(new Flag(key, FlagKind.LOW_STRESS, String.format(Locale.ROOT,
-                    "%.1f %% of breaking strength, below the low band (%.0f %%)", pct, bands.low())));
+            flags.add(new Flag(key, FlagKind.LOW_STRESS,
+                    Decimals.of(pct, 1) + " % of breaking strength, below the low band ("
+                    + Decimals.of(bands.low(), 0) + " %)"));
         }
         PlausibleRange p = s.plausible();
         double l = note.speakingLength();
         if (l < p.minSpeakingLength() || l > p.maxSpeakingLength()) {
-            flags.add(new Flag(key, FlagKind.IMPLAUSIBLE, String.format(Locale.ROOT,
-                    "speaking length %.0f mm is outside %.0f–%.0f mm", l * 1e3,
-                    p.minSpeakingLength() * 1e3, p.maxSpeakingLength() * 1e3)));
+            flags.add(new Flag(key, FlagKind.IMPLAUSIBLE, "speaking length "
+                    + Decimals.of(l * 1e3, 0) + " mm is outside "
+                    + Decimals.of(p.minSpeakingLength() * 1e3, 0) + "–" + Decimals.of(p.maxSpeakingLength() * 1e3, 0) + " mm"));
         }
         double d = note.wire().diameter();
         double maxD = note.isWound() ? p.maxCore() : p.maxPlainWire();
         if (d < p.minWire() || d > maxD) {
-            flags.add(new Flag(key, FlagKind.IMPLAUSIBLE, String.format(Locale.ROOT,
-                    "%s %.3f mm is outside %.2f–%.2f mm", note.isWound() ? "core" : "plain wire", d * 1e3,
-                    p.minWire() * 1e3, maxD * 1e3)));
+            flags.add(new Flag(key, FlagKind.IMPLAUSIBLE,
+                    (note.isWound() ? "core " : "plain wire ") + Decimals.of(d * 1e3, 3) + " mm is outside "
+                    + Decimals.of(p.minWire() * 1e3, 2) + "–" + Decimals.of(maxD * 1e3, 2) + " mm"));
         }
         if (note.isWound()) {
             double w = Math.max(note.wrap().inner(), note.wrap().outer());
             if (w > p.maxWrap()) {
-                flags.add(new Flag(key, FlagKind.IMPLAUSIBLE, String.format(Locale.ROOT,
-                        "wrap wire %.3f mm is thicker than %.2f mm", w * 1e3, p.maxWrap() * 1e3)));
+                flags.add(new Flag(key, FlagKind.IMPLAUSIBLE,
+                        "wrap wire " + Decimals.of(w * 1e3, 3) + " mm is thicker than "
+                        + Decimals.of(p.maxWrap() * 1e3, 2) + " mm"));
             }
         }
         if (!(tension > 0)) {
@@ -53,9 +56,10 @@ final class NoteFlags {
                     + "(no positive tension)"));
         }
         if (!s.strength().covers(d)) {
-            flags.add(new Flag(key, FlagKind.OUTSIDE_STRENGTH_TABLE, String.format(Locale.ROOT,
-                    "%.3f mm is outside the strength table (%.3f–%.3f mm); strength extrapolated", d * 1e3,
-                    s.strength().minDiameter() * 1e3, s.strength().maxDiameter() * 1e3)));
+            flags.add(new Flag(key, FlagKind.OUTSIDE_STRENGTH_TABLE,
+                    Decimals.of(d * 1e3, 3) + " mm is outside the strength table ("
+                    + Decimals.of(s.strength().minDiameter() * 1e3, 3) + "–"
+                    + Decimals.of(s.strength().maxDiameter() * 1e3, 3) + " mm); strength extrapolated"));
         }
         return flags;
     }

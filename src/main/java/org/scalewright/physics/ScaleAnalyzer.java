@@ -2,7 +2,6 @@ package org.scalewright.physics;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
@@ -41,9 +40,9 @@ public final class ScaleAnalyzer {
             double step = 100.0 * (here.tension() - below.tension()) / below.tension();
             if (Math.abs(step) > limitPct) {
                 List<Flag> flags = new ArrayList<>(here.flags());
-                flags.add(new Flag(here.key(), FlagKind.NEIGHBOUR_STEP, String.format(Locale.ROOT,
-                        "tension per string %+.1f %% from key %d (%s), more than %.0f %%", step, below.key(),
-                        KeyNames.name(below.key()), limitPct)));
+                flags.add(new Flag(here.key(), FlagKind.NEIGHBOUR_STEP,
+                        "tension per string " + Decimals.signed(step, 1) + " % from key " + below.key() + " ("
+                        + KeyNames.name(below.key()) + "), more than " + Decimals.of(limitPct, 0) + " %"));
                 results[i] = withFlags(here, flags);
             }
         }
