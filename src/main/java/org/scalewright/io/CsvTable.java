@@ -73,7 +73,36 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
             throw BadInputException.of(file, lines.isEmpty() ? "the file is empty; expected a header line and rows"
                     : "has no header line; expected a line of column names such as key,strings,length_mm,wire");
         }
-        return new CsvTable(file, List.copyOf(comments), header, headerLine, List.copyOf(rows));
+        return dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), header, headerLine,
+                List.copyOf(rows)));
+    }
+
+    /**
+     * Spreadsheet exports often end every line with a comma: trailing columns with no name and
+     * no value in any row are dropped. A blank-named column that holds values is kept (and
+     * reported by the reader).
+     */
+    private static CsvTable dropBlankTrailingColumns(CsvTable t) {
+        int width = t.header().size();
+        while (width > 0 && t.header().get(width - 1).isEmpty() && columnIsBlank(t.rows(), width - 1)) {
+            width--;
+        }
+        if (width == t.header().size()) {
+            return t;
+        }
+        final int w = width;
+        List<Row> rows = t.rows().stream()
+                .map(r -> r.cells().size() > w ? new Row(r.line(), r.cells().subList(0, w)) : r).toList();
+        return new CsvTable(t.file(), t.comments(), t.header().subList(0, w), t.headerLine(), rows);
+    }
+
+    private static boolean columnIsBlank(List<Row> rows, int col) {
+        for (Row r : rows) {
+            if (r.cells().size() > col && !r.cells().get(col).isEmpty()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static final java.util.regex.Pattern DECIMAL =

@@ -232,6 +232,14 @@ class ScaleSheetReaderTest {
     }
 
     @Test
+    @DisplayName("a trailing comma on every line (a common spreadsheet export) is no column; a blank-named column with values is")
+    void trailingBlankColumns() throws Exception {
+        Scale s = read("key,strings,length_mm,wire_mm,,\n1,1,1500,1.5,,\n2,1,1490,1.5\n");
+        assertEquals(2, s.notes().size());
+        only("key,strings,length_mm,wire_mm,\n1,1,1500,1.5,7\n", 1, "(blank)", "a column has no name");
+    }
+
+    @Test
     void emptyFile() throws IOException {
         only("", 0, "", "the file is empty");
     }
