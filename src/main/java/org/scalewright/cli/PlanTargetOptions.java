@@ -70,7 +70,8 @@ public final class PlanTargetOptions {
             }
             case "spline", "akima" -> {
                 if (points == null || points.size() < 2) {
-                    throw new UserError("--target " + t + " needs --points KEY=VALUE,KEY=VALUE,… spanning the planned keys");
+                    throw new UserError("--target " + t
+                            + " needs --points KEY=VALUE,KEY=VALUE,… spanning the planned keys");
                 }
                 List<ControlPoint> cps = new ArrayList<>();
                 for (String p : points) {

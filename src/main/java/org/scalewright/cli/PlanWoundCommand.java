@@ -61,7 +61,8 @@ public final class PlanWoundCommand implements Callable<Integer> {
                 description = "wrap wire available in steps of MM (default: 0.05)")
         Double step;
 
-        @Option(names = "--wraps", paramLabel = "LIST", description = "wrap wire available, diameters in mm, e.g. 0.2,0.25,0.3")
+        @Option(names = "--wraps", paramLabel = "LIST",
+                description = "wrap wire available, diameters in mm, e.g. 0.2,0.25,0.3")
         String list;
     }
 
@@ -84,7 +85,8 @@ public final class PlanWoundCommand implements Callable<Integer> {
     String cores;
 
     @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
-            description = "cost of each change of core when cores are chosen, squared log-B units (default: ${DEFAULT-VALUE})")
+            description = {"cost of each change of core when cores are chosen, in squared log-B units",
+                    "(default: ${DEFAULT-VALUE})"})
     double changeCost;
 
     @Option(names = "--step-cost", paramLabel = "X", defaultValue = "1",

@@ -11,7 +11,7 @@ package org.scalewright.design.rescale;
  */
 final class ChoiceChain {
 
-    /** An extra cost for going from option {@code i} at key index {@code k − 1} to option {@code j} at key index {@code k}. */
+    /** An extra cost for going from option {@code i} at key index {@code k − 1} to option {@code j} at {@code k}. */
     @FunctionalInterface
     interface StepCost {
         double cost(int k, int i, int j);

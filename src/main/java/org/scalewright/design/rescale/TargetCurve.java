@@ -98,6 +98,29 @@ public final class TargetCurve {
         return values.clone();
     }
 
+    /**
+     * Control points sampled from the curve, for a user to drag into a {@link TargetSpec.Spline}.
+     *
+     * @param count how many, &ge; 2 (fewer when the curve has fewer keys); the ends always included
+     * @return points at evenly spaced keys, bass to treble
+     */
+    public java.util.List<ControlPoint> controlPoints(int count) {
+        if (count < 2) {
+            throw new IllegalArgumentException("control points must be >= 2, was " + count);
+        }
+        int n = Math.min(count, values.length);
+        java.util.List<ControlPoint> out = new java.util.ArrayList<>();
+        int previous = Integer.MIN_VALUE;
+        for (int i = 0; i < n; i++) {
+            int key = n == 1 ? firstKey : firstKey + (int) Math.round((double) i * (values.length - 1) / (n - 1));
+            if (key != previous) {
+                out.add(new ControlPoint(key, at(key)));
+                previous = key;
+            }
+        }
+        return out;
+    }
+
     /** @return how the curve was made */
     public String description() {
         return description;

@@ -37,7 +37,10 @@ public record WoundPlanOptions(TargetQuantity quantity, WrapWires wraps, Optiona
     public static final double DEFAULT_CHANGE_COST = 0.002;
     /** Default cost of neighbour steps beyond the limit. */
     public static final double DEFAULT_STEP_COST = 1.0;
-    /** Step of the core diameters tried when joining a break without a core list: 0.025 mm, the step of metric piano wire (common practice, no source). */
+    /**
+     * Step of the core diameters tried when joining a break without a core list: 0.025 mm, the
+     * step of metric piano wire (common practice, no source).
+     */
     public static final double JOIN_CORE_STEP = 0.025e-3;
 
     public WoundPlanOptions {
@@ -84,19 +87,23 @@ public record WoundPlanOptions(TargetQuantity quantity, WrapWires wraps, Optiona
     }
 
     public WoundPlanOptions withWraps(WrapWires w) {
-        return new WoundPlanOptions(quantity, w, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost, joinBreakKeys);
+        return new WoundPlanOptions(quantity, w, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
+                joinBreakKeys);
     }
 
     public WoundPlanOptions withDoubleAbove(OptionalDouble d) {
-        return new WoundPlanOptions(quantity, wraps, d, doubleRatio, cores, maxBreakPct, changeCost, stepCost, joinBreakKeys);
+        return new WoundPlanOptions(quantity, wraps, d, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
+                joinBreakKeys);
     }
 
     public WoundPlanOptions withCores(List<Double> c) {
-        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, c, maxBreakPct, changeCost, stepCost, joinBreakKeys);
+        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, c, maxBreakPct, changeCost, stepCost,
+                joinBreakKeys);
     }
 
     public WoundPlanOptions withJoinBreak(int keys) {
-        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost, keys);
+        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
+                keys);
     }
 
     public WoundPlanOptions withStepCost(double cost) {
@@ -105,6 +112,7 @@ public record WoundPlanOptions(TargetQuantity quantity, WrapWires wraps, Optiona
     }
 
     public WoundPlanOptions withQuantity(TargetQuantity q) {
-        return new WoundPlanOptions(q, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost, joinBreakKeys);
+        return new WoundPlanOptions(q, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
+                joinBreakKeys);
     }
 }

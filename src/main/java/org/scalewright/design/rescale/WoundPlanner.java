@@ -13,7 +13,6 @@ import org.scalewright.model.CoreWire;
 import org.scalewright.model.KeyRange;
 import org.scalewright.model.Materials;
 import org.scalewright.model.Note;
-import org.scalewright.model.Scale;
 import org.scalewright.model.Wrap;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.NoteCalculator;
@@ -32,7 +31,7 @@ import org.scalewright.physics.StringPhysics;
  *
  * <p>Which rounding (and, where cores are chosen, which core) each key gets is settled for all
  * planned keys at once by an exact dynamic programme ({@link ChoiceChain}) minimising
- * Σ ((T − T*)/T*)² + Σ (ln B/B*)² over keys whose core is chosen + change cost × core changes
+ * Σ ((T − T*)/T*)² + ¼ Σ (ln B/B*)² over keys whose core is chosen + change cost × core changes
  * + step cost × Σ (fraction by which a neighbour step exceeds the limit), with every core at or under the
  * maximum percent of breaking strength and chosen cores never growing toward the treble. B* is
  * a robust smooth trend of the B the present cores would have at the target tension.
@@ -43,6 +42,13 @@ import org.scalewright.physics.StringPhysics;
  * above them, as closely as the core list, the maximum and the wrap wire allow.
  */
 public final class WoundPlanner {
+    /**
+     * Weight of the squared log deviation of B from its aim against the squared relative
+     * deviation of tension from its target, for keys whose core is chosen: tension first,
+     * B as smooth as the cores then allow.
+     */
+    static final double B_WEIGHT = 0.25;
+
     private WoundPlanner() {
     }
 
@@ -81,8 +87,11 @@ public final class WoundPlanner {
         List<Integer> idx = new ArrayList<>();
         List<Integer> skipped = new ArrayList<>();
         for (int i = 0; i < notes.size(); i++) {
-            if (range.contains(notes.get(i).key())) {
-                (notes.get(i).isWound() ? idx : skipped).add(notes.get(i).isWound() ? i : notes.get(i).key());
+            Note n = notes.get(i);
+            if (range.contains(n.key()) && n.isWound()) {
+                idx.add(i);
+            } else if (range.contains(n.key())) {
+                skipped.add(n.key());
             }
         }
         if (idx.isEmpty()) {
@@ -313,7 +322,7 @@ public final class WoundPlanner {
                         double c = dev * dev;
                         if (free[k]) {
                             double lb = Math.log(r.inharmonicity() / aimB[k]);
-                            c += lb * lb;
+                            c += B_WEIGHT * lb * lb;
                         }
                         cs.add(c);
                     }

@@ -168,7 +168,8 @@ class PlainPlannerTest {
     /** Writing the proposed scale as a sheet and reading it back gives the figures the proposal reports. */
     static void readsBackToTheReport(Proposal p) throws Exception {
         String text = ScaleSheetWriter.toText(p.proposedScale());
-        Scale back = ScaleSheetReader.standard().read(Path.of("plan.csv"), text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        Scale back = ScaleSheetReader.standard().read(Path.of("plan.csv"),
+                text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
         ScaleAnalysis again = ScaleAnalyzer.analyze(back, p.after().settings());
         for (KeyChange c : p.changes()) {
             NoteResult r = again.result(c.key()).orElseThrow();

@@ -165,6 +165,23 @@ class TargetCurveTest {
     }
 
     @Test
+    void controlPointsSampledFromACurveGiveItBackThroughASpline() {
+        double[] v = new double[41];
+        for (int i = 0; i < v.length; i++) {
+            v[i] = 800 - 3 * i;
+        }
+        TargetCurve c = new TargetCurve(40, v, "straight");
+        List<ControlPoint> pts = c.controlPoints(5);
+        assertEquals(List.of(40, 50, 60, 70, 80), pts.stream().map(ControlPoint::key).toList());
+        int[] keys = java.util.stream.IntStream.rangeClosed(40, 80).toArray();
+        TargetCurve again = new TargetSpec.Spline(pts, false).build(keys, v);
+        for (int k = 40; k <= 80; k++) {
+            assertEquals(c.at(k), again.at(k), 1e-9, "a cubic spline through points on a line is the line");
+        }
+        assertEquals(2, new TargetCurve(1, new double[] {5, 6}, "two").controlPoints(9).size());
+    }
+
+    @Test
     void badCurvesAreRefused() {
         assertThrows(IllegalArgumentException.class, () -> new TargetCurve(1, new double[] {700, -1}, "bad"));
         assertThrows(IllegalArgumentException.class, () -> new TargetCurve(1, new double[0], "bad"));
