@@ -299,6 +299,7 @@ public final class WoundPlanner {
                 List<Double> mine = free[k] ? cores : List.of(present.wire().diameter());
                 int overMax = 0;
                 NoteResult leastStressed = null;
+                double leastStressedTarget = 0;
                 for (double d : mine) {
                     CoreWire core = Math.abs(present.wire().diameter() - d) < 1e-9 ? present.wire()
                             : CoreWire.ofDiameter(d);
@@ -314,6 +315,7 @@ public final class WoundPlanner {
                             overMax++;
                             if (leastStressed == null || r.breakPct() < leastStressed.breakPct()) {
                                 leastStressed = r;
+                                leastStressedTarget = t;
                             }
                             cs.add(Double.POSITIVE_INFINITY);
                             continue;
@@ -329,11 +331,12 @@ public final class WoundPlanner {
                 }
                 if (problem[k] == null && cs.stream().allMatch(c -> c == Double.POSITIVE_INFINITY)) {
                     problem[k] = overMax > 0
-                            ? String.format(Locale.ROOT, "%s: at its target (%.0f N) even the core %.3f mm is at %s "
-                                    + "of breaking strength, over the maximum %s; a thicker core or a lower target is "
-                                    + "needed", Words.key(present.key()), leastStressed.tension(),
+                            ? String.format(Locale.ROOT, "%s: %s %.3f mm would be at %s of breaking strength "
+                                    + "even with the lightest listed wrap near its target (%.0f N), over the maximum "
+                                    + "%s; a thicker core or a lower target is needed", Words.key(present.key()),
+                                    free[k] ? "even the least stressed core tried," : "its core",
                                     leastStressed.coreDiameter() * 1e3, Words.pct(leastStressed.breakPct()),
-                                    Words.pct(options.maxBreakPct()))
+                                    leastStressedTarget, Words.pct(options.maxBreakPct()))
                             : String.format(Locale.ROOT, "%s: none of the cores tried (%s) can carry a wrap for its "
                                     + "target; each alone is already at or above it", Words.key(present.key()),
                                     mmList(mine));
