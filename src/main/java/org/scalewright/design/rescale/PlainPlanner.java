@@ -150,6 +150,7 @@ public final class PlainPlanner {
         if (!skipped.isEmpty()) {
             remarks.add(Words.keys(skipped) + ": wound strings, skipped (the plain-wire planner plans plain wire only)");
         }
+        remarks.addAll(deviationNotes(changes, sizes, best.choice(), cost, settings.neighbourStepPct()));
         cautionNote(changes, settings).ifPresent(remarks::add);
         return new Proposal("plain wire", range, present, after, TargetQuantity.TENSION, target, changes, steps, max,
                 remarks, limits);
@@ -362,6 +363,85 @@ public final class PlainPlanner {
             }
         }
         return -1;
+    }
+
+    /** Why a planned key lies far from its target. */
+    private enum FarReason {
+        HELD_BY_KEY_BELOW, HELD_BY_KEY_ABOVE, LIST_RUNS_OUT, OVER_MAXIMUM, TRADED
+    }
+
+    /**
+     * Notes on runs of planned keys further from the target than {@code limitPct}, with what
+     * holds each run there: wire that may not grow toward the treble, the end of the size list,
+     * the maximum, or the trade against size changes and steps.
+     */
+    static List<String> deviationNotes(List<KeyChange> changes, List<CoreWire> sizes, int[] choice, double[][] cost,
+                                       double limitPct) {
+        List<String> out = new ArrayList<>();
+        int n = changes.size();
+        FarReason[] why = new FarReason[n];
+        for (int k = 0; k < n; k++) {
+            double dev = changes.get(k).deviationPct();
+            if (Math.abs(dev) <= limitPct) {
+                continue;
+            }
+            int j = choice[k];
+            int better = dev < 0 ? j - 1 : j + 1; // thicker wire is a lower index
+            if (better < 0 || better >= sizes.size()) {
+                why[k] = FarReason.LIST_RUNS_OUT;
+            } else if (cost[k][better] == Double.POSITIVE_INFINITY) {
+                why[k] = FarReason.OVER_MAXIMUM;
+            } else if (dev < 0 && k > 0 && better < choice[k - 1]) {
+                why[k] = FarReason.HELD_BY_KEY_BELOW;
+            } else if (dev > 0 && k < n - 1 && better > choice[k + 1]) {
+                why[k] = FarReason.HELD_BY_KEY_ABOVE;
+            } else {
+                why[k] = FarReason.TRADED;
+            }
+        }
+        int k = 0;
+        while (k < n) {
+            if (why[k] == null) {
+                k++;
+                continue;
+            }
+            int end = k;
+            while (end + 1 < n && why[end + 1] == why[k]
+                    && Math.signum(changes.get(end + 1).deviationPct()) == Math.signum(changes.get(k).deviationPct())) {
+                end++;
+            }
+            List<Integer> keys = new ArrayList<>();
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = 0;
+            for (int i = k; i <= end; i++) {
+                keys.add(changes.get(i).key());
+                lo = Math.min(lo, Math.abs(changes.get(i).deviationPct()));
+                hi = Math.max(hi, Math.abs(changes.get(i).deviationPct()));
+            }
+            boolean under = changes.get(k).deviationPct() < 0;
+            String run = String.format(Locale.ROOT, "%s %s %.1f to %.1f %% %s the target", Words.keys(keys),
+                    keys.size() == 1 ? "is" : "are", lo, hi, under ? "under" : "over");
+            if (keys.size() == 1) {
+                run = String.format(Locale.ROOT, "%s is %.1f %% %s the target", Words.keys(keys), hi,
+                        under ? "under" : "over");
+            }
+            String thicker = under ? "a thicker" : "a thinner";
+            String them = keys.size() == 1 ? "it" : "them";
+            out.add(run + ": " + switch (why[k]) {
+                case HELD_BY_KEY_BELOW -> thicker + " wire would bring " + them + " nearer, but wire never grows "
+                        + "toward the treble and " + Words.key(changes.get(k - 1).key()) + " below has "
+                        + Words.wire(changes.get(k - 1).after().wire());
+                case HELD_BY_KEY_ABOVE -> thicker + " wire would bring " + them + " nearer, but wire never grows "
+                        + "toward the treble and " + Words.key(changes.get(end + 1).key()) + " above has "
+                        + Words.wire(changes.get(end + 1).after().wire());
+                case LIST_RUNS_OUT -> "the size list has no " + (under ? "thicker" : "thinner") + " wire";
+                case OVER_MAXIMUM -> thicker + " wire would be over the maximum percent of breaking strength";
+                case TRADED -> thicker + " wire would bring " + them + " nearer, but the plan traded that for "
+                        + "fewer size changes and smaller steps";
+            });
+            k = end + 1;
+        }
+        return out;
     }
 
     /** A note on planned strings left in the caution band or above: their stress is set by length and pitch. */

@@ -215,5 +215,10 @@ class PlainPlannerTest {
         assertEquals(1, p.limits().size());
         assertTrue(p.limits().get(0).contains("speaking length drops"), p.limits().get(0));
         assertTrue(p.limits().get(0).contains("never grows toward the treble"), p.limits().get(0));
+        // the flat target leaves the long keys over it and the short ones under; the notes say what holds them
+        assertTrue(p.notes().stream().anyMatch(s -> s.contains("over the target") && s.contains("above has")),
+                p.notes().toString());
+        assertTrue(p.notes().stream().anyMatch(s -> s.contains("under the target") && s.contains("below has")),
+                p.notes().toString());
     }
 }
