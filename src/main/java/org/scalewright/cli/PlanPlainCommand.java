@@ -27,10 +27,10 @@ import picocli.CommandLine.Spec;
 
 /** {@code plan-plain}: choose plain-wire sizes for a range of keys so tension follows a target. */
 @Command(name = "plan-plain", mixinStandardHelpOptions = true,
-        description = {"Plan plain-wire sizes for the plain keys of a range: tension follows a target, sizes never",
-                "grow toward the treble, every string stays at or under the maximum percent of breaking strength,",
-                "and sizes change seldom (exact dynamic programme). Wound keys in the range are skipped.",
-                "Prints the changes and writes the complete new scale sheet."})
+        description = "Plan plain-wire sizes for the plain keys of a range: tension follows a target, sizes "
+                    + "never grow toward the treble, every string stays at or under the maximum percent of "
+                    + "breaking strength, and sizes change seldom (exact dynamic programme). Wound keys in the "
+                    + "range are skipped. Prints the changes and writes the complete new scale sheet.")
 public final class PlanPlainCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
@@ -47,18 +47,18 @@ public final class PlanPlainCommand implements Callable<Integer> {
     Double maxBreak;
 
     @Option(names = "--sizes", paramLabel = "LIST", defaultValue = "music",
-            description = {"available wire: music (sizes 12-23 in half steps), metric (0.025 mm steps), or a list",
-                    "of size numbers and diameters, e.g. 13,13.5,14 or 0.8mm,0.825mm (default: ${DEFAULT-VALUE})"})
+            description = "available wire: music (sizes 12-23 in half steps), metric (0.025 mm steps), or a list of "
+                    + "size numbers and diameters, e.g. 13,13.5,14 or 0.8mm,0.825mm (default: ${DEFAULT-VALUE})")
     String sizes;
 
     @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
-            description = {"cost of each change of size, in squared fractions of the target (0.002 weighs as",
-                    "much as one key 4.5 % off the target; default: ${DEFAULT-VALUE})"})
+            description = "cost of each change of size, in squared fractions of the target (0.002 weighs as much as "
+                    + "one key 4.5 %% off the target; default: ${DEFAULT-VALUE})")
     double changeCost;
 
     @Option(names = "--step-cost", paramLabel = "X", defaultValue = "1",
-            description = {"cost per unit fraction a neighbour step exceeds the step limit (1: 1 % over weighs",
-                    "as much as one key 10 % off the target; 0: steps only reported; default: ${DEFAULT-VALUE})"})
+            description = "cost per unit fraction a neighbour step exceeds the step limit (1: 1 %% over weighs as "
+                    + "much as one key 10 %% off the target; 0: steps only reported; default: ${DEFAULT-VALUE})")
     double stepCost;
 
     @Option(names = "--out", required = true, paramLabel = "NEW.csv", description = "the new scale sheet to write")

@@ -29,9 +29,9 @@ public final class PlanTargetOptions {
     double bandwidth;
 
     @Option(names = "--points", paramLabel = "KEY=VALUE", split = ",",
-            description = {"control points for line, logline, spline, akima: key number or note name = target value",
-                    "(N; % for --target-of break-pct), e.g. 29=700,52=750,88=600; for a line, KEY alone takes the",
-                    "present value there"})
+            description = "control points for line, logline, spline, akima: key number or note name = target value "
+                    + "(N; %% for --target-of break-pct), e.g. 29=700,52=750,88=600; for a line, KEY alone "
+                    + "takes the present value there")
     List<String> points;
 
     @Option(names = "--per-section",

@@ -30,11 +30,12 @@ import picocli.CommandLine.Spec;
 
 /** {@code plan-wound}: design the wound strings of a range of keys to a target tension. */
 @Command(name = "plan-wound", mixinStandardHelpOptions = true,
-        description = {"Design the wound strings of a range: with each core (kept, or chosen from --cores), the wrap",
-                "diameter(s) the target tension needs (closed form, stiffness included), rounded to the wrap wire",
-                "available; double-wound where a single wrap would pass --double-above. --join-break makes the",
-                "strings either side of the bass/tenor break continuous in tension and as smooth in B as the",
-                "cores allow. Plain keys in the range are skipped. Prints the changes and writes the new sheet."})
+        description = "Design the wound strings of a range: with each core (kept, or chosen from --cores), the "
+                    + "wrap diameter(s) the target tension needs (closed form, stiffness included), rounded to "
+                    + "the wrap wire available; double-wound where a single wrap would pass --double-above. "
+                    + "--join-break makes the strings either side of the bass/tenor break continuous in tension "
+                    + "and as smooth in B as the cores allow. Plain keys in the range are skipped. Prints the "
+                    + "changes and writes the new sheet.")
 public final class PlanWoundCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
@@ -70,34 +71,34 @@ public final class PlanWoundCommand implements Callable<Integer> {
     WrapChoice wrapChoice;
 
     @Option(names = "--double-above", paramLabel = "MM",
-            description = {"double-wind a string whose single wrap would be thicker than MM, single-wind the others",
-                    "(default: every string keeps its present winding)"})
+            description = "double-wind a string whose single wrap would be thicker than MM, single-wind the others "
+                    + "(default: every string keeps its present winding)")
     Double doubleAbove;
 
     @Option(names = "--double-ratio", paramLabel = "R", defaultValue = "1",
-            description = {"outer/inner wrap ratio for a string that becomes double-wound under --double-above",
-                    "(a present double wrap keeps its own ratio; default: ${DEFAULT-VALUE})"})
+            description = "outer/inner wrap ratio for a string that becomes double-wound under --double-above (a "
+                    + "present double wrap keeps its own ratio; default: ${DEFAULT-VALUE})")
     double doubleRatio;
 
     @Option(names = "--cores", paramLabel = "keep|LIST", defaultValue = "keep",
-            description = {"keep the present cores, or choose each from this list of diameters in mm (never growing",
-                    "toward the treble, B kept smooth), e.g. 1.0,1.05,1.1 (default: ${DEFAULT-VALUE})"})
+            description = "keep the present cores, or choose each from this list of diameters in mm (never growing "
+                    + "toward the treble, B kept smooth), e.g. 1.0,1.05,1.1 (default: ${DEFAULT-VALUE})")
     String cores;
 
     @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
-            description = {"cost of each change of core when cores are chosen, in squared log-B units",
-                    "(default: ${DEFAULT-VALUE})"})
+            description = "cost of each change of core when cores are chosen, in squared log-B units (default: "
+                    + "${DEFAULT-VALUE})")
     double changeCost;
 
     @Option(names = "--step-cost", paramLabel = "X", defaultValue = "1",
-            description = {"cost per unit fraction a neighbour step exceeds the step limit (1: 1 % over weighs",
-                    "as much as one key 10 % off the target; 0: steps only reported; default: ${DEFAULT-VALUE})"})
+            description = "cost per unit fraction a neighbour step exceeds the step limit (1: 1 %% over weighs as "
+                    + "much as one key 10 %% off the target; 0: steps only reported; default: ${DEFAULT-VALUE})")
     double stepCost;
 
     @Option(names = "--join-break", paramLabel = "N", defaultValue = "0",
-            description = {"join the break: the target runs on continuously through each change of section, and the",
-                    "cores of the N keys either side are chosen (0.025 mm steps, or --cores) for a smooth B",
-                    "(default: ${DEFAULT-VALUE} = off)"})
+            description = "join the break: the target runs on continuously through each change of section, and the "
+                    + "cores of the N keys either side are chosen (0.025 mm steps, or --cores) for a smooth B "
+                    + "(default: ${DEFAULT-VALUE} = off)")
     int joinBreak;
 
     @Option(names = "--out", required = true, paramLabel = "NEW.csv", description = "the new scale sheet to write")
