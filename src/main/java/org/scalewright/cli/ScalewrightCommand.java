@@ -8,8 +8,8 @@ import picocli.CommandLine.Command;
 @Command(name = "scalewright", mixinStandardHelpOptions = true, version = "Scalewright 0.1",
         description = {"Piano scaling workstation: string tension, stress and inharmonicity.",
                 "Without a command the desktop window opens; 'open FILE' opens a sheet in it."},
-        subcommands = {AnalyzeCommand.class, CheckWireCommand.class, DiagnoseCommand.class, ReportCommand.class,
-                StretchCommand.class})
+        subcommands = {AnalyzeCommand.class, PlanPlainCommand.class, PlanWoundCommand.class, CheckWireCommand.class,
+                DiagnoseCommand.class, ReportCommand.class, StretchCommand.class})
 public final class ScalewrightCommand implements Runnable {
 
     @CommandLine.Spec

@@ -1,0 +1,116 @@
+package org.scalewright.io;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.TreeMap;
+import org.scalewright.design.rescale.TargetCurve;
+import org.scalewright.model.KeyNames;
+
+/**
+ * Reads a target curve for the rescaling tools from a CSV file: comment lines {@code #}, a
+ * header with the columns {@code key} (key number or note name) and {@code tension_n}
+ * (per-string tension wanted, N), one row per key in any order, keys unique. Between the
+ * keys given, the target runs straight from one to the next.
+ */
+public final class TargetCurveReader {
+    private static final String KEY = "key";
+    private static final String TENSION = "tension_n";
+
+    private TargetCurveReader() {
+    }
+
+    /**
+     * @param file a UTF-8 CSV file
+     * @return the curve from the lowest key given to the highest, N
+     * @throws BadInputException listing every problem with line and column
+     */
+    public static TargetCurve read(Path file) throws BadInputException {
+        CsvTable t = CsvTable.read(file);
+        List<SheetProblem> problems = new ArrayList<>();
+        int keyCol = t.header().indexOf(KEY);
+        int tCol = t.header().indexOf(TENSION);
+        for (String h : t.header()) {
+            if (!h.equals(KEY) && !h.equals(TENSION)) {
+                problems.add(new SheetProblem(file, t.headerLine(), h.isEmpty() ? "(blank)" : h,
+                        "unknown column; a target file has the columns key and tension_n"));
+            }
+        }
+        if (keyCol < 0) {
+            problems.add(new SheetProblem(file, t.headerLine(), "", "required column key is missing"));
+        }
+        if (tCol < 0) {
+            problems.add(new SheetProblem(file, t.headerLine(), "", "required column tension_n is missing"));
+        }
+        if (!problems.isEmpty()) {
+            throw new BadInputException(problems);
+        }
+        TreeMap<Integer, Double> values = new TreeMap<>();
+        TreeMap<Integer, Integer> lines = new TreeMap<>();
+        for (CsvTable.Row r : t.rows()) {
+            if (r.cells().size() > t.header().size()) {
+                problems.add(new SheetProblem(file, r.line(), "", "the row has " + r.cells().size()
+                        + " cells but the header has " + t.header().size() + " columns"));
+                continue;
+            }
+            Integer key = key(file, r, keyCol, problems);
+            Double tension = tension(file, r, tCol, problems);
+            if (key == null || tension == null) {
+                continue;
+            }
+            Integer earlier = lines.putIfAbsent(key, r.line());
+            if (earlier != null) {
+                problems.add(new SheetProblem(file, r.line(), KEY, "key " + key + " appears twice (first on line "
+                        + earlier + ")"));
+                continue;
+            }
+            values.put(key, tension);
+        }
+        if (problems.isEmpty() && values.isEmpty()) {
+            problems.add(new SheetProblem(file, t.headerLine(), "", "the file has a header but no target values"));
+        }
+        if (!problems.isEmpty()) {
+            throw new BadInputException(problems);
+        }
+        int[] keys = values.keySet().stream().mapToInt(Integer::intValue).toArray();
+        double[] v = values.values().stream().mapToDouble(Double::doubleValue).toArray();
+        return TargetCurve.throughPoints(keys, v, "target from " + file.getFileName());
+    }
+
+    private static String cell(CsvTable.Row r, int col) {
+        return col < r.cells().size() ? r.cells().get(col) : "";
+    }
+
+    private static Integer key(Path file, CsvTable.Row r, int col, List<SheetProblem> problems) {
+        String text = cell(r, col);
+        if (text.isEmpty()) {
+            problems.add(new SheetProblem(file, r.line(), KEY, "a value is required here (a key number or note name)"));
+            return null;
+        }
+        try {
+            return KeyNames.parse(text);
+        } catch (IllegalArgumentException e) {
+            problems.add(new SheetProblem(file, r.line(), KEY, "expected a key number or note name, was '" + text + "'"));
+            return null;
+        }
+    }
+
+    private static Double tension(Path file, CsvTable.Row r, int col, List<SheetProblem> problems) {
+        String text = cell(r, col);
+        if (text.isEmpty()) {
+            problems.add(new SheetProblem(file, r.line(), TENSION, "a value is required here (a tension in N)"));
+            return null;
+        }
+        try {
+            double v = Double.parseDouble(text);
+            if (!(v > 0) || Double.isInfinite(v)) {
+                problems.add(new SheetProblem(file, r.line(), TENSION, "must be greater than 0 N, was " + text));
+                return null;
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            problems.add(new SheetProblem(file, r.line(), TENSION, "expected a number (N), was '" + text + "'"));
+            return null;
+        }
+    }
+}
