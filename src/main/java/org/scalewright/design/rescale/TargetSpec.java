@@ -33,7 +33,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
      * A robust smooth trend of the present values (LOESS with robustness iterations through
      * {@link SmoothTrend}), so that a few bumped notes do not drag the target; each local fit
      * takes at least 7 keys, and a short run of keys may get a wider bandwidth
-     * ({@link RobustTrend}), which the curve's description then says.
+     * ({@link SmoothTrend}), which the curve's description then says.
      *
      * @param bandwidth  fraction of the planned keys in each local fit, in (0, 1]
      * @param iterations robustness iterations, &ge; 0
@@ -55,7 +55,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
             for (int i = 0; i < keys.length; i++) {
                 x[i] = keys[i];
             }
-            RobustTrend.Fit fit = RobustTrend.fit(x, present, bandwidth, iterations);
+            SmoothTrend.Fit fit = SmoothTrend.robustFit(x, present, bandwidth, iterations);
             double[] v = fit.values();
             for (int i = 0; i < v.length; i++) {
                 if (!(v[i] > 0)) {

@@ -449,7 +449,7 @@ public final class WoundPlanner {
                 keys[k] = note(k).key();
                 logs[k] = Math.log(v[k]);
             }
-            double[] fit = RobustTrend.fit(keys, logs, SmoothTrend.DEFAULT_BANDWIDTH,
+            double[] fit = SmoothTrend.robustFit(keys, logs, SmoothTrend.DEFAULT_BANDWIDTH,
                     SmoothTrend.DEFAULT_ROBUSTNESS_ITERATIONS).values();
             double[] out = new double[v.length];
             for (int k = 0; k < v.length; k++) {
