@@ -91,7 +91,14 @@ public final class ScaleSheetReader {
         if (!problems.isEmpty()) {
             throw new BadInputException(problems);
         }
-        return new Scale(title == null ? "" : title, pitch, notes, header.layout());
+        List<String> freeComments = table.comments().stream()
+                .filter(c -> !isSetting(c, "title") && !isSetting(c, "a4_hz")).toList();
+        return new Scale(title == null ? "" : title, pitch, notes, header.layout().withComments(freeComments));
+    }
+
+    private static boolean isSetting(String comment, String name) {
+        int colon = comment.indexOf(':');
+        return colon > 0 && comment.substring(0, colon).strip().equalsIgnoreCase(name);
     }
 
     /** Reads one row; adds its problems and returns null when it has any. */

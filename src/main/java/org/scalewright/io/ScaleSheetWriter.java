@@ -44,6 +44,9 @@ public final class ScaleSheetWriter {
             out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
         }
         out.write("# a4_hz: " + exact(scale.pitch().a4(), x -> x) + "\n");
+        for (String c : layout.comments()) {
+            out.write("# " + c.replace('\n', ' ').replace('\r', ' ') + "\n");
+        }
         // quoting and quote doubling are done by quoteWhereNeeded alone; the CSVWriter must not escape again
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.NO_QUOTE_CHARACTER,
                 ICSVWriter.NO_ESCAPE_CHARACTER, "\n") {

@@ -9,14 +9,27 @@ import java.util.Map;
  * How a scale sheet was laid out: its columns in order and the unit of each length column,
  * so that writing a scale keeps the columns and units it was read with.
  *
- * @param columns the sheet's columns in file order
- * @param units   the unit of each length column present
+ * @param columns  the sheet's columns in file order
+ * @param units    the unit of each length column present
+ * @param comments the sheet's free comment lines before the header (without the {@code #}),
+ *                 other than the {@code title:} and {@code a4_hz:} settings, written back as they were
  */
-public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units) {
+public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments) {
 
     public SheetLayout {
         columns = List.copyOf(columns);
         units = Map.copyOf(units);
+        comments = comments == null ? List.of() : List.copyOf(comments);
+    }
+
+    /** A layout without comment lines. */
+    public SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units) {
+        this(columns, units, List.of());
+    }
+
+    /** @return this layout with other comment lines */
+    public SheetLayout withComments(List<String> newComments) {
+        return new SheetLayout(columns, units, newComments);
     }
 
     /** The layout used for a scale that has none yet: every column, lengths in millimetres. */
@@ -60,6 +73,6 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
         if (column.isLength()) {
             u.put(column, unitOf(column));
         }
-        return new SheetLayout(cols, u);
+        return new SheetLayout(cols, u, comments);
     }
 }

@@ -102,6 +102,18 @@ class ScaleSheetRoundTripTest {
     }
 
     @Test
+    @DisplayName("free comment lines before the header are written back; title and A4 are not repeated among them")
+    void commentsKept() throws Exception {
+        Scale first = read("# title: Shop grand\n# measured 2026-11-30 by the shop\n#\n# a4_hz: 442\n"
+                + "key,strings,length_mm,wire_mm\n1,1,1500,1.5\n");
+        assertEquals(List.of("measured 2026-11-30 by the shop", ""), first.layout().comments());
+        String text = ScaleSheetWriter.toText(first);
+        assertTrue(text.contains("# measured 2026-11-30 by the shop\n"), text);
+        assertEquals(1, text.split("title:", -1).length - 1, text);
+        assertEquals(first, read(text));
+    }
+
+    @Test
     @DisplayName("a sheet giving wound strings without a wrap_metal column round-trips equal")
     void woundWithoutMetalColumn() throws Exception {
         Scale first = read("key,strings,length_mm,wire_mm,wrap1_mm\n1,1,1500,1.5,1.1\n40,3,620,1.0,\n");
