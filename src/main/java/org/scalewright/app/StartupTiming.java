@@ -1,0 +1,67 @@
+package org.scalewright.app;
+
+import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.time.Instant;
+import java.util.List;
+import java.util.Locale;
+import javafx.animation.AnimationTimer;
+import org.jfree.chart.fx.ChartViewer;
+
+/**
+ * The cold-start measurement: with {@code -Dscalewright.startupReport=FILE}, appends to FILE
+ * one line with the milliseconds from the start of the process to the first frame in which
+ * all three curves have been drawn. Nothing happens without the property.
+ */
+final class StartupTiming {
+    static final String PROPERTY = "scalewright.startupReport";
+
+    private StartupTiming() {
+    }
+
+    /** @return milliseconds from the start of the process to now */
+    static long sinceProcessStart() {
+        Instant start = ProcessHandle.current().info().startInstant()
+                .orElse(Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime()));
+        return java.time.Duration.between(start, Instant.now()).toMillis();
+    }
+
+    /**
+     * Starts watching for the first frame with all curves drawn.
+     *
+     * @param fxStarted  milliseconds from process start to the application's start method
+     * @param windowBuilt milliseconds from process start to the window built with its sheet open
+     */
+    static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt) {
+        String file = System.getProperty(PROPERTY);
+        if (file == null || file.isBlank()) {
+            return;
+        }
+        new AnimationTimer() {
+            @Override
+            public void handle(long now) {
+                boolean drawn = viewers.stream().allMatch(v -> v.getRenderingInfo() != null
+                        && v.getRenderingInfo().getChartArea().getWidth() > 0);
+                if (drawn) {
+                    stop();
+                    long ms = sinceProcessStart();
+                    write(Path.of(file), String.format(Locale.ROOT, "cold start to a window with curves: %d ms "
+                            + "from process start (JavaFX start method entered at %d ms, window built with the "
+                            + "sheet open at %d ms)%n", ms, fxStarted, windowBuilt));
+                }
+            }
+        }.start();
+    }
+
+    private static void write(Path file, String line) {
+        try {
+            Files.writeString(file, line, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+        } catch (IOException e) {
+            // a measurement that cannot be written is simply not taken
+        }
+    }
+}
