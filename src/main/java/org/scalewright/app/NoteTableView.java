@@ -24,12 +24,18 @@ final class NoteTableView {
     private final TableView<NoteRow> table = new TableView<>();
     private final Map<NoteColumn, TableColumn<NoteRow, String>> columns = new EnumMap<>(NoteColumn.class);
     private boolean syncing;
+    private boolean updating;
+    private TableColumn<NoteRow, ?> rememberedColumn;
 
     NoteTableView(NoteTableViewModel model) {
         this.model = model;
         table.setId("note-table");
         table.getStyleClass().add("note-table");
+        // Replacing a row (after an edit) makes the table drop its selection; the listener added
+        // before the table's own remembers it, the one added after puts it back.
+        model.rows().addListener((javafx.collections.ListChangeListener<NoteRow>) c -> rememberSelection());
         table.setItems(model.rows());
+        model.rows().addListener((javafx.collections.ListChangeListener<NoteRow>) c -> restoreSelection());
         table.setEditable(true);
         table.getSelectionModel().setCellSelectionEnabled(true);
         table.getSelectionModel().setSelectionMode(SelectionMode.SINGLE);
@@ -155,8 +161,38 @@ final class NoteTableView {
         return (TableColumn<NoteRow, String>) p.getTableColumn();
     }
 
+    private void rememberSelection() {
+        if (!updating) {
+            updating = true;
+            TablePosition<NoteRow, ?> p = SheetCell.focused(table);
+            rememberedColumn = p == null ? null : p.getTableColumn();
+        }
+    }
+
+    private void restoreSelection() {
+        updating = false;
+        Integer key = model.session().selectedKeyProperty().get();
+        int i = key == null ? -1 : model.indexOf(key);
+        if (i < 0) {
+            return;
+        }
+        TableColumn<NoteRow, ?> col = rememberedColumn != null ? rememberedColumn : columns.get(NoteColumn.WIRE);
+        TablePosition<NoteRow, ?> p = SheetCell.focused(table);
+        if (p != null && p.getRow() == i && p.getTableColumn() == col
+                && table.getSelectionModel().isSelected(i, col)) {
+            return;
+        }
+        syncing = true;
+        try {
+            table.getSelectionModel().clearAndSelect(i, col);
+            table.getFocusModel().focus(i, col);
+        } finally {
+            syncing = false;
+        }
+    }
+
     private void selectionChanged() {
-        if (syncing) {
+        if (syncing || updating) {
             return;
         }
         int i = table.getSelectionModel().getSelectedIndex();

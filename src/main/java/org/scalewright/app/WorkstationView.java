@@ -70,7 +70,8 @@ final class WorkstationView {
         root.setTop(new VBox(menuBar(), toolBar()));
         root.setCenter(centre);
         root.setBottom(status.node());
-        scene = new Scene(root, 1560, 960);
+        var screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        scene = new Scene(root, Math.min(1560, screen.getWidth() - 20), Math.min(960, screen.getHeight() - 40));
         scene.getStylesheets().add(WorkstationView.class.getResource("workstation.css").toExternalForm());
         stage.setScene(scene);
         stage.titleProperty().bind(model.windowTitleProperty());
