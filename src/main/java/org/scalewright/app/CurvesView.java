@@ -3,6 +3,7 @@ package org.scalewright.app;
 import java.awt.geom.Rectangle2D;
 import java.util.EnumMap;
 import java.util.Map;
+import javafx.application.Platform;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.jfree.chart.JFreeChart;
@@ -28,14 +29,16 @@ final class CurvesView {
     private final VBox box = new VBox(4);
     private final Map<Curve, ChartViewer> viewers = new EnumMap<>(Curve.class);
     private boolean syncingAxes;
+    private CurveData pending;
 
     CurvesView(CurvesViewModel model) {
         this.model = model;
         box.getStyleClass().add("curves");
         CurveData data = model.data();
         for (Curve c : Curve.values()) {
-            JFreeChart chart = ScaleCurves.build(c, data);
+            JFreeChart chart = ScaleCurves.build(c, data, false);
             ChartViewer viewer = new ChartViewer(chart);
+            viewer.getCanvas().setTooltipEnabled(false); // hover texts come from the Picker
             viewer.setId("chart-" + c.name().toLowerCase(java.util.Locale.ROOT));
             viewer.setMinHeight(150);
             viewer.setPrefHeight(300);
@@ -45,7 +48,7 @@ final class CurvesView {
             viewers.put(c, viewer);
             box.getChildren().add(viewer);
         }
-        model.dataProperty().addListener((o, a, b) -> show(b));
+        model.dataProperty().addListener((o, a, b) -> later(b));
     }
 
     VBox node() {
@@ -62,10 +65,27 @@ final class CurvesView {
         return viewers.get(c).getChart();
     }
 
+    /**
+     * Redraws once after the event being handled: an Enter in the table both edits a note and
+     * moves the selection, which makes one redraw rather than two.
+     */
+    private void later(CurveData data) {
+        boolean scheduled = pending != null;
+        pending = data;
+        if (!scheduled) {
+            Platform.runLater(() -> {
+                CurveData d = pending;
+                pending = null;
+                show(d);
+            });
+        }
+    }
+
     private void show(CurveData data) {
         for (Curve c : Curve.values()) {
             ScaleCurves.refresh(viewers.get(c).getChart(), c, data);
         }
+        Timings.curvesShown(data.working().notes().size());
     }
 
     private void linkKeys(Curve source) {
@@ -94,6 +114,7 @@ final class CurvesView {
     /** Selects the note under a click: the point clicked, or the key nearest the click. */
     private final class Picker implements ChartMouseListenerFX {
         private final ChartViewer viewer;
+        private String shown;
 
         Picker(ChartViewer viewer) {
             this.viewer = viewer;
@@ -115,7 +136,16 @@ final class CurvesView {
 
         @Override
         public void chartMouseMoved(ChartMouseEventFX e) {
-            // hover text comes from the chart's tooltips
+            String text = null;
+            if (e.getEntity() instanceof XYItemEntity item) {
+                int key = (int) Math.round(item.getDataset().getXValue(item.getSeriesIndex(), item.getItem()));
+                text = ScaleCurves.seriesOf(e.getChart(), item.getDataset())
+                        .flatMap(s -> ScaleCurves.hoverText(model.data(), s, key)).orElse(null);
+            }
+            if (!java.util.Objects.equals(text, shown)) {
+                shown = text;
+                viewer.getCanvas().setTooltip(text, e.getTrigger().getScreenX() + 12, e.getTrigger().getScreenY() + 12);
+            }
         }
     }
 }

@@ -22,6 +22,7 @@ public final class DesktopLauncher {
      */
     public static int run(String[] args) {
         try {
+            Warmup.start(LaunchRequest.parse(args));
             Application.launch(ScalewrightApp.class, args);
             return 0;
         } catch (RuntimeException e) {

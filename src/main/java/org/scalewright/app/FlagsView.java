@@ -16,6 +16,8 @@ final class FlagsView {
         list.setItems(model.items());
         list.setPlaceholder(new Label("No flags: every note is inside the stress bands and the tension steps."));
         list.setCellFactory(v -> new ListCell<>() {
+            private final Tooltip tip = new Tooltip();
+
             @Override
             protected void updateItem(FlagsViewModel.Item item, boolean empty) {
                 super.updateItem(item, empty);
@@ -26,7 +28,8 @@ final class FlagsView {
                     return;
                 }
                 setText(item.key() + " " + item.noteName() + "  " + item.kind() + " — " + item.detail());
-                setTooltip(new Tooltip(item.detail()));
+                tip.setText(item.detail());
+                setTooltip(tip);
                 if (item.kind().startsWith("danger") || item.kind().startsWith("over")
                         || item.kind().startsWith("implausible")) {
                     getStyleClass().add("flag-danger");

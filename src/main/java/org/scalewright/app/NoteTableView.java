@@ -2,7 +2,8 @@ package org.scalewright.app;
 
 import java.util.EnumMap;
 import java.util.Map;
-import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.binding.Bindings;
+import javafx.beans.value.ChangeListener;
 import javafx.scene.control.Label;
 import javafx.scene.control.SelectionMode;
 import javafx.scene.control.TableColumn;
@@ -24,18 +25,12 @@ final class NoteTableView {
     private final TableView<NoteRow> table = new TableView<>();
     private final Map<NoteColumn, TableColumn<NoteRow, String>> columns = new EnumMap<>(NoteColumn.class);
     private boolean syncing;
-    private boolean updating;
-    private TableColumn<NoteRow, ?> rememberedColumn;
 
     NoteTableView(NoteTableViewModel model) {
         this.model = model;
         table.setId("note-table");
         table.getStyleClass().add("note-table");
-        // Replacing a row (after an edit) makes the table drop its selection; the listener added
-        // before the table's own remembers it, the one added after puts it back.
-        model.rows().addListener((javafx.collections.ListChangeListener<NoteRow>) c -> rememberSelection());
         table.setItems(model.rows());
-        model.rows().addListener((javafx.collections.ListChangeListener<NoteRow>) c -> restoreSelection());
         table.setEditable(true);
         table.getSelectionModel().setCellSelectionEnabled(true);
         table.getSelectionModel().setSelectionMode(SelectionMode.SINGLE);
@@ -50,6 +45,8 @@ final class NoteTableView {
                 columns.get(c).visibleProperty().bind(s.showDifferencesProperty());
             }
         }
+        // the remark is shown from the table's column menu (the + at the top right)
+        columns.get(NoteColumn.REMARK).setVisible(false);
         table.setRowFactory(t -> new FlaggedRow());
         table.addEventFilter(KeyEvent.KEY_PRESSED, this::onKeyPressed);
         table.addEventHandler(KeyEvent.KEY_TYPED, this::onKeyTyped);
@@ -79,7 +76,10 @@ final class NoteTableView {
         col.setSortable(false);
         col.setReorderable(false);
         col.setEditable(c.editable());
-        col.setCellValueFactory(f -> new ReadOnlyStringWrapper(model.text(f.getValue(), c)));
+        col.setCellValueFactory(f -> {
+            NoteRow row = f.getValue();
+            return Bindings.createStringBinding(() -> model.text(row, c), row.stateProperty());
+        });
         col.setCellFactory(x -> {
             SheetCell cell = new SheetCell();
             cell.getStyleClass().add(c.editable() ? "editable-cell" : "computed-cell");
@@ -161,38 +161,8 @@ final class NoteTableView {
         return (TableColumn<NoteRow, String>) p.getTableColumn();
     }
 
-    private void rememberSelection() {
-        if (!updating) {
-            updating = true;
-            TablePosition<NoteRow, ?> p = SheetCell.focused(table);
-            rememberedColumn = p == null ? null : p.getTableColumn();
-        }
-    }
-
-    private void restoreSelection() {
-        updating = false;
-        Integer key = model.session().selectedKeyProperty().get();
-        int i = key == null ? -1 : model.indexOf(key);
-        if (i < 0) {
-            return;
-        }
-        TableColumn<NoteRow, ?> col = rememberedColumn != null ? rememberedColumn : columns.get(NoteColumn.WIRE);
-        TablePosition<NoteRow, ?> p = SheetCell.focused(table);
-        if (p != null && p.getRow() == i && p.getTableColumn() == col
-                && table.getSelectionModel().isSelected(i, col)) {
-            return;
-        }
-        syncing = true;
-        try {
-            table.getSelectionModel().clearAndSelect(i, col);
-            table.getFocusModel().focus(i, col);
-        } finally {
-            syncing = false;
-        }
-    }
-
     private void selectionChanged() {
-        if (syncing || updating) {
+        if (syncing) {
             return;
         }
         int i = table.getSelectionModel().getSelectedIndex();
@@ -229,20 +199,37 @@ final class NoteTableView {
     /** A row marked by its flags: a style class per worst flag and the flag details on hover. */
     private static final class FlaggedRow extends TableRow<NoteRow> {
         private static final String[] MARKS = {"flag-danger", "flag-caution", "flag-other"};
+        private final ChangeListener<NoteRow.State> restyle = (o, a, b) -> mark(getItem(), isEmpty());
+        private NoteRow watched;
+        private final Tooltip tip = new Tooltip();
 
         @Override
         protected void updateItem(NoteRow row, boolean empty) {
             super.updateItem(row, empty);
+            if (watched != row) {
+                if (watched != null) {
+                    watched.stateProperty().removeListener(restyle);
+                }
+                watched = row;
+                if (row != null) {
+                    row.stateProperty().addListener(restyle);
+                }
+            }
+            mark(row, empty);
+        }
+
+        private void mark(NoteRow row, boolean empty) {
             getStyleClass().removeAll(MARKS);
             setTooltip(null);
             if (empty || row == null || !row.result().isFlagged()) {
                 return;
             }
-            getStyleClass().add(mark(row));
-            setTooltip(new Tooltip(row.result().noteName() + " (key " + row.key() + ")\n" + NoteColumn.flagDetails(row)));
+            getStyleClass().add(worst(row));
+            tip.setText(row.result().noteName() + " (key " + row.key() + ")\n" + NoteColumn.flagDetails(row));
+            setTooltip(tip);
         }
 
-        private static String mark(NoteRow row) {
+        private static String worst(NoteRow row) {
             boolean danger = row.result().flags().stream().anyMatch(f -> switch (f.kind()) {
                 case DANGER, OVER_STRENGTH, IMPLAUSIBLE -> true;
                 default -> false;

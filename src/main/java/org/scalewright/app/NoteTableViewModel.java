@@ -16,8 +16,9 @@ import org.scalewright.physics.ScaleAnalysis;
 
 /**
  * The note table's state: one row per note with its computed values and the reference's,
- * kept up to date with the session, and the editing of cells. Rows that did not change are
- * left in place, so the table keeps its selection and scroll position while the user types.
+ * kept up to date with the session, and the editing of cells. While the keys stay the same
+ * the row objects stay and only their states change, so the table keeps its selection and
+ * scroll position and redraws only what changed.
  */
 final class NoteTableViewModel {
     private final ScaleSession session;
@@ -99,26 +100,24 @@ final class NoteTableViewModel {
     private void refresh() {
         ScaleAnalysis a = session.analysis();
         ScaleAnalysis ref = session.referenceAnalysisProperty().get();
-        List<NoteRow> next = new ArrayList<>(a.notes().size());
+        List<NoteRow.State> next = new ArrayList<>(a.notes().size());
         List<Note> notes = a.scale().notes();
         for (int i = 0; i < notes.size(); i++) {
             NoteResult r = a.notes().get(i);
-            next.add(new NoteRow(notes.get(i), r, ref == null ? null : ref.result(r.key()).orElse(null)));
+            next.add(new NoteRow.State(notes.get(i), r, ref == null ? null : ref.result(r.key()).orElse(null)));
         }
         if (next.size() != rows.size() || !sameKeys(next)) {
-            rows.setAll(next);
+            rows.setAll(next.stream().map(NoteRow::new).toList());
             return;
         }
         for (int i = 0; i < next.size(); i++) {
-            if (!next.get(i).equals(rows.get(i))) {
-                rows.set(i, next.get(i));
-            }
+            rows.get(i).update(next.get(i));
         }
     }
 
-    private boolean sameKeys(List<NoteRow> next) {
+    private boolean sameKeys(List<NoteRow.State> next) {
         for (int i = 0; i < next.size(); i++) {
-            if (next.get(i).key() != rows.get(i).key()) {
+            if (next.get(i).note().key() != rows.get(i).key()) {
                 return false;
             }
         }

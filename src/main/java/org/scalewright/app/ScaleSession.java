@@ -92,6 +92,7 @@ final class ScaleSession {
         if (!history.push(next, description)) {
             return false;
         }
+        Timings.editStarted(description);
         setScale(next);
         inform("changed " + description);
         return true;
@@ -100,6 +101,7 @@ final class ScaleSession {
     void undo() {
         if (history.canUndo()) {
             String what = history.undoDescription();
+            Timings.editStarted("undo " + what);
             setScale(history.undo());
             inform("undid " + what);
         }
@@ -108,6 +110,7 @@ final class ScaleSession {
     void redo() {
         if (history.canRedo()) {
             String what = history.redoDescription();
+            Timings.editStarted("redo " + what);
             setScale(history.redo());
             inform("redid " + what);
         }

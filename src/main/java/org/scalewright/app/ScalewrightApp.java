@@ -15,15 +15,16 @@ public final class ScalewrightApp extends Application {
 
     @Override
     public void start(Stage stage) {
-        long fxStarted = StartupTiming.sinceProcessStart();
+        long fxStarted = Timings.sinceProcessStart();
         LaunchRequest request = LaunchRequest.parse(getParameters().getRaw().toArray(String[]::new));
         ScaleSession session = new ScaleSession();
         FxPrompts prompts = new FxPrompts(stage);
         WorkstationViewModel model = new WorkstationViewModel(session, prompts);
         WorkstationView view = new WorkstationView(stage, model);
         openAtStart(model, request);
-        StartupTiming.watch(view.curves().viewers(), fxStarted, StartupTiming.sinceProcessStart());
+        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart());
         stage.show();
+        view.focusTable();
         boolean cautions = !"false".equalsIgnoreCase(System.getProperty(CAUTIONS_PROPERTY));
         FirstStartCautions first = FirstStartCautions.forUser();
         if (cautions && !first.alreadyShown()) {

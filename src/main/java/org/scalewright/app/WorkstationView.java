@@ -84,6 +84,16 @@ final class WorkstationView {
         });
     }
 
+    /** Puts the keyboard focus on the table's first row (wire column), ready for typing. */
+    void focusTable() {
+        var t = table.node();
+        if (!t.getItems().isEmpty()) {
+            t.getSelectionModel().clearAndSelect(0, table.tableColumn(NoteColumn.WIRE));
+            t.getFocusModel().focus(0, table.tableColumn(NoteColumn.WIRE));
+        }
+        t.requestFocus();
+    }
+
     Stage stage() {
         return stage;
     }

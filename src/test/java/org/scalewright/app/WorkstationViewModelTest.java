@@ -251,10 +251,16 @@ class WorkstationViewModelTest {
     }
 
     @Test
-    void editsOfDifferentRowsLeaveTheOtherRowsInPlace() {
-        NoteRow untouched = row(2);
+    void anEditChangesOnlyTheStatesOfTheRowsItAffects() {
+        NoteRow two = row(2);
+        NoteRow.State twoBefore = two.state();
+        NoteRow nine = row(9);
+        NoteRow.State nineBefore = nine.state();
         vm.table().edit(9, NoteColumn.LENGTH, "900");
-        assertSame(untouched, row(2));
-        assertNotEquals(untouched, row(9));
+        assertSame(two, row(2));
+        assertSame(twoBefore, two.state());
+        assertSame(nine, row(9), "the row object stays, so the table keeps its selection");
+        assertNotEquals(nineBefore, nine.state());
+        assertEquals(0.9, nine.note().speakingLength(), 1e-12);
     }
 }

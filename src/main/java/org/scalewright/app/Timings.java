@@ -13,14 +13,43 @@ import javafx.animation.AnimationTimer;
 import org.jfree.chart.fx.ChartViewer;
 
 /**
- * The cold-start measurement: with {@code -Dscalewright.startupReport=FILE}, appends to FILE
- * one line with the milliseconds from the start of the process to the first frame in which
- * all three curves have been drawn. Nothing happens without the property.
+ * Measurements of the live window, taken only with {@code -Dscalewright.timingReport=FILE}:
+ * appends to FILE one line with the milliseconds from the start of the process to the first
+ * frame in which all three curves have been drawn, and one line per edit with the time from
+ * the edit to the three curves redrawn (recompute, table rows, chart data, and the drawing
+ * of the three chart canvases after the event). Nothing is measured without the property.
  */
-final class StartupTiming {
-    static final String PROPERTY = "scalewright.startupReport";
+final class Timings {
+    static final String PROPERTY = "scalewright.timingReport";
 
-    private StartupTiming() {
+    private Timings() {
+    }
+
+    private static String reportFile() {
+        String file = System.getProperty(PROPERTY);
+        return file == null || file.isBlank() ? null : file;
+    }
+
+    private static long editStarted;
+    private static String editName = "";
+
+    /** Notes the start of an edit (called on the JavaFX thread). */
+    static void editStarted(String what) {
+        if (reportFile() != null && editStarted == 0) {
+            editStarted = System.nanoTime();
+            editName = what;
+        }
+    }
+
+    /** Records the time from the edit noted by {@link #editStarted} to the curves redrawn now. */
+    static void curvesShown(int notes) {
+        String file = reportFile();
+        if (file != null && editStarted != 0) {
+            double ms = (System.nanoTime() - editStarted) / 1e6;
+            editStarted = 0;
+            write(Path.of(file), String.format(Locale.ROOT, "edit to table and curves redrawn: %.2f ms (%s, %d notes)%n",
+                    ms, editName, notes));
+        }
     }
 
     /** @return milliseconds from the start of the process to now */
@@ -37,8 +66,8 @@ final class StartupTiming {
      * @param windowBuilt milliseconds from process start to the window built with its sheet open
      */
     static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt) {
-        String file = System.getProperty(PROPERTY);
-        if (file == null || file.isBlank()) {
+        String file = reportFile();
+        if (file == null) {
             return;
         }
         new AnimationTimer() {
