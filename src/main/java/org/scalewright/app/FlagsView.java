@@ -14,7 +14,8 @@ final class FlagsView {
         list.setId("flags-list");
         list.getStyleClass().add("flags-list");
         list.setItems(model.items());
-        list.setPlaceholder(new Label("No flags: every note is inside the stress bands and the tension steps."));
+        list.setPlaceholder(new Label("No flags: every note is inside the stress bands, with no large "
+                + "tension step and no implausible value."));
         list.setCellFactory(v -> new ListCell<>() {
             private final Tooltip tip = new Tooltip();
 

@@ -75,7 +75,7 @@ final class FxPrompts implements UserPrompts {
         TextArea list = new TextArea(String.join("\n", problems));
         list.setEditable(false);
         list.setWrapText(true);
-        list.setPrefRowCount(Math.min(14, Math.max(3, problems.size())));
+        list.setPrefRowCount(Math.min(16, problems.size() + 3));
         list.setPrefColumnCount(70);
         a.getDialogPane().setContent(new VBox(6, new Label(problems.size() + (problems.size() == 1 ? " problem:"
                 : " problems:")), list));

@@ -47,6 +47,11 @@ enum NoteColumn {
         this.group = group;
     }
 
+    /** @return the column's name in plain words, without unit ({@code speaking length}, {@code wire}) */
+    String word() {
+        return this == LENGTH ? "speaking length" : name;
+    }
+
     boolean editable() {
         return editable;
     }

@@ -78,7 +78,7 @@ final class NoteTableViewModel {
             session.complain("key " + key + " is not in the scale");
             return false;
         }
-        String label = column.header(session.units());
+        String label = column.word();
         if (!column.editable()) {
             session.complain(label + " is computed from the other columns and cannot be edited");
             return false;

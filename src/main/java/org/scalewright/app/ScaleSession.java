@@ -61,7 +61,7 @@ final class ScaleSession {
         Scale empty = new Scale("", PitchStandard.ISO_16, List.of(), null);
         history = new EditHistory(empty);
         setScale(empty);
-        setReference(empty, "");
+        setReference(empty, "none");
     }
 
     // ---- the working scale and its edits ----
@@ -192,12 +192,14 @@ final class ScaleSession {
         Scale loaded = ScaleSheetReader.standard().read(sheet);
         history.reset(loaded);
         file.set(saveBack ? sheet : null);
-        documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo, Save asks for a new file)"));
+        documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo)"));
         selectedKey.set(null);
         reference.set(loaded);
         referenceName.set("as opened: " + sheet.getFileName());
         setScale(loaded);
-        inform("opened " + sheet + " (" + loaded.notes().size() + " notes)");
+        inform(saveBack ? "opened " + sheet + " (" + loaded.notes().size() + " notes)"
+                : "opened the demo sheet " + sheet.getFileName() + " (" + loaded.notes().size()
+                + " notes); Save asks for a new file, so the demo stays as it is");
     }
 
     /** Saves to the current file; false when there is none (use {@link #saveAs}). */

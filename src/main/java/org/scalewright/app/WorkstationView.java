@@ -258,7 +258,7 @@ final class WorkstationView {
         reference.setId("reference-button");
         reference.textProperty().bind(s.referenceNameProperty());
         reference.getItems().setAll(referenceItems());
-        reference.setTooltip(new Tooltip("the reference scale drawn beside the working scale (grey dashed)"));
+        reference.setTooltip(new Tooltip("the reference scale, drawn as a wide pale line under the working scale"));
 
         ToolBar bar = new ToolBar(label("Units"), units, label("A4"), a4, label("Hz"), gap(),
                 label("Strength"), strength, gap(), label("Reference"), reference);

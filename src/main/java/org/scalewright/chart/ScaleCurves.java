@@ -41,7 +41,8 @@ import org.scalewright.physics.StressBands;
  * </ul>
  * Every chart marks the section boundaries and the wound/plain changes of the working scale
  * (labelled dashed lines), shows flagged notes as red triangles, draws the reference scale
- * (grey dashed) and a proposal (green dash-dot) beside the working scale (blue), and rings
+ * (a wide pale line under the working one) and a proposal (green dash-dot) beside the
+ * working scale (blue), and rings
  * the highlighted key. The datasets are laid out as in {@link CurveSeries}; x is the key
  * number. {@link #refresh} puts new data into a chart already built, which is how a live
  * window redraws after an edit.

@@ -77,7 +77,7 @@ class WorkstationViewModelTest {
         assertFalse(vm.table().edit(6, NoteColumn.WIRE, "abc"));
         assertSame(before, session.scale());
         assertTrue(session.messageIsProblemProperty().get());
-        assertEquals("key 6 (D1), wire # or mm: expected a size number (12 to 23) or a diameter in mm, was 'abc'",
+        assertEquals("key 6 (D1), wire: expected a size number (12 to 23) or a diameter in mm, was 'abc'",
                 session.messageProperty().get());
         assertFalse(vm.table().edit(6, NoteColumn.TENSION, "600"));
         assertSame(before, session.scale());
