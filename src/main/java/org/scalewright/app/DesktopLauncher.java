@@ -10,6 +10,8 @@ import javafx.application.Application;
  */
 public final class DesktopLauncher {
     private static final Logger LOG = System.getLogger("org.scalewright.app");
+    /** JavaFX's own logger; kept here so that its level stays set. */
+    private static final java.util.logging.Logger JAVAFX_LOG = java.util.logging.Logger.getLogger("javafx");
 
     private DesktopLauncher() {
     }
@@ -21,6 +23,8 @@ public final class DesktopLauncher {
      * @return 0 when the window ran, 1 when it could not be opened (e.g. no display)
      */
     public static int run(String[] args) {
+        // JavaFX warns that it runs from the class path, which is how this one jar is built
+        JAVAFX_LOG.setLevel(java.util.logging.Level.SEVERE);
         try {
             Warmup.start(LaunchRequest.parse(args));
             Application.launch(ScalewrightApp.class, args);
