@@ -36,6 +36,7 @@ final class NoteTableView {
         table.getSelectionModel().setSelectionMode(SelectionMode.SINGLE);
         table.setPlaceholder(new Label("No sheet open: File > Open… (Ctrl+O)"));
         table.setTableMenuButtonVisible(true);
+        table.setFixedCellSize(22); // every row one line: no per-row height measuring
         for (NoteColumn c : NoteColumn.values()) {
             table.getColumns().add(column(c));
         }

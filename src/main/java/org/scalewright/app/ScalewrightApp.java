@@ -22,8 +22,10 @@ public final class ScalewrightApp extends Application {
         WorkstationViewModel model = new WorkstationViewModel(session, prompts);
         WorkstationView view = new WorkstationView(stage, model);
         openAtStart(model, request);
-        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart());
+        long[] shown = new long[1];
+        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart(), shown);
         stage.show();
+        shown[0] = Timings.sinceProcessStart();
         view.focusTable();
         boolean cautions = !"false".equalsIgnoreCase(System.getProperty(CAUTIONS_PROPERTY));
         FirstStartCautions first = FirstStartCautions.forUser();

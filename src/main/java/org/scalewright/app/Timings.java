@@ -66,6 +66,13 @@ final class Timings {
      * @param windowBuilt milliseconds from process start to the window built with its sheet open
      */
     static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt) {
+        watch(viewers, fxStarted, windowBuilt, new long[1]);
+    }
+
+    /**
+     * @param shown set by the caller to the milliseconds at which {@code stage.show()} returned
+     */
+    static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt, long[] shown) {
         String file = reportFile();
         if (file == null) {
             return;
@@ -80,7 +87,7 @@ final class Timings {
                     long ms = sinceProcessStart();
                     write(Path.of(file), String.format(Locale.ROOT, "cold start to a window with curves: %d ms "
                             + "from process start (JavaFX start method entered at %d ms, window built with the "
-                            + "sheet open at %d ms)%n", ms, fxStarted, windowBuilt));
+                            + "sheet open at %d ms, shown at %d ms)%n", ms, fxStarted, windowBuilt, shown[0]));
                 }
             }
         }.start();

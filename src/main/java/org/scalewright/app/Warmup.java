@@ -11,9 +11,9 @@ import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.physics.ScaleAnalyzer;
 
 /**
- * Shortens the start: while JavaFX starts up on one thread, another reads the sheet the
- * window will open, analyses it and builds the curves once, so that the classes and tables
- * they need are loaded when the window asks for them. Its results are thrown away; the window
+ * Shortens the start: while JavaFX starts up on one thread, another starts the font system,
+ * reads the preferences and the sheet the window will open, analyses it and builds the curves
+ * once, so that the classes and tables they need are loaded when the window asks for them. Its results are thrown away; the window
  * reads the sheet again itself (and reports any problem with it).
  */
 final class Warmup {
@@ -30,6 +30,11 @@ final class Warmup {
 
     private static void run(Optional<Path> sheet) {
         try {
+            // the charts measure their texts with the AWT font system, slow to start the first time
+            java.awt.Font font = new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 11);
+            new java.awt.font.TextLayout("Tension per string 1,600 N", font,
+                    new java.awt.font.FontRenderContext(null, true, true)).getBounds();
+            FirstStartCautions.forUser().alreadyShown();
             var settings = BuiltInData.defaultSettings();
             BuiltInData.astmMaximum();
             BuiltInData.cautions();
