@@ -17,7 +17,7 @@ final class CurveLook {
     static final Color MINOR_GRID = new Color(0xF1EEE8);
     static final Color TEXT = new Color(0x2B2B2B);
     static final Color WORKING = new Color(0x1F4E79);
-    static final Color REFERENCE = new Color(0x9A9A9A);
+    static final Color REFERENCE = new Color(0xB9B2A4);
     static final Color PROPOSAL = new Color(0x2E8B57);
     static final Color FLAGGED = new Color(0xC8102E);
     static final Color SELECTED = new Color(0xE08A00);
@@ -30,8 +30,8 @@ final class CurveLook {
     static final Font MARKER = new Font(Font.SANS_SERIF, Font.PLAIN, 10);
 
     static final Stroke WORKING_STROKE = new BasicStroke(1.8f);
-    static final Stroke REFERENCE_STROKE = new BasicStroke(1.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND,
-            1f, new float[] {5f, 3f}, 0f);
+    /** Wide and pale, under the working curve: a halo where they agree, a second line where they part. */
+    static final Stroke REFERENCE_STROKE = new BasicStroke(5f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
     static final Stroke PROPOSAL_STROKE = new BasicStroke(1.8f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND,
             1f, new float[] {9f, 3f, 2f, 3f}, 0f);
     static final Stroke BOUNDARY_STROKE = new BasicStroke(1.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER,

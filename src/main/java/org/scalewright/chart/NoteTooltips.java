@@ -9,17 +9,17 @@ import org.scalewright.physics.NoteResult;
 
 /**
  * Hover text for a point: the note and its values in display units. The items of the one
- * series are the given notes, in order.
+ * series are the notes last given to {@link #show}, in order.
  */
 final class NoteTooltips implements XYToolTipGenerator {
-    private final String scaleName;
-    private final List<NoteResult> notes;
-    private final DisplayUnits units;
+    private String scaleName = "";
+    private List<NoteResult> notes = List.of();
+    private DisplayUnits units = DisplayUnits.METRIC;
 
-    NoteTooltips(String scaleName, List<NoteResult> notes, DisplayUnits units) {
-        this.scaleName = scaleName;
-        this.notes = List.copyOf(notes);
-        this.units = units;
+    void show(String name, List<NoteResult> drawn, DisplayUnits u) {
+        this.scaleName = name;
+        this.notes = List.copyOf(drawn);
+        this.units = u;
     }
 
     @Override

@@ -41,7 +41,8 @@ import org.scalewright.physics.StressBands;
  * </ul>
  * Every chart marks the section boundaries and the wound/plain changes of the working scale
  * (labelled dashed lines), shows flagged notes as red triangles, draws the reference scale
- * (grey dashed) and a proposal (green dash-dot) beside the working scale (blue), and rings
+ * (a wide pale line under the working one) and a proposal (green dash-dot) beside the
+ * working scale (blue), and rings
  * the highlighted key. The datasets are laid out as in {@link CurveSeries}; x is the key
  * number. {@link #refresh} puts new data into a chart already built, which is how a live
  * window redraws after an edit.
@@ -65,8 +66,18 @@ public final class ScaleCurves {
         return build(Curve.INHARMONICITY, data);
     }
 
-    /** @return a new chart of {@code curve} showing {@code data} */
+    /** @return a new chart of {@code curve} showing {@code data}, with hover texts on its points */
     public static JFreeChart build(Curve curve, CurveData data) {
+        return build(curve, data, true);
+    }
+
+    /**
+     * @param hoverTexts true to give every point its hover text while drawing (image maps,
+     *                   SVG, a simple viewer); false for a live window that asks
+     *                   {@link #hoverText} only for the point under the mouse, which draws faster
+     * @return a new chart of {@code curve} showing {@code data}
+     */
+    public static JFreeChart build(Curve curve, CurveData data, boolean hoverTexts) {
         ValueAxis valueAxis;
         if (curve == Curve.INHARMONICITY) {
             LogAxis log = new LogAxis(curve.axisLabel(data.units()));
@@ -89,7 +100,11 @@ public final class ScaleCurves {
         plot.setDatasetRenderingOrder(DatasetRenderingOrder.FORWARD);
         for (CurveSeries s : CurveSeries.values()) {
             plot.setDataset(s.index(), new XYSeriesCollection());
-            plot.setRenderer(s.index(), renderer(s));
+            XYLineAndShapeRenderer r = renderer(s);
+            if (hoverTexts) {
+                r.setDefaultToolTipGenerator(new NoteTooltips());
+            }
+            plot.setRenderer(s.index(), r);
         }
         style(plot);
         if (curve == Curve.INHARMONICITY) {
@@ -172,7 +187,37 @@ public final class ScaleCurves {
             }
         }
         c.addSeries(series);
-        plot.getRenderer(s.index()).setSeriesToolTipGenerator(0, new NoteTooltips(scaleName, drawn, units));
+        if (plot.getRenderer(s.index()).getDefaultToolTipGenerator() instanceof NoteTooltips t) {
+            t.show(scaleName, drawn, units);
+        }
+    }
+
+    /**
+     * @return the hover text of {@code key} in a series of {@code data} (the note and its values
+     *         in the display units), or empty when the series does not have the key
+     */
+    public static Optional<String> hoverText(CurveData data, CurveSeries series, int key) {
+        Optional<ScaleAnalysis> a = switch (series) {
+            case REFERENCE -> data.reference();
+            case PROPOSAL -> data.proposal();
+            case WORKING, FLAGGED, SELECTED -> Optional.of(data.working());
+        };
+        String name = switch (series) {
+            case REFERENCE -> "reference";
+            case PROPOSAL -> "proposal";
+            default -> "working";
+        };
+        return a.flatMap(x -> x.result(key)).map(r -> NoteTooltips.text(name, r, data.units()));
+    }
+
+    /** @return which series a dataset of a chart made by {@link #build} holds, if it is one of them */
+    public static Optional<CurveSeries> seriesOf(JFreeChart chart, org.jfree.data.xy.XYDataset dataset) {
+        for (CurveSeries s : CurveSeries.values()) {
+            if (chart.getXYPlot().getDataset(s.index()) == dataset) {
+                return Optional.of(s);
+            }
+        }
+        return Optional.empty();
     }
 
     private static XYLineAndShapeRenderer renderer(CurveSeries s) {

@@ -161,6 +161,36 @@ class ScaleCurvesTest {
     }
 
     @Test
+    void hoverTextsNameTheNoteAndItsValues() {
+        CurveData data = CurveData.of(working, DisplayUnits.IMPERIAL).withReference(reference);
+        NoteResult r = working.result(20).orElseThrow();
+        String text = ScaleCurves.hoverText(data, CurveSeries.WORKING, 20).orElseThrow();
+        assertTrue(text.startsWith("working, key 20 " + r.noteName() + " (tenor)"), text);
+        assertTrue(text.contains(String.format(java.util.Locale.ROOT, "%.0f lbf per string",
+                r.tension() / UnitConversions.NEWTONS_PER_LBF)), text);
+        assertTrue(ScaleCurves.hoverText(data, CurveSeries.REFERENCE, 20).orElseThrow().startsWith("reference"));
+        assertTrue(ScaleCurves.hoverText(data, CurveSeries.PROPOSAL, 20).isEmpty());
+        assertTrue(ScaleCurves.hoverText(data, CurveSeries.WORKING, 99).isEmpty());
+
+        // a chart built with hover texts gives each drawn point its text; one built without, none
+        JFreeChart with = ScaleCurves.tension(data);
+        var info = new org.jfree.chart.ChartRenderingInfo();
+        with.draw(ChartImages.draw(with, 10, 10).createGraphics(), new java.awt.geom.Rectangle2D.Double(0, 0, 800, 400),
+                info);
+        long texts = info.getEntityCollection().getEntities().stream()
+                .filter(e -> e instanceof org.jfree.chart.entity.XYItemEntity x && x.getToolTipText() != null).count();
+        assertTrue(texts >= working.notes().size(), texts + " hover texts");
+        JFreeChart without = ScaleCurves.build(Curve.TENSION, data, false);
+        var none = new org.jfree.chart.ChartRenderingInfo();
+        without.draw(ChartImages.draw(without, 10, 10).createGraphics(),
+                new java.awt.geom.Rectangle2D.Double(0, 0, 800, 400), none);
+        assertEquals(0, none.getEntityCollection().getEntities().stream()
+                .filter(e -> e instanceof org.jfree.chart.entity.XYItemEntity x && x.getToolTipText() != null).count());
+        assertEquals(java.util.Optional.of(CurveSeries.WORKING),
+                ScaleCurves.seriesOf(with, ScaleCurves.dataset(with, CurveSeries.WORKING)));
+    }
+
+    @Test
     void imageSizeMustBePositive() {
         JFreeChart chart = ScaleCurves.tension(CurveData.of(working, DisplayUnits.METRIC));
         var e = assertThrows(IllegalArgumentException.class, () -> ChartImages.draw(chart, 0, 10));

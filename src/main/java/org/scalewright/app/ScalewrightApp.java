@@ -1,0 +1,56 @@
+package org.scalewright.app;
+
+import java.util.List;
+import javafx.application.Application;
+import javafx.application.Platform;
+import javafx.stage.Stage;
+
+/**
+ * The JavaFX application: one workstation window on the sheet asked for at launch (the demo
+ * grand by default). Started by {@link DesktopLauncher}.
+ */
+public final class ScalewrightApp extends Application {
+    /** Set {@code -Dscalewright.firstStartCautions=false} to skip the first-start cautions (tests). */
+    static final String CAUTIONS_PROPERTY = "scalewright.firstStartCautions";
+
+    @Override
+    public void start(Stage stage) {
+        long fxStarted = Timings.sinceProcessStart();
+        LaunchRequest request = LaunchRequest.parse(getParameters().getRaw().toArray(String[]::new));
+        ScaleSession session = new ScaleSession();
+        FxPrompts prompts = new FxPrompts(stage);
+        WorkstationViewModel model = new WorkstationViewModel(session, prompts);
+        WorkstationView view = new WorkstationView(stage, model);
+        openAtStart(model, request);
+        long[] shown = new long[1];
+        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart(), shown);
+        stage.show();
+        shown[0] = Timings.sinceProcessStart();
+        view.focusTable();
+        boolean cautions = !"false".equalsIgnoreCase(System.getProperty(CAUTIONS_PROPERTY));
+        FirstStartCautions first = FirstStartCautions.forUser();
+        if (cautions && !first.alreadyShown()) {
+            first.markShown();
+            Platform.runLater(model::showCautions);
+        }
+    }
+
+    /** Opens the sheet of the request, or the demo grand, or leaves the window empty with a hint. */
+    static void openAtStart(WorkstationViewModel model, LaunchRequest request) {
+        if (request.sheet().isPresent()) {
+            model.openSheet(request.sheet().get(), true);
+        } else {
+            var demo = DemoSheet.find();
+            if (demo.isPresent()) {
+                model.openSheet(demo.get(), false);
+            } else {
+                List<String> looked = DemoSheet.candidates().stream().map(Object::toString).toList();
+                model.session().complain("demo sheet not found (looked for " + String.join(", ", looked)
+                        + "); open a sheet with File > Open");
+            }
+        }
+        if (!request.problem().isEmpty()) {
+            model.session().complain(request.problem());
+        }
+    }
+}

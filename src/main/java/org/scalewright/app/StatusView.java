@@ -1,0 +1,57 @@
+package org.scalewright.app;
+
+import javafx.geometry.Insets;
+import javafx.geometry.Pos;
+import javafx.scene.control.Label;
+import javafx.scene.control.ToggleButton;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/** The status line: totals and flag count, the last message, section totals on demand. */
+final class StatusView {
+    private final VBox box = new VBox(2);
+
+    StatusView(StatusViewModel model) {
+        box.getStyleClass().add("status-line");
+        box.setPadding(new Insets(3, 8, 3, 8));
+        Label totals = new Label();
+        totals.setId("status-totals");
+        totals.textProperty().bind(model.totalsProperty());
+        Label message = new Label();
+        message.setId("status-message");
+        message.textProperty().bind(model.session().messageProperty());
+        model.session().messageIsProblemProperty().addListener((o, a, problem) -> {
+            message.getStyleClass().remove("problem");
+            if (problem) {
+                message.getStyleClass().add("problem");
+            }
+        });
+        message.setMinWidth(0);
+        message.setMaxWidth(Double.MAX_VALUE);
+        message.setAlignment(Pos.CENTER_RIGHT);
+        HBox.setHgrow(message, Priority.ALWAYS);
+        ToggleButton sectionsButton = new ToggleButton("Section totals");
+        sectionsButton.setId("status-sections-button");
+        sectionsButton.setFocusTraversable(false);
+        sectionsButton.setMinWidth(Region.USE_PREF_SIZE);
+        totals.setMinWidth(Region.USE_PREF_SIZE);
+        sectionsButton.selectedProperty().bindBidirectional(model.showSectionsProperty());
+        Region gap = new Region();
+        gap.setMinWidth(12);
+        HBox first = new HBox(8, sectionsButton, totals, gap, message);
+        first.setAlignment(Pos.CENTER_LEFT);
+        Label sections = new Label();
+        sections.setId("status-sections");
+        sections.textProperty().bind(model.sectionsProperty());
+        sections.visibleProperty().bind(model.showSectionsProperty());
+        sections.managedProperty().bind(model.showSectionsProperty());
+        sections.setWrapText(true);
+        box.getChildren().addAll(first, sections);
+    }
+
+    VBox node() {
+        return box;
+    }
+}

@@ -1,0 +1,35 @@
+package org.scalewright.app;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * The questions and notices the window puts to the user. The window answers them with
+ * dialogs; tests answer them from a script.
+ */
+interface UserPrompts {
+    /** What to do with unsaved changes. */
+    enum SaveChoice { SAVE, DISCARD, CANCEL }
+
+    /** @return whether to save the changes to {@code documentName} before going on */
+    SaveChoice askToSave(String documentName);
+
+    /** @return the sheet to open, or empty when the user cancelled */
+    Optional<Path> chooseSheetToOpen(String title);
+
+    /** @return where to save the sheet, or empty when the user cancelled */
+    Optional<Path> chooseSheetToSave(String suggestedName);
+
+    /** @return the maker's strength table to read, or empty when the user cancelled */
+    Optional<Path> chooseStrengthTable();
+
+    /** Shows the problems of a file that could not be read, one per line. */
+    void showProblems(String title, String intro, List<String> problems);
+
+    /** Shows that something failed and why. */
+    void showError(String title, String message);
+
+    /** Shows the safety cautions. */
+    void showCautions(List<String> cautions);
+}

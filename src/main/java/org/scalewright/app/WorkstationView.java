@@ -1,0 +1,297 @@
+package org.scalewright.app;
+
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Insets;
+import javafx.geometry.Orientation;
+import javafx.geometry.Pos;
+import javafx.scene.Scene;
+import javafx.scene.control.CheckMenuItem;
+import javafx.scene.control.ChoiceBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuButton;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.RadioMenuItem;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.TextField;
+import javafx.scene.control.TitledPane;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.control.ToolBar;
+import javafx.scene.control.Tooltip;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.Stage;
+import org.scalewright.model.Scale;
+
+/**
+ * The workstation window: menus and a tool bar of settings on top, the note table with the
+ * flags list below it on the left, the three curves on the right, the status line at the
+ * bottom. It lays out the part views and wires menu items to the view model's commands.
+ */
+final class WorkstationView {
+    private final Stage stage;
+    private final WorkstationViewModel model;
+    private final NoteTableView table;
+    private final CurvesView curves;
+    private final FlagsView flags;
+    private final StatusView status;
+    private final Scene scene;
+
+    WorkstationView(Stage stage, WorkstationViewModel model) {
+        this.stage = stage;
+        this.model = model;
+        this.table = new NoteTableView(model.table());
+        this.curves = new CurvesView(model.curves());
+        this.flags = new FlagsView(model.flags());
+        this.status = new StatusView(model.status());
+
+        TitledPane flagsPane = new TitledPane();
+        flagsPane.setId("flags-pane");
+        flagsPane.textProperty().bind(Bindings.size(model.flags().items()).asString("Flags (%d) — click one to go to its note"));
+        flagsPane.setContent(flags.node());
+        flagsPane.setCollapsible(true);
+        flagsPane.setPrefHeight(170);
+        flagsPane.setMinHeight(60);
+        SplitPane left = new SplitPane(table.node(), flagsPane);
+        left.setOrientation(Orientation.VERTICAL);
+        left.setDividerPositions(0.78);
+        SplitPane.setResizableWithParent(flagsPane, false);
+        SplitPane centre = new SplitPane(left, curves.node());
+        centre.setDividerPositions(0.58);
+
+        BorderPane root = new BorderPane();
+        root.getStyleClass().add("workstation");
+        root.setTop(new VBox(menuBar(), toolBar()));
+        root.setCenter(centre);
+        root.setBottom(status.node());
+        var screen = javafx.stage.Screen.getPrimary().getVisualBounds();
+        scene = new Scene(root, Math.min(1560, screen.getWidth() - 20), Math.min(960, screen.getHeight() - 40));
+        scene.getStylesheets().add(WorkstationView.class.getResource("workstation.css").toExternalForm());
+        stage.setScene(scene);
+        stage.titleProperty().bind(model.windowTitleProperty());
+        stage.setMinWidth(900);
+        stage.setMinHeight(600);
+        stage.setOnCloseRequest(e -> {
+            if (!model.mayClose()) {
+                e.consume();
+            }
+        });
+    }
+
+    /** Puts the keyboard focus on the table's first row (wire column), ready for typing. */
+    void focusTable() {
+        var t = table.node();
+        if (!t.getItems().isEmpty()) {
+            t.getSelectionModel().clearAndSelect(0, table.tableColumn(NoteColumn.WIRE));
+            t.getFocusModel().focus(0, table.tableColumn(NoteColumn.WIRE));
+        }
+        t.requestFocus();
+    }
+
+    Stage stage() {
+        return stage;
+    }
+
+    Scene scene() {
+        return scene;
+    }
+
+    NoteTableView table() {
+        return table;
+    }
+
+    CurvesView curves() {
+        return curves;
+    }
+
+    WorkstationViewModel model() {
+        return model;
+    }
+
+    private MenuBar menuBar() {
+        ScaleSession s = model.session();
+        MenuItem open = item("Open sheet…", "menu-open", new KeyCodeCombination(KeyCode.O, KeyCombination.SHORTCUT_DOWN),
+                model::open);
+        MenuItem save = item("Save", "menu-save", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN),
+                model::save);
+        MenuItem saveAs = item("Save as…", "menu-save-as", new KeyCodeCombination(KeyCode.S,
+                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), model::saveAs);
+        MenuItem quit = item("Quit", "menu-quit", new KeyCodeCombination(KeyCode.Q, KeyCombination.SHORTCUT_DOWN),
+                () -> {
+                    if (model.mayClose()) {
+                        stage.close();
+                    }
+                });
+        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(), quit);
+
+        MenuItem undo = item("Undo", "menu-undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN),
+                s::undo);
+        undo.textProperty().bind(Bindings.when(s.canUndoProperty())
+                .then(Bindings.concat("Undo ", s.undoTextProperty())).otherwise("Undo"));
+        undo.disableProperty().bind(s.canUndoProperty().not());
+        MenuItem redo = item("Redo", "menu-redo", new KeyCodeCombination(KeyCode.Y, KeyCombination.SHORTCUT_DOWN),
+                s::redo);
+        redo.textProperty().bind(Bindings.when(s.canRedoProperty())
+                .then(Bindings.concat("Redo ", s.redoTextProperty())).otherwise("Redo"));
+        redo.disableProperty().bind(s.canRedoProperty().not());
+        MenuItem redoAlt = item("Redo (Ctrl+Shift+Z)", "menu-redo-alt", new KeyCodeCombination(KeyCode.Z,
+                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), s::redo);
+        redoAlt.disableProperty().bind(s.canRedoProperty().not());
+        redoAlt.setVisible(false);
+        Menu edit = new Menu("Edit", null, undo, redo, redoAlt);
+
+        Menu reference = new Menu("Reference", null, referenceItems());
+
+        ToggleGroup units = new ToggleGroup();
+        Menu unitsMenu = new Menu("Units");
+        for (WorkstationViewModel.UnitChoice c : WorkstationViewModel.UnitChoice.values()) {
+            RadioMenuItem r = new RadioMenuItem(c.toString());
+            r.setToggleGroup(units);
+            r.setSelected(s.units().equals(c.units()));
+            r.setOnAction(e -> model.setUnits(c));
+            s.unitsProperty().addListener((o, a, b) -> r.setSelected(b.equals(c.units())));
+            unitsMenu.getItems().add(r);
+        }
+        CheckMenuItem sections = new CheckMenuItem("Section totals in the status line");
+        sections.selectedProperty().bindBidirectional(model.status().showSectionsProperty());
+        Menu view = new Menu("View", null, unitsMenu, sections);
+
+        Menu wire = new Menu("Wire", null, strengthItems());
+
+        MenuItem cautions = item("Safety cautions…", "menu-cautions", null, model::showCautions);
+        MenuItem keys = item("Keyboard…", "menu-keys", null, () -> new FxPrompts(stage).showKeyboardHelp());
+        Menu help = new Menu("Help", null, cautions, keys);
+        MenuBar bar = new MenuBar(file, edit, view, reference, wire, help);
+        bar.setUseSystemMenuBar(false);
+        return bar;
+    }
+
+    private MenuItem[] referenceItems() {
+        ScaleSession s = model.session();
+        MenuItem current = item("Use the working scale as it is now", "menu-ref-current", null,
+                s::useCurrentAsReference);
+        MenuItem open = item("Open reference sheet…", "menu-ref-open", null, model::openReference);
+        CheckMenuItem show = new CheckMenuItem("Draw the reference on the curves");
+        show.selectedProperty().bindBidirectional(s.showReferenceProperty());
+        CheckMenuItem diff = new CheckMenuItem("Differences to the reference in the table");
+        diff.setId("menu-ref-diff");
+        diff.selectedProperty().bindBidirectional(s.showDifferencesProperty());
+        return new MenuItem[] {current, open, new SeparatorMenuItem(), show, diff};
+    }
+
+    private MenuItem[] strengthItems() {
+        ScaleSession s = model.session();
+        ToggleGroup g = new ToggleGroup();
+        RadioMenuItem min = new RadioMenuItem("ASTM A228 minimum (default)");
+        RadioMenuItem max = new RadioMenuItem("ASTM A228 maximum");
+        RadioMenuItem maker = new RadioMenuItem("Maker's table from a file…");
+        for (RadioMenuItem r : new RadioMenuItem[] {min, max, maker}) {
+            r.setToggleGroup(g);
+        }
+        Runnable sync = () -> {
+            StrengthChoice c = s.strengthProperty().get();
+            min.setSelected(c.file().isEmpty() && c.table() == StrengthChoice.minimum().table());
+            max.setSelected(c.file().isEmpty() && c.table() == StrengthChoice.maximum().table());
+            maker.setSelected(c.file().isPresent());
+        };
+        s.strengthProperty().addListener((o, a, b) -> sync.run());
+        min.setOnAction(e -> model.useBuiltInMinimum());
+        max.setOnAction(e -> model.useBuiltInMaximum());
+        // a cancelled or failed maker's table leaves the previous choice selected
+        maker.setOnAction(e -> {
+            model.useMakersTable();
+            sync.run();
+        });
+        sync.run();
+        return new MenuItem[] {min, max, maker};
+    }
+
+    private ToolBar toolBar() {
+        ScaleSession s = model.session();
+        ChoiceBox<WorkstationViewModel.UnitChoice> units = new ChoiceBox<>();
+        units.setId("units-choice");
+        units.getItems().setAll(WorkstationViewModel.UnitChoice.values());
+        units.setValue(WorkstationViewModel.UnitChoice.METRIC);
+        units.setOnAction(e -> model.setUnits(units.getValue()));
+        s.unitsProperty().addListener((o, a, b) -> {
+            for (var c : WorkstationViewModel.UnitChoice.values()) {
+                if (c.units().equals(b)) {
+                    units.setValue(c);
+                }
+            }
+        });
+        units.setTooltip(new Tooltip("units for display and entry; sheets keep their own column units"));
+
+        TextField a4 = new TextField();
+        a4.setId("a4-field");
+        a4.setPrefColumnCount(5);
+        Runnable showA4 = () -> a4.setText(DisplayFormat.decimals(s.scale().pitch().a4(), 1, 2));
+        showA4.run();
+        s.scaleProperty().addListener((o, a, b) -> showA4.run());
+        a4.setOnAction(e -> {
+            if (!model.setA4(a4.getText())) {
+                showA4.run();
+            }
+        });
+        a4.focusedProperty().addListener((o, was, is) -> {
+            if (!is && !a4.getText().equals(DisplayFormat.decimals(s.scale().pitch().a4(), 1, 2))
+                    && !model.setA4(a4.getText())) {
+                showA4.run();
+            }
+        });
+        a4.setTooltip(new Tooltip("pitch standard: the frequency of A4 (key 49); an undoable edit of the scale"));
+
+        MenuButton strength = new MenuButton();
+        strength.setId("strength-button");
+        strength.textProperty().bind(Bindings.createStringBinding(() -> s.strengthProperty().get().label(),
+                s.strengthProperty()));
+        strength.getItems().setAll(strengthItems());
+        strength.setTooltip(new Tooltip("breaking-strength table the percent of breaking strength is taken against"));
+
+        MenuButton reference = new MenuButton();
+        reference.setId("reference-button");
+        reference.textProperty().bind(s.referenceNameProperty());
+        reference.getItems().setAll(referenceItems());
+        reference.setTooltip(new Tooltip("the reference scale, drawn as a wide pale line under the working scale"));
+
+        ToolBar bar = new ToolBar(label("Units"), units, label("A4"), a4, label("Hz"), gap(),
+                label("Strength"), strength, gap(), label("Reference"), reference);
+        bar.setPadding(new Insets(4, 8, 4, 8));
+        return bar;
+    }
+
+    private static Label label(String text) {
+        Label l = new Label(text);
+        l.getStyleClass().add("tool-label");
+        l.setAlignment(Pos.CENTER_LEFT);
+        return l;
+    }
+
+    private static javafx.scene.layout.Region gap() {
+        javafx.scene.layout.Region r = new javafx.scene.layout.Region();
+        r.setMinWidth(14);
+        javafx.scene.layout.HBox.setHgrow(r, Priority.NEVER);
+        return r;
+    }
+
+    private static MenuItem item(String text, String id, KeyCombination keys, Runnable action) {
+        MenuItem m = new MenuItem(text);
+        m.setId(id);
+        if (keys != null) {
+            m.setAccelerator(keys);
+        }
+        m.setOnAction(e -> action.run());
+        return m;
+    }
+
+    /** @return the working scale shown (for tests) */
+    Scale scale() {
+        return model.session().scale();
+    }
+}

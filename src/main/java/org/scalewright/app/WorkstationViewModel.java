@@ -1,0 +1,249 @@
+package org.scalewright.app;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.Optional;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.StringBinding;
+import org.scalewright.chart.DisplayUnits;
+import org.scalewright.chart.ForceUnit;
+import org.scalewright.io.BadInputException;
+import org.scalewright.io.BuiltInData;
+import org.scalewright.io.SheetProblem;
+import org.scalewright.io.StrengthTableReader;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.physics.StrengthTable;
+
+/**
+ * The window's commands: open, save, save as (with the unsaved-changes question), reference
+ * scale, strength table, units, pitch standard, cautions; and the part view models.
+ */
+final class WorkstationViewModel {
+    /** The display-unit choices offered. */
+    enum UnitChoice {
+        METRIC("mm and N", DisplayUnits.METRIC),
+        IMPERIAL("in and lbf", DisplayUnits.IMPERIAL),
+        METRIC_KGF("mm and kgf", new DisplayUnits(LengthUnit.MM, ForceUnit.KGF));
+
+        private final String label;
+        private final DisplayUnits units;
+
+        UnitChoice(String label, DisplayUnits units) {
+            this.label = label;
+            this.units = units;
+        }
+
+        DisplayUnits units() {
+            return units;
+        }
+
+        @Override
+        public String toString() {
+            return label;
+        }
+    }
+
+    private final ScaleSession session;
+    private final UserPrompts prompts;
+    private final NoteTableViewModel table;
+    private final CurvesViewModel curves;
+    private final FlagsViewModel flags;
+    private final StatusViewModel status;
+    private final StringBinding windowTitle;
+
+    WorkstationViewModel(ScaleSession session, UserPrompts prompts) {
+        this.session = session;
+        this.prompts = prompts;
+        this.table = new NoteTableViewModel(session);
+        this.curves = new CurvesViewModel(session);
+        this.flags = new FlagsViewModel(session);
+        this.status = new StatusViewModel(session);
+        windowTitle = Bindings.createStringBinding(() -> (session.isDirty() ? "* " : "")
+                        + session.documentNameProperty().get() + " — Scalewright",
+                session.dirtyProperty(), session.documentNameProperty());
+    }
+
+    ScaleSession session() {
+        return session;
+    }
+
+    NoteTableViewModel table() {
+        return table;
+    }
+
+    CurvesViewModel curves() {
+        return curves;
+    }
+
+    FlagsViewModel flags() {
+        return flags;
+    }
+
+    StatusViewModel status() {
+        return status;
+    }
+
+    StringBinding windowTitleProperty() {
+        return windowTitle;
+    }
+
+    // ---- files ----
+
+    /** Opens a sheet chosen by the user, after settling unsaved changes. */
+    void open() {
+        if (!settleUnsavedChanges()) {
+            return;
+        }
+        prompts.chooseSheetToOpen("Open scale sheet").ifPresent(p -> openSheet(p, true));
+    }
+
+    /**
+     * Opens {@code sheet} without asking about unsaved changes (at start, or after they were
+     * settled). A sheet that fails to load shows its problems and opens nothing.
+     *
+     * @return true when it was opened
+     */
+    boolean openSheet(Path sheet, boolean saveBack) {
+        try {
+            session.open(sheet, saveBack);
+            return true;
+        } catch (BadInputException e) {
+            prompts.showProblems("Sheet not opened", sheet + " could not be read; nothing was opened or changed.",
+                    e.problems().stream().map(SheetProblem::toString).toList());
+            session.complain("could not open " + sheet.getFileName() + ": " + e.problems().size() + " problem"
+                    + (e.problems().size() == 1 ? "" : "s"));
+            return false;
+        }
+    }
+
+    /** Saves to the sheet's file, or asks for one. @return true when saved */
+    boolean save() {
+        Optional<Path> target = session.file();
+        if (target.isEmpty()) {
+            return saveAs();
+        }
+        return writeTo(target.get());
+    }
+
+    /** Asks for a file and saves to it. @return true when saved */
+    boolean saveAs() {
+        String suggested = session.file().map(p -> p.getFileName().toString())
+                .orElse(suggestedName(session.documentNameProperty().get()));
+        Optional<Path> target = prompts.chooseSheetToSave(suggested);
+        return target.isPresent() && writeTo(withCsvExtension(target.get()));
+    }
+
+    private boolean writeTo(Path target) {
+        try {
+            session.saveAs(target);
+            return true;
+        } catch (IOException | RuntimeException e) {
+            String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+            prompts.showError("Sheet not saved", "Could not save to " + target + ": " + why
+                    + ".\nThe file on disk is unchanged.");
+            session.complain("not saved: " + why);
+            return false;
+        }
+    }
+
+    /**
+     * Asks what to do with unsaved changes, if there are any.
+     *
+     * @return true when the caller may go on (saved, discarded or nothing to save)
+     */
+    boolean settleUnsavedChanges() {
+        if (!session.isDirty()) {
+            return true;
+        }
+        return switch (prompts.askToSave(session.documentNameProperty().get())) {
+            case SAVE -> save();
+            case DISCARD -> true;
+            case CANCEL -> false;
+        };
+    }
+
+    /** @return true when the window may close */
+    boolean mayClose() {
+        return settleUnsavedChanges();
+    }
+
+    static String suggestedName(String documentName) {
+        String base = documentName.replaceAll(" \\(.*\\)$", "").replaceAll("\\.csv$", "");
+        return (base.isBlank() || base.equals("untitled") ? "scale" : base + "-edited") + ".csv";
+    }
+
+    static Path withCsvExtension(Path p) {
+        String name = p.getFileName().toString();
+        return name.contains(".") ? p : p.resolveSibling(name + ".csv");
+    }
+
+    // ---- reference ----
+
+    void openReference() {
+        prompts.chooseSheetToOpen("Open reference scale").ifPresent(p -> {
+            try {
+                session.openReference(p);
+            } catch (BadInputException e) {
+                prompts.showProblems("Reference not opened", p + " could not be read; the reference is unchanged.",
+                        e.problems().stream().map(SheetProblem::toString).toList());
+            }
+        });
+    }
+
+    // ---- settings ----
+
+    void useBuiltInMinimum() {
+        session.setStrength(StrengthChoice.minimum());
+    }
+
+    void useBuiltInMaximum() {
+        session.setStrength(StrengthChoice.maximum());
+    }
+
+    /** Reads a maker's strength table chosen by the user; a bad table shows its problems and changes nothing. */
+    boolean useMakersTable() {
+        Optional<Path> file = prompts.chooseStrengthTable();
+        if (file.isEmpty()) {
+            return false;
+        }
+        try {
+            StrengthTable t = StrengthTableReader.read(file.get());
+            session.setStrength(StrengthChoice.maker(file.get(), t));
+            return true;
+        } catch (BadInputException e) {
+            prompts.showProblems("Strength table not read", file.get()
+                            + " could not be read; the strength table is unchanged.",
+                    e.problems().stream().map(SheetProblem::toString).toList());
+            return false;
+        }
+    }
+
+    void setUnits(UnitChoice choice) {
+        session.unitsProperty().set(choice.units());
+    }
+
+    /**
+     * Sets A4 from the text typed by the user.
+     *
+     * @return true when the text was a valid pitch (changed or not)
+     */
+    boolean setA4(String text) {
+        try {
+            double a4 = Double.parseDouble(text.trim().replace(',', '.').replaceAll("(?i)\\s*hz$", ""));
+            if (!(a4 >= 300 && a4 <= 600)) {
+                session.complain(String.format(Locale.ROOT, "A4 must be between 300 and 600 Hz, was %s", text.trim()));
+                return false;
+            }
+            session.setA4(a4);
+            return true;
+        } catch (NumberFormatException e) {
+            session.complain("A4: expected a frequency in Hz, was '" + text.trim() + "'");
+            return false;
+        }
+    }
+
+    void showCautions() {
+        prompts.showCautions(BuiltInData.cautions());
+    }
+}
