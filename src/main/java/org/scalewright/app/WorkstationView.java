@@ -16,7 +16,6 @@ import javafx.scene.control.RadioMenuItem;
 import javafx.scene.control.SeparatorMenuItem;
 import javafx.scene.control.SplitPane;
 import javafx.scene.control.TextField;
-import javafx.scene.control.TitledPane;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.control.ToolBar;
 import javafx.scene.control.Tooltip;
@@ -31,7 +30,7 @@ import org.scalewright.model.Scale;
 
 /**
  * The workstation window: menus and a tool bar of settings on top, the note table with the
- * flags list below it on the left, the three curves on the right, the status line at the
+ * flags list and the tools in tabs below it on the left, the three curves on the right, the status line at the
  * bottom. It lays out the part views and wires menu items to the view model's commands.
  */
 final class WorkstationView {
@@ -51,17 +50,13 @@ final class WorkstationView {
         this.flags = new FlagsView(model.flags());
         this.status = new StatusView(model.status());
 
-        TitledPane flagsPane = new TitledPane();
-        flagsPane.setId("flags-pane");
-        flagsPane.textProperty().bind(Bindings.size(model.flags().items()).asString("Flags (%d) — click one to go to its note"));
-        flagsPane.setContent(flags.node());
-        flagsPane.setCollapsible(true);
-        flagsPane.setPrefHeight(170);
-        flagsPane.setMinHeight(60);
-        SplitPane left = new SplitPane(table.node(), flagsPane);
+        var tools = ToolTabs.build(model, flags);
+        tools.setPrefHeight(230);
+        tools.setMinHeight(80);
+        SplitPane left = new SplitPane(table.node(), tools);
         left.setOrientation(Orientation.VERTICAL);
-        left.setDividerPositions(0.78);
-        SplitPane.setResizableWithParent(flagsPane, false);
+        left.setDividerPositions(0.7);
+        SplitPane.setResizableWithParent(tools, false);
         SplitPane centre = new SplitPane(left, curves.node());
         centre.setDividerPositions(0.58);
 

@@ -68,6 +68,11 @@ final class WorkstationViewModel {
         return session;
     }
 
+    /** @return the dialogs and file choosers the tools ask through */
+    UserPrompts prompts() {
+        return prompts;
+    }
+
     NoteTableViewModel table() {
         return table;
     }

@@ -1,0 +1,53 @@
+package org.scalewright.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import javafx.beans.binding.Bindings;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+
+/**
+ * The tabbed area under the note table, beside the curves: the flags list first, then one
+ * tab per tool (rescaling, wire check, diagnosis, exports). Each tool is a view over its own
+ * view model; a tool adds itself in {@link #tools}.
+ */
+final class ToolTabs {
+    /** One tool of the workstation: a titled part of the window. */
+    interface Tool {
+        /** @return the tab's title */
+        String title();
+
+        /** @return the tab's id, for tests and styling */
+        String id();
+
+        /** @return the tool's view */
+        javafx.scene.Node node();
+    }
+
+    private ToolTabs() {
+    }
+
+    /** @return the tab pane with the flags tab and every tool */
+    static TabPane build(WorkstationViewModel model, FlagsView flags) {
+        TabPane pane = new TabPane();
+        pane.setId("tool-tabs");
+        pane.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        Tab flagsTab = new Tab();
+        flagsTab.setId("flags-tab");
+        flagsTab.textProperty().bind(Bindings.size(model.flags().items()).asString("Flags (%d)"));
+        flagsTab.setContent(flags.node());
+        pane.getTabs().add(flagsTab);
+        for (Tool t : tools(model)) {
+            Tab tab = new Tab(t.title(), t.node());
+            tab.setId(t.id());
+            pane.getTabs().add(tab);
+        }
+        return pane;
+    }
+
+    /** The tools in the order their tabs appear. */
+    private static List<Tool> tools(WorkstationViewModel model) {
+        List<Tool> tools = new ArrayList<>();
+        return tools;
+    }
+}
