@@ -13,11 +13,25 @@ public final class KeyNames {
     private static final Pattern NAME = Pattern.compile("([A-Ga-g])([#b]?)(-?\\d+)");
     private static final int[] SEMITONE_OF_LETTER = {0, 2, 3, 5, 7, 8, 10}; // A B C D E F G from A
 
+    private static final int CACHED_LOW = -24;
+    private static final String[] CACHED = new String[160];
+
+    static {
+        for (int i = 0; i < CACHED.length; i++) {
+            CACHED[i] = compute(CACHED_LOW + i);
+        }
+    }
+
     private KeyNames() {
     }
 
     /** @return the note name of a key number, sharps on output (key 49 → {@code A4}, key 2 → {@code A#0}) */
     public static String name(int key) {
+        int i = key - CACHED_LOW;
+        return i >= 0 && i < CACHED.length ? CACHED[i] : compute(key);
+    }
+
+    private static String compute(int key) {
         int fromA0 = key - 1;
         int idx = Math.floorMod(fromA0, 12);
         // octave numbers change at C: key 4 (C1) is the first of octave 1

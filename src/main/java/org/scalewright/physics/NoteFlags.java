@@ -10,7 +10,7 @@ final class NoteFlags {
     }
 
     static List<Flag> of(Note note, double pct, double tension, StressBand band, AnalysisSettings s) {
-        List<Flag> flags = new ArrayList<>(2);
+        List<Flag> flags = new ArrayList<>(0);
         int key = note.key();
         StressBands bands = s.bands();
         if (pct >= 100) {
@@ -61,6 +61,6 @@ final class NoteFlags {
                     + Decimals.of(s.strength().minDiameter() * 1e3, 3) + "–"
                     + Decimals.of(s.strength().maxDiameter() * 1e3, 3) + " mm); strength extrapolated"));
         }
-        return flags;
+        return flags.isEmpty() ? List.of() : flags;
     }
 }

@@ -70,7 +70,7 @@ public final class StringPhysics {
      */
     public static double stiffness(double core, double length, double youngsModulus) {
         Checks.positive("speaking length", length, "mm", 1e3);
-        return PI * PI * PI * youngsModulus * Math.pow(core, 4) / (64.0 * length * length);
+        return PI * PI * PI * youngsModulus * (core * core) * (core * core) / (64.0 * length * length);
     }
 
     /**
