@@ -22,7 +22,8 @@ import org.scalewright.design.stretch.StretchCurve;
  */
 final class StretchView implements ToolTabs.Tool {
     private final StretchViewModel model;
-    private final ChartViewer viewer = new ChartViewer(null);
+    private final Label empty = new Label("No scale open.");
+    private ChartViewer viewer;
     private final BorderPane root = new BorderPane();
 
     StretchView(StretchViewModel model) {
@@ -35,6 +36,7 @@ final class StretchView implements ToolTabs.Tool {
                 + "lower note's partial 2; 4:2 partial 2 with 4; 6:3 partial 3 with 6"));
         CheckBox all = new CheckBox("draw all three");
         all.setId("stretch-all");
+        all.setMinWidth(CheckBox.USE_PREF_SIZE);
         all.selectedProperty().bindBidirectional(model.showAllProperty());
         Label octaveLabel = new Label("Octave type");
         octaveLabel.getStyleClass().add("tool-label");
@@ -48,26 +50,37 @@ final class StretchView implements ToolTabs.Tool {
         HBox bar = new HBox(8, octaveLabel, octave, all, summary);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(4, 8, 4, 8));
-        viewer.setId("stretch-chart");
-        viewer.setMinHeight(60);
         root.setTop(bar);
-        root.setCenter(viewer);
         model.drawnProperty().addListener((o, a, b) -> show(b));
         show(model.drawnProperty().get());
     }
 
     private void show(List<StretchCurve> curves) {
         if (curves.isEmpty()) {
-            viewer.setChart(null);
+            root.setCenter(empty);
             return;
         }
         JFreeChart chart = StretchChart.build(model.title(), curves);
-        viewer.setChart(chart);
+        // the tab is short: the summary above names the octave type, so no title, a short axis label
+        // and a legend only when more than one octave type is drawn
+        chart.setTitle((org.jfree.chart.title.TextTitle) null);
+        chart.getXYPlot().getRangeAxis().setLabel("stretch, cents");
+        if (curves.size() == 1) {
+            chart.removeLegend();
+        }
+        if (viewer == null) {
+            viewer = new ChartViewer(chart);
+            viewer.setId("stretch-chart");
+            viewer.setMinHeight(60);
+        } else {
+            viewer.setChart(chart);
+        }
+        root.setCenter(viewer);
     }
 
     /** @return the chart shown, or null with no scale open */
     JFreeChart chart() {
-        return viewer.getChart();
+        return viewer == null || root.getCenter() != viewer ? null : viewer.getChart();
     }
 
     @Override

@@ -42,6 +42,8 @@ final class ToolTabs {
             tab.setId(t.id());
             pane.getTabs().add(tab);
         }
+        String start = System.getProperty("scalewright.startTab"); // e.g. exports-tab, to look at a tool
+        pane.getTabs().stream().filter(t -> t.getId().equals(start)).findFirst().ifPresent(pane.getSelectionModel()::select);
         return pane;
     }
 
