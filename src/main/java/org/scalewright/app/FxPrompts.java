@@ -128,6 +128,32 @@ final class FxPrompts implements UserPrompts {
         a.showAndWait();
     }
 
+    @Override
+    public Optional<Path> chooseExportFile(String title, String suggestedName, String extension) {
+        FileChooser c = chooser(title);
+        c.setInitialFileName(suggestedName);
+        String ext = extension.toLowerCase(java.util.Locale.ROOT);
+        c.getExtensionFilters().add(new FileChooser.ExtensionFilter(ext.toUpperCase(java.util.Locale.ROOT)
+                + " files (*." + ext + ")", "*." + ext));
+        return remember(c.showSaveDialog(owner));
+    }
+
+    @Override
+    public Optional<Path> chooseExportFolder(String title) {
+        javafx.stage.DirectoryChooser c = new javafx.stage.DirectoryChooser();
+        c.setTitle(title);
+        File dir = lastDirectory != null ? lastDirectory : new File(System.getProperty("user.dir"));
+        if (dir.isDirectory()) {
+            c.setInitialDirectory(dir);
+        }
+        File chosen = c.showDialog(owner);
+        if (chosen == null) {
+            return Optional.empty();
+        }
+        lastDirectory = chosen;
+        return Optional.of(chosen.toPath());
+    }
+
     private static FileChooser chooser(String title) {
         FileChooser c = new FileChooser();
         c.setTitle(title);

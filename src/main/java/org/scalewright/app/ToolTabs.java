@@ -42,12 +42,16 @@ final class ToolTabs {
             tab.setId(t.id());
             pane.getTabs().add(tab);
         }
+        String start = System.getProperty("scalewright.startTab"); // e.g. exports-tab, to look at a tool
+        pane.getTabs().stream().filter(t -> t.getId().equals(start)).findFirst().ifPresent(pane.getSelectionModel()::select);
         return pane;
     }
 
     /** The tools in the order their tabs appear. */
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
+        tools.add(new StretchView(new StretchViewModel(model.session())));
+        tools.add(new ExportView(ExportViewModel.of(model), model.session()));
         return tools;
     }
 }

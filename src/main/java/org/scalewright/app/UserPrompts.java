@@ -32,4 +32,21 @@ interface UserPrompts {
 
     /** Shows the safety cautions. */
     void showCautions(List<String> cautions);
+
+    // ---- exports ----
+
+    /**
+     * @param title         the chooser's title
+     * @param suggestedName the file name offered
+     * @param extension     the file name extension of the export, without the dot ({@code csv}, {@code png}, …)
+     * @return where to write an exported file, or empty when the user cancelled
+     */
+    default Optional<Path> chooseExportFile(String title, String suggestedName, String extension) {
+        return Optional.empty();
+    }
+
+    /** @return the folder to write the whole report into, or empty when the user cancelled */
+    default Optional<Path> chooseExportFolder(String title) {
+        return Optional.empty();
+    }
 }

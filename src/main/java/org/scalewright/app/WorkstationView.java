@@ -123,7 +123,8 @@ final class WorkstationView {
                         stage.close();
                     }
                 });
-        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(), quit);
+        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(),
+                ExportMenu.build(ExportViewModel.of(model)), new SeparatorMenuItem(), quit);
 
         MenuItem undo = item("Undo", "menu-undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN),
                 s::undo);
