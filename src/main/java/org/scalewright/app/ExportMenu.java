@@ -15,7 +15,8 @@ final class ExportMenu {
         menu.setId("menu-export");
         MenuItem report = new MenuItem("Whole report into a folder…");
         report.setId("menu-export-report");
-        report.setOnAction(e -> model.exportReport());
+        report.setOnAction(e -> model.exportReportInBackground());
+        report.disableProperty().bind(model.busyProperty());
         menu.getItems().addAll(report, new SeparatorMenuItem());
         for (ExportPiece p : ExportPiece.values()) {
             if (p == ExportPiece.TENSION_PNG || p == ExportPiece.PDF) {

@@ -30,7 +30,8 @@ final class ExportView implements ToolTabs.Tool {
         Button report = new Button("Whole report into a folder…");
         report.setId("export-report");
         report.setDefaultButton(false);
-        report.setOnAction(e -> model.exportReport());
+        report.setOnAction(e -> model.exportReportInBackground());
+        report.disableProperty().bind(model.busyProperty());
         report.setTooltip(new Tooltip("report.pdf, the four charts as PNG and SVG, and results, schedule, "
                 + "wound-order, wire-order and stretch as CSV"));
         Label reportText = small("PDF, charts (PNG and SVG) and the five tables");

@@ -10,6 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.WeakHashMap;
+import javafx.application.Platform;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
@@ -64,6 +65,7 @@ final class ExportViewModel {
     private final ObjectProperty<OctaveType> octave = new SimpleObjectProperty<>(OctaveType.TWO_ONE);
     private final ReadOnlyStringWrapper note = new ReadOnlyStringWrapper("Nothing exported yet.");
     private final ReadOnlyBooleanWrapper noteIsProblem = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper();
     private final ObservableList<Written> written = FXCollections.observableArrayList();
 
     ExportViewModel(ScaleSession session, UserPrompts prompts) {
@@ -117,6 +119,52 @@ final class ExportViewModel {
     }
 
     /**
+     * Asks for a folder and writes the whole report into it, drawing the charts and the PDF on
+     * a background thread so the window stays responsive (a few seconds); the files are written
+     * and the note updated back on the JavaFX thread. Must be called on the JavaFX thread.
+     */
+    void exportReportInBackground() {
+        Optional<Path> dir = prompts.chooseExportFolder("Write the whole report into a folder");
+        if (dir.isEmpty() || busy.get()) {
+            return;
+        }
+        Optional<ReportContent> content = checkedContent(dir.get());
+        if (content.isEmpty()) {
+            return;
+        }
+        busy.set(true);
+        note.set("Writing the report into " + dir.get().toAbsolutePath() + " …");
+        noteIsProblem.set(false);
+        Thread worker = new Thread(() -> {
+            ReportFiles files = null;
+            RuntimeException failure = null;
+            try {
+                files = ReportPackage.files(content.get(), ChartFiles.reportCharts(content.get()));
+            } catch (RuntimeException e) {
+                failure = e;
+            }
+            ReportFiles made = files;
+            RuntimeException problem = failure;
+            Platform.runLater(() -> {
+                busy.set(false);
+                if (problem != null) {
+                    failed("Report not written", "the report could not be made: " + why(problem)
+                            + ". Nothing was written.");
+                } else {
+                    writeFiles(dir.get(), made);
+                }
+            });
+        }, "report-export");
+        worker.setDaemon(true);
+        worker.start();
+    }
+
+    /** @return true while a report is being made in the background */
+    ReadOnlyBooleanProperty busyProperty() {
+        return busy.getReadOnlyProperty();
+    }
+
+    /**
      * Writes the PDF report, the charts and the CSV tables into {@code dir} (created when it
      * does not exist but its parent does). A folder that cannot take them is refused with the
      * reason, and nothing is written.
@@ -124,13 +172,9 @@ final class ExportViewModel {
      * @return true when every file was written
      */
     boolean writeReportTo(Path dir) {
-        Optional<ReportContent> content = content();
+        Optional<ReportContent> content = checkedContent(dir);
         if (content.isEmpty()) {
             return false;
-        }
-        String problem = ReportFiles.problemWith(dir);
-        if (problem != null) {
-            return failed("Report not written", problem + ". Nothing was written.");
         }
         ReportFiles files;
         try {
@@ -138,6 +182,24 @@ final class ExportViewModel {
         } catch (RuntimeException e) {
             return failed("Report not written", "the report could not be made: " + why(e) + ". Nothing was written.");
         }
+        return writeFiles(dir, files);
+    }
+
+    /** @return the report content when there is a scale and {@code dir} can take the report */
+    private Optional<ReportContent> checkedContent(Path dir) {
+        Optional<ReportContent> content = content();
+        if (content.isEmpty()) {
+            return content;
+        }
+        String problem = ReportFiles.problemWith(dir);
+        if (problem != null) {
+            failed("Report not written", problem + ". Nothing was written.");
+            return Optional.empty();
+        }
+        return content;
+    }
+
+    private boolean writeFiles(Path dir, ReportFiles files) {
         List<Path> paths;
         try {
             paths = files.writeTo(dir);

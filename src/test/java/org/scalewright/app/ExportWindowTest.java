@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListView;
 import javafx.scene.control.TabPane;
@@ -81,5 +82,20 @@ class ExportWindowTest {
         assertEquals(1, written.getItems().size());
         assertTrue(robot.lookup("#status-message").tryQuery().map(n -> ((Label) n).getText()).orElse("")
                 .startsWith("wrote wound-string order"), "the status line says what was written");
+    }
+
+    @Test
+    void theWholeReportIsMadeInTheBackgroundAndTheButtonWaitsForIt(FxRobot robot) throws Exception {
+        selectTab(robot, "exports-tab");
+        Path folder = dir.resolve("report");
+        prompts.files.add(folder);
+        robot.clickOn("#export-report");
+        Button button = robot.lookup("#export-report").queryButton();
+        WaitForAsyncUtils.waitFor(60, java.util.concurrent.TimeUnit.SECONDS,
+                () -> !button.isDisabled() && Files.exists(folder.resolve("report.pdf")));
+        WaitForAsyncUtils.waitForFxEvents();
+        String note = robot.lookup("#export-note").queryAs(Label.class).getText();
+        assertTrue(note.startsWith("Wrote the report into " + folder.toAbsolutePath()), note);
+        assertTrue(Files.readString(folder.resolve("schedule.csv")).contains("key"));
     }
 }
