@@ -118,6 +118,9 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
             }
         });
         session.unitsProperty().addListener((o, a, b) -> showChanges());
+        // the kind follows the range as it is typed; the user may still choose the other one
+        from.addListener((o, a, b) -> kindFromRange());
+        to.addListener((o, a, b) -> kindFromRange());
         session.selectedKeyProperty().addListener((o, a, b) -> {
             if (b != null && from.get().isBlank() && to.get().isBlank()) {
                 useSelectedSection();
@@ -243,7 +246,6 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
         Integer key = session.selectedKeyProperty().get();
         if (key != null) {
             from.set(Integer.toString(key));
-            kindFromRange();
         }
     }
 
@@ -252,7 +254,6 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
         Integer key = session.selectedKeyProperty().get();
         if (key != null) {
             to.set(Integer.toString(key));
-            kindFromRange();
         }
     }
 
@@ -260,7 +261,6 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
     void setRange(int first, int last) {
         from.set(Integer.toString(Math.min(first, last)));
         to.set(Integer.toString(Math.max(first, last)));
-        kindFromRange();
     }
 
     private void kindFromRange() {

@@ -48,6 +48,7 @@ final class ToolTabs {
     /** The tools in the order their tabs appear. */
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
+        tools.add(new RescaleView(new RescaleViewModel(model.session(), model.curves())));
         return tools;
     }
 }
