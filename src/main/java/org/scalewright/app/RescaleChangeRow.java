@@ -24,10 +24,8 @@ record RescaleChangeRow(int key, String note, String wire, String tension, Strin
         String after = wire(c.after(), u);
         return new RescaleChangeRow(c.key(), c.afterResult().noteName(),
                 before.equals(after) ? before : before + " → " + after,
-                DisplayFormat.force(c.beforeResult().tension(), u) + " → " + DisplayFormat.force(c.afterResult().tension(), u)
-                        + " " + u.force().symbol(),
-                DisplayFormat.fixed(c.beforeResult().breakPct(), 1) + " → " + DisplayFormat.fixed(c.afterResult().breakPct(), 1)
-                        + " %",
+                DisplayFormat.force(c.beforeResult().tension(), u) + " → " + DisplayFormat.force(c.afterResult().tension(), u),
+                DisplayFormat.fixed(c.beforeResult().breakPct(), 1) + " → " + DisplayFormat.fixed(c.afterResult().breakPct(), 1),
                 String.format(Locale.ROOT, "%+.1f", c.deviationPct()), c.changed());
     }
 

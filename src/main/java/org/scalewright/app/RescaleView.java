@@ -10,13 +10,13 @@ import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TableColumn;
-import javafx.scene.control.TableRow;
 import javafx.scene.control.TableView;
 import javafx.scene.control.TextField;
 import javafx.scene.control.Tooltip;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import java.util.function.Function;
 
@@ -36,8 +36,8 @@ final class RescaleView implements ToolTabs.Tool {
         ScrollPane settings = new ScrollPane(settings());
         settings.setFitToWidth(true);
         settings.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
-        settings.setMinWidth(360);
-        settings.setPrefWidth(390);
+        settings.setMinWidth(350);
+        settings.setPrefWidth(378);
         VBox result = result();
         HBox.setHgrow(result, Priority.ALWAYS);
         root.getChildren().addAll(settings, result);
@@ -82,7 +82,8 @@ final class RescaleView implements ToolTabs.Tool {
         kind.valueProperty().bindBidirectional(model.kindProperty());
         TextField max = field("rescale-max", model.maxBreakProperty(), 3,
                 "every planned string stays at or under this percent of its breaking strength");
-        HBox kindRow = new HBox(6, kind, gapOf(8), label("max % of breaking strength"), max);
+        kind.setMinWidth(Region.USE_PREF_SIZE);
+        HBox kindRow = new HBox(6, kind, gapOf(6), label("max % break"), max);
         kindRow.setAlignment(Pos.CENTER_LEFT);
         g.addRow(row++, label("Strings"), kindRow);
 
@@ -90,8 +91,10 @@ final class RescaleView implements ToolTabs.Tool {
         target.setId("rescale-target");
         target.getItems().setAll(RescaleViewModel.TargetKind.values());
         target.valueProperty().bindBidirectional(model.targetKindProperty());
-        target.setTooltip(new Tooltip("what the new tensions aim at; the spline's control points are the squares "
-                + "on the tension curve: drag them up or down"));
+        target.setMinWidth(Region.USE_PREF_SIZE);
+        target.setTooltip(new Tooltip("what the new tensions aim at: a smooth trend of the present scale, a "
+                + "straight or log-linear line between the range ends, or a spline through control points (the "
+                + "squares on the tension curve: drag them up or down)"));
         Button seed = button("Points", "rescale-seed", model::seedPoints,
                 "put " + RescaleViewModel.SEED_POINTS + " control points on the present target; drag them up or "
                         + "down on the tension curve, and the plan follows when you let go");
@@ -101,9 +104,11 @@ final class RescaleView implements ToolTabs.Tool {
 
         TextField bw = field("rescale-bandwidth", model.bandwidthProperty(), 4,
                 "fraction of the range in each local fit of the smooth trend, 0 to 1");
-        CheckBox perSection = new CheckBox("one per section, joined");
+        CheckBox perSection = new CheckBox("per section");
+        perSection.setMinWidth(Region.USE_PREF_SIZE);
+        perSection.setTooltip(new Tooltip("one smooth trend per section, each joined continuously to the next"));
         perSection.selectedProperty().bindBidirectional(model.perSectionProperty());
-        HBox smooth = new HBox(6, new Label("bandwidth"), bw, perSection);
+        HBox smooth = new HBox(6, label("bandwidth"), bw, perSection);
         smooth.setAlignment(Pos.CENTER_LEFT);
         smooth.visibleProperty().bind(model.targetKindProperty().isEqualTo(RescaleViewModel.TargetKind.SMOOTH));
         smooth.managedProperty().bind(smooth.visibleProperty());
@@ -121,7 +126,7 @@ final class RescaleView implements ToolTabs.Tool {
                 "cost of each change of size between neighbours (0.002 weighs as one key 4.5 % off the target)");
         HBox plain = new HBox(6, list, custom, labelled("change cost", cost));
         plain.setAlignment(Pos.CENTER_LEFT);
-        Label plainLabel = label("Plain wire");
+        Label plainLabel = label("Wire");
         g.addRow(row, plainLabel, plain);
         bindShown(model, RescaleViewModel.Kind.PLAIN, plainLabel, plain);
         row++;
@@ -135,10 +140,10 @@ final class RescaleView implements ToolTabs.Tool {
         TextField joinKeys = field("rescale-join-keys", model.joinKeysProperty(), 2,
                 "keys either side of the bass/tenor break whose cores are chosen for a smooth B");
         joinKeys.disableProperty().bind(join.selectedProperty().not());
-        HBox joinRow = new HBox(6, join, joinKeys, new Label("keys"));
+        join.setMinWidth(Region.USE_PREF_SIZE);
+        HBox joinRow = new HBox(6, join, joinKeys, label("keys"));
         joinRow.setAlignment(Pos.CENTER_LEFT);
-        VBox wound = new VBox(4, new HBox(12, labelled("wrap step mm", step), labelled("double above mm", dbl)),
-                joinRow);
+        VBox wound = new VBox(4, labelled("wrap step mm", step), labelled("double-wind above mm", dbl), joinRow);
         Label woundLabel = label("Wound");
         g.addRow(row, woundLabel, wound);
         bindShown(model, RescaleViewModel.Kind.WOUND, woundLabel, wound);
@@ -168,21 +173,17 @@ final class RescaleView implements ToolTabs.Tool {
         TableView<RescaleChangeRow> table = new TableView<>(model.changes());
         table.setId("rescale-changes");
         table.setPlaceholder(new Label("no proposal"));
-        table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().add(column("key", 40, r -> Integer.toString(r.key())));
-        table.getColumns().add(column("note", 44, RescaleChangeRow::note));
-        table.getColumns().add(column("wire old → new", 150, RescaleChangeRow::wire));
-        table.getColumns().add(column("tension", 90, RescaleChangeRow::tension));
-        table.getColumns().add(column("% break", 90, RescaleChangeRow::breakPct));
-        table.getColumns().add(column("dev. %", 56, RescaleChangeRow::deviation));
-        table.setRowFactory(t -> new TableRow<>() {
-            @Override
-            protected void updateItem(RescaleChangeRow item, boolean empty) {
-                super.updateItem(item, empty);
-                setStyle(!empty && item != null && item.changed() ? "-fx-font-weight: bold;" : "");
-            }
-        });
-        table.setFixedCellSize(22);
+        table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
+        table.getColumns().add(column("key", 30, r -> Integer.toString(r.key())));
+        table.getColumns().add(column("note", 38, RescaleChangeRow::note));
+        table.getColumns().add(column("wire old → new", 228, RescaleChangeRow::wire));
+        TableColumn<RescaleChangeRow, String> tension = column("tension", 86, RescaleChangeRow::tension);
+        tension.textProperty().bind(model.tensionHeaderProperty());
+        table.getColumns().add(tension);
+        table.getColumns().add(column("% break", 76, RescaleChangeRow::breakPct));
+        table.getColumns().add(column("dev. %", 48, RescaleChangeRow::deviation));
+        table.setFixedCellSize(20);
+        table.setStyle("-fx-font-size: 11px;");
         VBox.setVgrow(table, Priority.ALWAYS);
 
         Button propose = button("Propose", "rescale-propose", model::propose,
@@ -192,9 +193,7 @@ final class RescaleView implements ToolTabs.Tool {
         Button discard = button("Discard", "rescale-discard", model::discard, "drop the proposal");
         apply.disableProperty().bind(model.proposalProperty().isNull());
         discard.disableProperty().bind(model.proposalProperty().isNull());
-        Label caution = new Label("New tensions are for planning: bring strings up to pitch in stages.");
-        caution.getStyleClass().add("rescale-caution");
-        HBox buttons = new HBox(8, propose, apply, discard, caution);
+        HBox buttons = new HBox(8, propose, apply, discard);
         buttons.setAlignment(Pos.CENTER_LEFT);
         VBox box = new VBox(4, summaryScroll, table, buttons);
         box.setMinWidth(300);
@@ -239,6 +238,7 @@ final class RescaleView implements ToolTabs.Tool {
         TextField f = new TextField();
         f.setId(id);
         f.setPrefColumnCount(columns);
+        f.setMinWidth(Region.USE_PREF_SIZE);
         f.textProperty().bindBidirectional(p);
         f.setTooltip(new Tooltip(tip));
         return f;

@@ -60,10 +60,10 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
 
     /** How the target is made. */
     enum TargetKind {
-        SMOOTH("smooth trend of the present scale"),
-        LINE("straight line between the range ends"),
-        LOG_LINE("log-linear line between the range ends"),
-        SPLINE("spline through control points");
+        SMOOTH("smooth trend"),
+        LINE("straight line"),
+        LOG_LINE("log-linear line"),
+        SPLINE("spline through points");
 
         private final String words;
 
@@ -102,6 +102,7 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private final ObservableList<String> problems = FXCollections.observableArrayList();
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper("");
     private final ObservableList<RescaleChangeRow> changes = FXCollections.observableArrayList();
+    private final ReadOnlyStringWrapper tensionHeader = new ReadOnlyStringWrapper("tension N");
     /** The range the control points were made for; they are made afresh for another. */
     private KeyRange pointsRange;
 
@@ -117,7 +118,11 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
                 session.inform("the rescaling proposal was dropped: the working scale or its settings changed");
             }
         });
-        session.unitsProperty().addListener((o, a, b) -> showChanges());
+        session.unitsProperty().addListener((o, a, b) -> {
+            tensionHeader.set("tension " + b.force().symbol());
+            showChanges();
+        });
+        tensionHeader.set("tension " + session.units().force().symbol());
         // the kind follows the range as it is typed; the user may still choose the other one
         from.addListener((o, a, b) -> kindFromRange());
         to.addListener((o, a, b) -> kindFromRange());
@@ -213,6 +218,11 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
 
     ReadOnlyStringProperty summaryProperty() {
         return summary.getReadOnlyProperty();
+    }
+
+    /** @return the change table's tension heading, with the display force unit */
+    ReadOnlyStringProperty tensionHeaderProperty() {
+        return tensionHeader.getReadOnlyProperty();
     }
 
     ObservableList<RescaleChangeRow> changes() {
@@ -575,6 +585,8 @@ final class RescaleViewModel implements CurvesViewModel.PointDrag {
         for (String n : p.notes()) {
             b.append("\nNote: ").append(n);
         }
+        b.append("\nCaution: these figures are estimates from nominal data. New strings store energy as they come "
+                + "up to pitch: wear eye protection, and raise an old instrument in stages.");
         return b.toString();
     }
 }

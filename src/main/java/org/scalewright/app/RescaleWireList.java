@@ -11,8 +11,8 @@ import org.scalewright.model.WireSize;
 
 /** The plain wire the rescaling panel may choose from: music-wire sizes, metric wire, or the user's list. */
 enum RescaleWireList {
-    MUSIC("music-wire sizes 12–23"),
-    METRIC("metric, 0.025 mm steps"),
+    MUSIC("music wire 12–23"),
+    METRIC("metric wire"),
     CUSTOM("my list");
 
     private final String label;
