@@ -17,6 +17,7 @@ import org.jfree.data.Range;
 import org.scalewright.chart.Curve;
 import org.scalewright.chart.CurveData;
 import org.scalewright.chart.ScaleCurves;
+import org.scalewright.chart.TargetMarks;
 
 /**
  * The three linked curves, stacked: tension per string, percent of breaking strength and
@@ -49,6 +50,12 @@ final class CurvesView {
             box.getChildren().add(viewer);
         }
         model.dataProperty().addListener((o, a, b) -> later(b));
+        model.targetProperty().addListener((o, a, b) -> drawTarget());
+        new PointDragger(viewers.get(Curve.TENSION));
+    }
+
+    private void drawTarget() {
+        TargetMarks.draw(viewers.get(Curve.TENSION).getChart(), model.targetProperty().get(), model.data().units());
     }
 
     VBox node() {
@@ -85,6 +92,7 @@ final class CurvesView {
         for (Curve c : Curve.values()) {
             ScaleCurves.refresh(viewers.get(c).getChart(), c, data);
         }
+        drawTarget();
         Timings.curvesShown(data.working().notes().size());
     }
 
@@ -145,6 +153,88 @@ final class CurvesView {
             if (!java.util.Objects.equals(text, shown)) {
                 shown = text;
                 viewer.getCanvas().setTooltip(text, e.getTrigger().getScreenX() + 12, e.getTrigger().getScreenY() + 12);
+            }
+        }
+    }
+
+    /**
+     * Lets the user drag a control point of the target on the tension curve up and down: a press
+     * within a few pixels of a point takes it (instead of starting a zoom), a drag moves it, the
+     * release drops it. The view model is told in N through {@link CurvesViewModel.PointDrag}.
+     */
+    private final class PointDragger {
+        private static final double REACH_PX = 8;
+        private final ChartViewer viewer;
+        private int dragging = -1;
+        private boolean axisWasAuto;
+
+        PointDragger(ChartViewer viewer) {
+            this.viewer = viewer;
+            var canvas = viewer.getCanvas();
+            canvas.addEventFilter(javafx.scene.input.MouseEvent.MOUSE_PRESSED, e -> {
+                dragging = pointNear(e.getX(), e.getY());
+                if (dragging >= 0) {
+                    // hold the tension axis still while the point moves, so it does not run away under the mouse
+                    var axis = viewer.getChart().getXYPlot().getRangeAxis();
+                    axisWasAuto = axis.isAutoRange();
+                    axis.setRange(axis.getRange());
+                    e.consume();
+                }
+            });
+            canvas.addEventFilter(javafx.scene.input.MouseEvent.MOUSE_DRAGGED, e -> {
+                if (dragging >= 0) {
+                    tell(e.getY(), false);
+                    e.consume();
+                }
+            });
+            canvas.addEventFilter(javafx.scene.input.MouseEvent.MOUSE_RELEASED, e -> {
+                if (dragging >= 0) {
+                    tell(e.getY(), true);
+                    dragging = -1;
+                    if (axisWasAuto) {
+                        viewer.getChart().getXYPlot().getRangeAxis().setAutoRange(true);
+                    }
+                    e.consume();
+                }
+            });
+        }
+
+        private int pointNear(double x, double y) {
+            TargetMarks marks = model.targetProperty().get();
+            if (marks == null || model.pointDragProperty().get() == null) {
+                return -1;
+            }
+            Rectangle2D area = viewer.getRenderingInfo().getPlotInfo().getDataArea();
+            var plot = viewer.getChart().getXYPlot();
+            var units = model.data().units();
+            for (int i = 0; i < marks.points().size(); i++) {
+                var p = marks.points().get(i);
+                double px = plot.getDomainAxis().valueToJava2D(p.key(), area, RectangleEdge.BOTTOM);
+                double py = plot.getRangeAxis().valueToJava2D(units.force().fromNewtons(p.value()), area,
+                        RectangleEdge.LEFT);
+                if (Math.abs(px - x) <= REACH_PX && Math.abs(py - y) <= REACH_PX) {
+                    return i;
+                }
+            }
+            return -1;
+        }
+
+        private void tell(double y, boolean release) {
+            CurvesViewModel.PointDrag listener = model.pointDragProperty().get();
+            if (listener == null) {
+                return;
+            }
+            Rectangle2D area = viewer.getRenderingInfo().getPlotInfo().getDataArea();
+            double clamped = Math.max(area.getMinY(), Math.min(area.getMaxY(), y));
+            double shown = viewer.getChart().getXYPlot().getRangeAxis().java2DToValue(clamped, area, RectangleEdge.LEFT);
+            double newtons = model.data().units().force().toNewtons(shown);
+            if (!(newtons > 0)) {
+                return;
+            }
+            if (release) {
+                listener.released(dragging, newtons);
+            } else {
+                listener.dragged(dragging, newtons);
             }
         }
     }

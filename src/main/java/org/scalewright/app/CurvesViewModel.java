@@ -5,6 +5,7 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.SimpleObjectProperty;
 import org.scalewright.chart.CurveData;
+import org.scalewright.chart.TargetMarks;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**
@@ -16,6 +17,20 @@ final class CurvesViewModel {
     private final ScaleSession session;
     private final ReadOnlyObjectWrapper<CurveData> data = new ReadOnlyObjectWrapper<>();
     private final ObjectProperty<ScaleAnalysis> proposal = new SimpleObjectProperty<>();
+    private final ObjectProperty<TargetMarks> target = new SimpleObjectProperty<>();
+    private final ObjectProperty<PointDrag> pointDrag = new SimpleObjectProperty<>();
+
+    /**
+     * Told when the user drags a control point of the target on the tension curve. Values are
+     * per-string tension in N.
+     */
+    interface PointDrag {
+        /** The point at {@code index} of the target's control points is being dragged to {@code newtons}. */
+        void dragged(int index, double newtons);
+
+        /** The drag of the point at {@code index} ended at {@code newtons}. */
+        void released(int index, double newtons);
+    }
 
     CurvesViewModel(ScaleSession session) {
         this.session = session;
@@ -38,6 +53,16 @@ final class CurvesViewModel {
 
     ObjectProperty<ScaleAnalysis> proposalProperty() {
         return proposal;
+    }
+
+    /** @return the rescaling target drawn on the tension curve (null: none) */
+    ObjectProperty<TargetMarks> targetProperty() {
+        return target;
+    }
+
+    /** @return who is told of control-point drags on the tension curve (null: points cannot be dragged) */
+    ObjectProperty<PointDrag> pointDragProperty() {
+        return pointDrag;
     }
 
     /** Selects the note nearest to a key-number position on a curve (a click on a chart). */

@@ -50,6 +50,7 @@ final class ToolTabs {
     /** The tools in the order their tabs appear. */
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
+        tools.add(new RescaleView(new RescaleViewModel(model.session(), model.curves())));
         tools.add(new StretchView(new StretchViewModel(model.session())));
         tools.add(new ExportView(ExportViewModel.of(model), model.session()));
         return tools;
