@@ -4,18 +4,25 @@ import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.MapChangeListener;
+import javafx.collections.ObservableMap;
 import org.scalewright.chart.CurveData;
+import org.scalewright.chart.CurveOverlay;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**
  * What the three curves show, rebuilt whenever the working scale, the reference, the display
  * units or the selected key change. The proposal is set by whoever has one to show (none by
- * default).
+ * default); so are the overlays drawn over the percent-of-breaking-strength curve, each tool
+ * putting its own under its name in {@link #overlays()} (e.g. the wire check's after and peak).
  */
 final class CurvesViewModel {
     private final ScaleSession session;
     private final ReadOnlyObjectWrapper<CurveData> data = new ReadOnlyObjectWrapper<>();
     private final ObjectProperty<ScaleAnalysis> proposal = new SimpleObjectProperty<>();
+    private final ObservableMap<String, java.util.List<CurveOverlay>> overlays =
+            FXCollections.observableMap(new java.util.LinkedHashMap<>());
 
     CurvesViewModel(ScaleSession session) {
         this.session = session;
@@ -25,6 +32,7 @@ final class CurvesViewModel {
         session.unitsProperty().addListener((o, a, b) -> update());
         session.selectedKeyProperty().addListener((o, a, b) -> update());
         proposal.addListener((o, a, b) -> update());
+        overlays.addListener((MapChangeListener<String, java.util.List<CurveOverlay>>) c -> update());
         update();
     }
 
@@ -38,6 +46,15 @@ final class CurvesViewModel {
 
     ObjectProperty<ScaleAnalysis> proposalProperty() {
         return proposal;
+    }
+
+    /**
+     * The overlays drawn over the percent-of-breaking-strength curve, by the tool that shows
+     * them (put a tool's list under its own name; remove it to clear), drawn in the order the
+     * tools first put them.
+     */
+    ObservableMap<String, java.util.List<CurveOverlay>> overlays() {
+        return overlays;
     }
 
     /** Selects the note nearest to a key-number position on a curve (a click on a chart). */
@@ -64,6 +81,7 @@ final class CurvesViewModel {
             d = d.withReference(session.referenceAnalysisProperty().get());
         }
         d = d.withProposal(proposal.get());
+        d = d.withOverlays(overlays.values().stream().flatMap(java.util.List::stream).toList());
         Integer key = session.selectedKeyProperty().get();
         if (key != null) {
             d = d.withSelectedKey(key);

@@ -42,7 +42,58 @@ final class CurveLook {
     static final Shape RING = new Ellipse2D.Double(-7, -7, 14, 14);
     static final Shape FLAG_MARK = triangle(5.5);
 
+    static final Color OVERLAY_LINE = new Color(0x7B3FA0);
+    static final Color OVERLAY_DOTTED = new Color(0xA3213C);
+    static final Color OVERLAY_MARKS = new Color(0x8A1C1C);
+    static final Stroke OVERLAY_LINE_STROKE = new BasicStroke(1.6f);
+    static final Stroke OVERLAY_DOTTED_STROKE = new BasicStroke(1.6f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND,
+            1f, new float[] {1.5f, 3.5f}, 0f);
+    static final Shape SMALL_DOT = new Ellipse2D.Double(-2, -2, 4, 4);
+    static final Shape SMALL_SQUARE = new java.awt.geom.Rectangle2D.Double(-2.2, -2.2, 4.4, 4.4);
+    static final Shape DIAMOND = diamond(6.5);
+
     private CurveLook() {
+    }
+
+    /** Gives series {@code i} of the overlay renderer the look of {@code look}. */
+    static void styleOverlay(org.jfree.chart.renderer.xy.XYLineAndShapeRenderer r, int i,
+                             org.scalewright.chart.CurveOverlay.Look look) {
+        switch (look) {
+            case LINE -> {
+                r.setSeriesPaint(i, OVERLAY_LINE);
+                r.setSeriesStroke(i, OVERLAY_LINE_STROKE);
+                r.setSeriesLinesVisible(i, true);
+                r.setSeriesShapesVisible(i, true);
+                r.setSeriesShapesFilled(i, true);
+                r.setSeriesShape(i, SMALL_DOT);
+            }
+            case DOTTED -> {
+                r.setSeriesPaint(i, OVERLAY_DOTTED);
+                r.setSeriesStroke(i, OVERLAY_DOTTED_STROKE);
+                r.setSeriesLinesVisible(i, true);
+                r.setSeriesShapesVisible(i, true);
+                r.setSeriesShapesFilled(i, true);
+                r.setSeriesShape(i, SMALL_SQUARE);
+            }
+            case MARKS -> {
+                r.setSeriesPaint(i, OVERLAY_MARKS);
+                r.setSeriesStroke(i, new BasicStroke(2f));
+                r.setSeriesLinesVisible(i, false);
+                r.setSeriesShapesVisible(i, true);
+                r.setSeriesShapesFilled(i, false);
+                r.setSeriesShape(i, DIAMOND);
+            }
+        }
+    }
+
+    private static Shape diamond(double r) {
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(0, -r);
+        p.lineTo(r, 0);
+        p.lineTo(0, r);
+        p.lineTo(-r, 0);
+        p.closePath();
+        return p;
     }
 
     /** @return the translucent fill of a stress band on the percent-of-breaking-strength chart */
