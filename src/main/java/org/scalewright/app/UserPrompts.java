@@ -32,4 +32,20 @@ interface UserPrompts {
 
     /** Shows the safety cautions. */
     void showCautions(List<String> cautions);
+
+    /**
+     * @return where to save a CSV file of results, or empty when the user cancelled; by default
+     *         asked like a sheet to save (a window gives it its own title)
+     */
+    default Optional<Path> chooseCsvToSave(String title, String suggestedName) {
+        return chooseSheetToSave(suggestedName);
+    }
+
+    /**
+     * @return a per-note file of how far flat the piano stands (key, cents_flat), or empty when
+     *         the user cancelled; by default asked like a sheet to open
+     */
+    default Optional<Path> choosePitchStateFile() {
+        return chooseSheetToOpen("Open the cents flat per note");
+    }
 }
