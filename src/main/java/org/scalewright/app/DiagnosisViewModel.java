@@ -234,6 +234,17 @@ final class DiagnosisViewModel {
         }
     }
 
+    /** Takes the results away, and their overlays off the curves. */
+    void clear() {
+        report.set(null);
+        stale.set(false);
+        rows.clear();
+        finding.set("");
+        remedies.clear();
+        inspect.clear();
+        curves.overlays().remove(OVERLAY_OWNER);
+    }
+
     /** Selects the key of a result row (the table and curves follow). */
     void select(Row row) {
         if (row != null) {

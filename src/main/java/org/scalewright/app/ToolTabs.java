@@ -48,6 +48,8 @@ final class ToolTabs {
     /** The tools in the order their tabs appear. */
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
+        tools.add(new WireCheckView(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
+        tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
         return tools;
     }
 }

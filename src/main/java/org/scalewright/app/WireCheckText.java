@@ -14,12 +14,12 @@ final class WireCheckText {
     private WireCheckText() {
     }
 
-    /** @return the core wire as a size number ({@code #18}) or a diameter in mm, with the wrap of a wound string */
+    /** @return the core wire as a size number ({@code #18}) or a diameter in mm */
     static String wire(Note n) {
         String core = n.wire().musicWireSize().isPresent()
                 ? "#" + DisplayFormat.size(n.wire().musicWireSize().getAsDouble())
                 : DisplayFormat.fixed(n.wire().diameter() * 1e3, 3) + " mm";
-        return n.isWound() ? core + " wound" : core;
+        return core;
     }
 
     /** @return the advice on raising in stages, with the reasons and the plan, one item a line */

@@ -316,7 +316,8 @@ final class WireCheckViewModel {
         return list;
     }
 
-    private static String totalsText(WireCheckReport r) {
+    /** @return present → target → peak, each in kN and lbf with its change from the present, one a line */
+    static String totalsText(WireCheckReport r) {
         var t = r.totals();
         return String.join("\n",
                 line("present", t.present(), Double.NaN, Double.NaN),
@@ -327,10 +328,10 @@ final class WireCheckViewModel {
     }
 
     private static String line(String what, double n, double change, double pct) {
-        String s = String.format(Locale.ROOT, "%-24s %6.1f kN  %,7.0f lbf", what, n / 1e3,
+        String s = String.format(Locale.ROOT, "%s: %.1f kN (%,.0f lbf)", what, n / 1e3,
                 UnitConversions.newtonsToLbf(n));
         if (Double.isFinite(change)) {
-            s += String.format(Locale.ROOT, "   %+6.1f kN  %+,7.0f lbf  %+5.1f %%", change / 1e3,
+            s += String.format(Locale.ROOT, ", %+.1f kN (%+,.0f lbf, %+.1f %%)", change / 1e3,
                     UnitConversions.newtonsToLbf(change), pct);
         }
         return s;
@@ -358,6 +359,18 @@ final class WireCheckViewModel {
             session.complain("wire check not saved: " + why);
             return false;
         }
+    }
+
+    /** Takes the results away, and their overlays off the curves. */
+    void clear() {
+        report.set(null);
+        stale.set(false);
+        rows.clear();
+        totals.set("");
+        stages.set("");
+        cautions.clear();
+        summary.set("");
+        curves.overlays().remove(OVERLAY_OWNER);
     }
 
     /** Selects the key of a result row (the table and curves follow). */

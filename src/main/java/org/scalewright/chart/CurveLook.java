@@ -44,13 +44,11 @@ final class CurveLook {
 
     static final Color OVERLAY_LINE = new Color(0x7B3FA0);
     static final Color OVERLAY_DOTTED = new Color(0xA3213C);
-    static final Color OVERLAY_MARKS = new Color(0x8A1C1C);
+    static final Color OVERLAY_MARKS = new Color(0x00695C);
     static final Stroke OVERLAY_LINE_STROKE = new BasicStroke(1.6f);
-    static final Stroke OVERLAY_DOTTED_STROKE = new BasicStroke(1.6f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND,
-            1f, new float[] {1.5f, 3.5f}, 0f);
-    static final Shape SMALL_DOT = new Ellipse2D.Double(-2, -2, 4, 4);
-    static final Shape SMALL_SQUARE = new java.awt.geom.Rectangle2D.Double(-2.2, -2.2, 4.4, 4.4);
-    static final Shape DIAMOND = diamond(6.5);
+    static final Stroke OVERLAY_DOTTED_STROKE = new BasicStroke(2.0f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND,
+            1f, new float[] {0.5f, 4f}, 0f);
+    static final Shape DIAMOND = diamond(8);
 
     private CurveLook() {
     }
@@ -63,21 +61,17 @@ final class CurveLook {
                 r.setSeriesPaint(i, OVERLAY_LINE);
                 r.setSeriesStroke(i, OVERLAY_LINE_STROKE);
                 r.setSeriesLinesVisible(i, true);
-                r.setSeriesShapesVisible(i, true);
-                r.setSeriesShapesFilled(i, true);
-                r.setSeriesShape(i, SMALL_DOT);
+                r.setSeriesShapesVisible(i, false);
             }
             case DOTTED -> {
                 r.setSeriesPaint(i, OVERLAY_DOTTED);
                 r.setSeriesStroke(i, OVERLAY_DOTTED_STROKE);
                 r.setSeriesLinesVisible(i, true);
-                r.setSeriesShapesVisible(i, true);
-                r.setSeriesShapesFilled(i, true);
-                r.setSeriesShape(i, SMALL_SQUARE);
+                r.setSeriesShapesVisible(i, false);
             }
             case MARKS -> {
                 r.setSeriesPaint(i, OVERLAY_MARKS);
-                r.setSeriesStroke(i, new BasicStroke(2f));
+                r.setSeriesStroke(i, new BasicStroke(2.4f));
                 r.setSeriesLinesVisible(i, false);
                 r.setSeriesShapesVisible(i, true);
                 r.setSeriesShapesFilled(i, false);

@@ -17,11 +17,11 @@ import java.util.TreeMap;
 public record CurveOverlay(String name, SortedMap<Integer, Double> values, Look look) {
     /** How an overlay is drawn. */
     public enum Look {
-        /** a solid line with small dots, in violet */
+        /** a solid line, in violet */
         LINE,
-        /** a dotted line with small squares, in deep red */
+        /** a dotted line, in deep red */
         DOTTED,
-        /** open diamonds at the keys, no line, in dark red */
+        /** open diamonds at the keys, no line, in deep teal */
         MARKS
     }
 

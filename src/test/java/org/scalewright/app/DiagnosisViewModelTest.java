@@ -131,6 +131,15 @@ class DiagnosisViewModelTest {
     }
 
     @Test
+    void clearTakesTheMarksOffTheCurves() {
+        diagnose60To80();
+        diagnosis.clear();
+        assertTrue(vm.curves().data().overlays().isEmpty());
+        assertTrue(diagnosis.rows().isEmpty());
+        assertNull(diagnosis.reportProperty().get());
+    }
+
+    @Test
     void clickingARowSelectsItsKey() {
         diagnose60To80();
         diagnosis.select(diagnosis.rows().get(8));
