@@ -194,7 +194,7 @@ final class DiagnosisViewModel {
         }
         rows.setAll(next);
         Finding f = r.finding();
-        finding.set("Finding: " + f.cause().words() + ".\n" + String.join("\n", f.explanation()));
+        finding.set("Finding: " + f.cause().words() + ".\n\n" + String.join("\n\n", f.explanation()));
         List<RemedyLine> lines = new ArrayList<>();
         for (Remedy x : f.remedies()) {
             lines.add(new RemedyLine(x.describe(), x.fixes(), x.maxPctAfter()));

@@ -101,14 +101,14 @@ final class WireCheckView implements ToolTabs.Tool {
         table.getColumns().setAll(java.util.List.of(
                 WireCheckLayout.<WireCheckViewModel.Row>column("key", 36, true, r -> Integer.toString(r.key())),
                 WireCheckLayout.<WireCheckViewModel.Row>column("note", 40, false, WireCheckViewModel.Row::note),
-                WireCheckLayout.<WireCheckViewModel.Row>column("core after", 84, false,
+                WireCheckLayout.<WireCheckViewModel.Row>column("core after", 72, false,
                         r -> r.wireAfter().equals(r.wireBefore()) ? r.wireAfter() : r.wireBefore() + " → "
                                 + r.wireAfter()),
                 flatColumn(model),
                 WireCheckLayout.<WireCheckViewModel.Row>column("% before", 60, true, r -> f(r.pctBefore(), 1)),
                 WireCheckLayout.<WireCheckViewModel.Row>column("% after", 54, true, r -> f(r.pctAfter(), 1)),
                 WireCheckLayout.<WireCheckViewModel.Row>column("% peak", 52, true, r -> f(r.pctPeak(), 1)),
-                WireCheckLayout.<WireCheckViewModel.Row>column("headroom c", 74, true,
+                WireCheckLayout.<WireCheckViewModel.Row>column("headroom c", 82, true,
                         r -> f(r.headroomAfter(), 0)),
                 WireCheckLayout.<WireCheckViewModel.Row>column("danger", 66, false,
                         r -> r.pctAfter() >= model.dangerPct() ? "at target" : r.overDanger() ? "at peak" : "")));
