@@ -4,14 +4,19 @@ import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.MapChangeListener;
+import javafx.collections.ObservableMap;
 import org.scalewright.chart.CurveData;
 import org.scalewright.chart.TargetMarks;
+import org.scalewright.chart.CurveOverlay;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**
  * What the three curves show, rebuilt whenever the working scale, the reference, the display
  * units or the selected key change. The proposal is set by whoever has one to show (none by
- * default).
+ * default); so are the overlays drawn over the percent-of-breaking-strength curve, each tool
+ * putting its own under its name in {@link #overlays()} (e.g. the wire check's after and peak).
  */
 final class CurvesViewModel {
     private final ScaleSession session;
@@ -31,6 +36,8 @@ final class CurvesViewModel {
         /** The drag of the point at {@code index} ended at {@code newtons}. */
         void released(int index, double newtons);
     }
+    private final ObservableMap<String, java.util.List<CurveOverlay>> overlays =
+            FXCollections.observableMap(new java.util.LinkedHashMap<>());
 
     CurvesViewModel(ScaleSession session) {
         this.session = session;
@@ -40,6 +47,7 @@ final class CurvesViewModel {
         session.unitsProperty().addListener((o, a, b) -> update());
         session.selectedKeyProperty().addListener((o, a, b) -> update());
         proposal.addListener((o, a, b) -> update());
+        overlays.addListener((MapChangeListener<String, java.util.List<CurveOverlay>>) c -> update());
         update();
     }
 
@@ -63,6 +71,15 @@ final class CurvesViewModel {
     /** @return who is told of control-point drags on the tension curve (null: points cannot be dragged) */
     ObjectProperty<PointDrag> pointDragProperty() {
         return pointDrag;
+    }
+
+    /**
+     * The overlays drawn over the percent-of-breaking-strength curve, by the tool that shows
+     * them (put a tool's list under its own name; remove it to clear), drawn in the order the
+     * tools first put them.
+     */
+    ObservableMap<String, java.util.List<CurveOverlay>> overlays() {
+        return overlays;
     }
 
     /** Selects the note nearest to a key-number position on a curve (a click on a chart). */
@@ -89,6 +106,7 @@ final class CurvesViewModel {
             d = d.withReference(session.referenceAnalysisProperty().get());
         }
         d = d.withProposal(proposal.get());
+        d = d.withOverlays(overlays.values().stream().flatMap(java.util.List::stream).toList());
         Integer key = session.selectedKeyProperty().get();
         if (key != null) {
             d = d.withSelectedKey(key);

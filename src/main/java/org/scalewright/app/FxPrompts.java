@@ -63,6 +63,14 @@ final class FxPrompts implements UserPrompts {
     }
 
     @Override
+    public Optional<Path> choosePitchStateFile() {
+        FileChooser c = chooser("Open the cents flat per note (key, cents_flat)");
+        c.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("CSV files (*.csv)", "*.csv"),
+                new FileChooser.ExtensionFilter("All files", "*"));
+        return remember(c.showOpenDialog(owner));
+    }
+
+    @Override
     public void showProblems(String title, String intro, List<String> problems) {
         if (!owner.isShowing()) {
             Platform.runLater(() -> showProblems(title, intro, problems));

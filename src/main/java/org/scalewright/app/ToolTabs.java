@@ -51,6 +51,8 @@ final class ToolTabs {
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
         tools.add(new RescaleView(new RescaleViewModel(model.session(), model.curves())));
+        tools.add(new WireCheckView(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
+        tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new StretchView(new StretchViewModel(model.session())));
         tools.add(new ExportView(ExportViewModel.of(model), model.session()));
         return tools;

@@ -39,14 +39,24 @@ interface UserPrompts {
      * @param title         the chooser's title
      * @param suggestedName the file name offered
      * @param extension     the file name extension of the export, without the dot ({@code csv}, {@code png}, …)
-     * @return where to write an exported file, or empty when the user cancelled
+     * @return where to write an exported file (results CSV, chart, report piece), or empty when
+     *         the user cancelled; by default asked like a sheet to save (a window gives it its own
+     *         chooser filtered to the extension)
      */
     default Optional<Path> chooseExportFile(String title, String suggestedName, String extension) {
-        return Optional.empty();
+        return chooseSheetToSave(suggestedName);
     }
 
     /** @return the folder to write the whole report into, or empty when the user cancelled */
     default Optional<Path> chooseExportFolder(String title) {
         return Optional.empty();
+    }
+
+    /**
+     * @return a per-note file of how far flat the piano stands (key, cents_flat), or empty when
+     *         the user cancelled; by default asked like a sheet to open
+     */
+    default Optional<Path> choosePitchStateFile() {
+        return chooseSheetToOpen("Open the cents flat per note");
     }
 }

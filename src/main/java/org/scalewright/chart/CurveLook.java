@@ -42,7 +42,52 @@ final class CurveLook {
     static final Shape RING = new Ellipse2D.Double(-7, -7, 14, 14);
     static final Shape FLAG_MARK = triangle(5.5);
 
+    static final Color OVERLAY_LINE = new Color(0x7B3FA0);
+    static final Color OVERLAY_DOTTED = new Color(0xA3213C);
+    static final Color OVERLAY_MARKS = new Color(0x00695C);
+    static final Stroke OVERLAY_LINE_STROKE = new BasicStroke(1.6f);
+    static final Stroke OVERLAY_DOTTED_STROKE = new BasicStroke(2.0f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND,
+            1f, new float[] {0.5f, 4f}, 0f);
+    static final Shape DIAMOND = diamond(8);
+
     private CurveLook() {
+    }
+
+    /** Gives series {@code i} of the overlay renderer the look of {@code look}. */
+    static void styleOverlay(org.jfree.chart.renderer.xy.XYLineAndShapeRenderer r, int i,
+                             org.scalewright.chart.CurveOverlay.Look look) {
+        switch (look) {
+            case LINE -> {
+                r.setSeriesPaint(i, OVERLAY_LINE);
+                r.setSeriesStroke(i, OVERLAY_LINE_STROKE);
+                r.setSeriesLinesVisible(i, true);
+                r.setSeriesShapesVisible(i, false);
+            }
+            case DOTTED -> {
+                r.setSeriesPaint(i, OVERLAY_DOTTED);
+                r.setSeriesStroke(i, OVERLAY_DOTTED_STROKE);
+                r.setSeriesLinesVisible(i, true);
+                r.setSeriesShapesVisible(i, false);
+            }
+            case MARKS -> {
+                r.setSeriesPaint(i, OVERLAY_MARKS);
+                r.setSeriesStroke(i, new BasicStroke(2.4f));
+                r.setSeriesLinesVisible(i, false);
+                r.setSeriesShapesVisible(i, true);
+                r.setSeriesShapesFilled(i, false);
+                r.setSeriesShape(i, DIAMOND);
+            }
+        }
+    }
+
+    private static Shape diamond(double r) {
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(0, -r);
+        p.lineTo(r, 0);
+        p.lineTo(0, r);
+        p.lineTo(-r, 0);
+        p.closePath();
+        return p;
     }
 
     /** @return the translucent fill of a stress band on the percent-of-breaking-strength chart */

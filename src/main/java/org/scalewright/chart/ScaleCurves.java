@@ -48,7 +48,55 @@ import org.scalewright.physics.StressBands;
  * window redraws after an edit.
  */
 public final class ScaleCurves {
+    /**
+     * The index of the dataset (and renderer) holding the {@link CurveData#overlays() overlays},
+     * after those of {@link CurveSeries}, so they are drawn on top: one series per overlay, in
+     * the order given, keyed by its name; empty on the charts other than percent of breaking
+     * strength. The dataset is added the first time there are overlays to draw.
+     */
+    public static final int OVERLAY_INDEX = CurveSeries.values().length;
+
     private ScaleCurves() {
+    }
+
+    /** @return the dataset holding the overlays in a chart made by {@link #build} (empty when none were drawn) */
+    public static XYSeriesCollection overlayDataset(JFreeChart chart) {
+        var d = chart.getXYPlot().getDataset(OVERLAY_INDEX);
+        return d instanceof XYSeriesCollection c ? c : new XYSeriesCollection();
+    }
+
+    /** @return the value of overlay {@code name} drawn at {@code key}, or NaN when absent */
+    public static double overlayValueAt(JFreeChart chart, String name, int key) {
+        XYSeriesCollection c = overlayDataset(chart);
+        int i = c.getSeriesIndex(name);
+        if (i < 0) {
+            return Double.NaN;
+        }
+        XYSeries s = c.getSeries(i);
+        int j = s.indexOf(Double.valueOf(key));
+        return j < 0 ? Double.NaN : s.getY(j).doubleValue();
+    }
+
+    private static void putOverlays(XYPlot plot, List<CurveOverlay> overlays) {
+        if (!(plot.getDataset(OVERLAY_INDEX) instanceof XYSeriesCollection)) {
+            if (overlays.isEmpty()) {
+                return;
+            }
+            plot.setDataset(OVERLAY_INDEX, new XYSeriesCollection());
+            XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
+            r.setDrawSeriesLineAsPath(true);
+            plot.setRenderer(OVERLAY_INDEX, r);
+        }
+        XYSeriesCollection c = (XYSeriesCollection) plot.getDataset(OVERLAY_INDEX);
+        c.removeAllSeries();
+        XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(OVERLAY_INDEX);
+        for (CurveOverlay o : overlays) {
+            XYSeries series = new XYSeries(o.name(), false, true);
+            o.values().forEach((key, pct) -> series.add(key.doubleValue(), pct, false));
+            int i = c.getSeriesCount();
+            c.addSeries(series);
+            CurveLook.styleOverlay(r, i, o.look());
+        }
     }
 
     /** @return the tension-per-string chart */
@@ -150,6 +198,7 @@ public final class ScaleCurves {
             List<NoteResult> selected = data.selectedKey().isPresent()
                     ? data.working().result(data.selectedKey().getAsInt()).stream().toList() : List.of();
             put(plot, CurveSeries.SELECTED, curve, data.units(), selected, "working");
+            putOverlays(plot, curve == Curve.BREAK_PERCENT ? data.overlays() : List.of());
             markBoundaries(plot, data);
             if (plot.getRangeAxis() instanceof PercentAxis axis) {
                 StressBands bands = data.working().settings().bands();
