@@ -57,6 +57,17 @@ final class WorkstationView {
         left.setOrientation(Orientation.VERTICAL);
         left.setDividerPositions(0.7);
         SplitPane.setResizableWithParent(tools, false);
+        // a tool needs room for its settings and results: give it the lower half of the left
+        // side when its tab is chosen (the table keeps scrolling above), the flags a third
+        tools.getSelectionModel().selectedIndexProperty().addListener((o, was, now) -> {
+            double wanted = now.intValue() == 0 ? 0.7 : 0.42;
+            if (Math.abs(left.getDividerPositions()[0] - wanted) > 0.05 && now.intValue() != was.intValue()) {
+                left.setDividerPositions(wanted);
+            }
+        });
+        if (tools.getSelectionModel().getSelectedIndex() > 0) {
+            left.setDividerPositions(0.42);
+        }
         SplitPane centre = new SplitPane(left, curves.node());
         centre.setDividerPositions(0.58);
 
