@@ -38,8 +38,15 @@ final class ToolTabs {
         flagsTab.setContent(flags.node());
         pane.getTabs().add(flagsTab);
         for (Tool t : tools(model)) {
-            Tab tab = new Tab(t.title(), t.node());
+            Tab tab = new Tab(t.title());
             tab.setId(t.id());
+            // a tool's view joins the scene only when its tab is first chosen, so start-up
+            // does not style and lay out panels nobody has opened yet
+            tab.selectedProperty().addListener((o, was, now) -> {
+                if (now && tab.getContent() == null) {
+                    tab.setContent(t.node());
+                }
+            });
             pane.getTabs().add(tab);
         }
         String start = System.getProperty("scalewright.startTab"); // e.g. exports-tab, to look at a tool
