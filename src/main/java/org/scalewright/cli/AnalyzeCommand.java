@@ -40,12 +40,9 @@ public final class AnalyzeCommand implements Callable<Integer> {
         Scale scale = inputs.scale();
         ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
         PrintWriter w = spec.commandLine().getOut();
+        String closing = Outputs.csvIfAsked(out, AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a));
         print(a, w);
-        if (out != null) {
-            Outputs.csv(out, AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a));
-            w.println();
-            w.println("wrote " + out);
-        }
+        Outputs.printClosing(w, closing);
         return ExitStatus.OK;
     }
 

@@ -113,12 +113,9 @@ public final class CheckWireCommand implements Callable<Integer> {
         WireCheckRequest request = request();
         WireCheckReport report = WireCheck.run(request);
         PrintWriter w = spec.commandLine().getOut();
+        String closing = Outputs.csvIfAsked(out, WireCheckCsv.comments(report), WireCheckCsv.HEADER, WireCheckCsv.rows(report));
         print(report, w);
-        if (out != null) {
-            Outputs.csv(out, WireCheckCsv.comments(report), WireCheckCsv.HEADER, WireCheckCsv.rows(report));
-            w.println();
-            w.println("wrote " + out);
-        }
+        Outputs.printClosing(w, closing);
         return ExitStatus.OK;
     }
 

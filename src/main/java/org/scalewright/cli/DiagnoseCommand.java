@@ -80,12 +80,9 @@ public final class DiagnoseCommand implements Callable<Integer> {
                 BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire());
         DiagnosisReport report = SectionDiagnosis.diagnose(request);
         PrintWriter w = spec.commandLine().getOut();
+        String closing = Outputs.csvIfAsked(out, DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report));
         print(report, w);
-        if (out != null) {
-            Outputs.csv(out, DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report));
-            w.println();
-            w.println("wrote " + out);
-        }
+        Outputs.printClosing(w, closing);
         return ExitStatus.OK;
     }
 

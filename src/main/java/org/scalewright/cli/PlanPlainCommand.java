@@ -70,18 +70,11 @@ public final class PlanPlainCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         targetOptions.check();
-        if (!(changeCost >= 0) || Double.isInfinite(changeCost)) {
-            throw new UserError("--change-cost must be >= 0, was " + Formats.trim(changeCost));
-        }
-        if (!(stepCost >= 0) || Double.isInfinite(stepCost)) {
-            throw new UserError("--step-cost must be >= 0, was " + Formats.trim(stepCost));
-        }
+        OptionChecks.nonNegative("--change-cost", changeCost);
+        OptionChecks.nonNegative("--step-cost", stepCost);
         Scale scale = inputs.scale();
         AnalysisSettings settings = inputs.settings();
-        double max = maxBreak == null ? settings.bands().danger() : maxBreak;
-        if (!(max > 0 && max <= 100)) {
-            throw new UserError("--max-break must be a percent > 0 and <= 100, was " + Formats.trim(max));
-        }
+        double max = OptionChecks.maxBreak(maxBreak, settings);
         List<CoreWire> wires = PlanWireLists.sizes("--sizes", sizes);
         ScaleAnalysis present = ScaleAnalyzer.analyze(scale, settings);
         List<NoteResult> planned = PlainPlanner.plannedKeys(present, keys);

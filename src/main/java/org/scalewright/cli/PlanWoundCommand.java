@@ -119,15 +119,9 @@ public final class PlanWoundCommand implements Callable<Integer> {
         if (doubleAbove != null && !(doubleAbove > 0) || doubleAbove != null && doubleAbove.isInfinite()) {
             throw new UserError("--double-above must be a diameter > 0 mm, was " + Formats.trim(doubleAbove));
         }
-        if (!(doubleRatio > 0) || Double.isInfinite(doubleRatio)) {
-            throw new UserError("--double-ratio must be > 0, was " + Formats.trim(doubleRatio));
-        }
-        if (!(changeCost >= 0) || Double.isInfinite(changeCost)) {
-            throw new UserError("--change-cost must be >= 0, was " + Formats.trim(changeCost));
-        }
-        if (!(stepCost >= 0) || Double.isInfinite(stepCost)) {
-            throw new UserError("--step-cost must be >= 0, was " + Formats.trim(stepCost));
-        }
+        OptionChecks.positive("--double-ratio", doubleRatio, "");
+        OptionChecks.nonNegative("--change-cost", changeCost);
+        OptionChecks.nonNegative("--step-cost", stepCost);
         if (joinBreak < 0) {
             throw new UserError("--join-break must be 0 (off) or a number of keys, was " + joinBreak);
         }
@@ -135,10 +129,7 @@ public final class PlanWoundCommand implements Callable<Integer> {
                 : PlanWireLists.diametersMm("--cores", cores);
         Scale scale = inputs.scale();
         AnalysisSettings settings = inputs.settings();
-        double max = maxBreak == null ? settings.bands().danger() : maxBreak;
-        if (!(max > 0 && max <= 100)) {
-            throw new UserError("--max-break must be a percent > 0 and <= 100, was " + Formats.trim(max));
-        }
+        double max = OptionChecks.maxBreak(maxBreak, settings);
         ScaleAnalysis present = ScaleAnalyzer.analyze(scale, settings);
         List<NoteResult> planned = WoundPlanner.plannedKeys(present, keys);
         if (planned.isEmpty()) {

@@ -49,12 +49,9 @@ public final class StretchCommand implements Callable<Integer> {
         StretchCurve curve = TuningStretch.of(a, type);
         CsvSheet sheet = StretchCsv.sheet(curve, List.of(), header(scale));
         PrintWriter w = spec.commandLine().getOut();
+        String closing = Outputs.csvIfAsked(out, sheet.comments(), sheet.header(), sheet.rows());
         print(scale, curve, w);
-        if (out != null) {
-            Outputs.csv(out, sheet.comments(), sheet.header(), sheet.rows());
-            w.println();
-            w.println("wrote " + out);
-        }
+        Outputs.printClosing(w, closing);
         return ExitStatus.OK;
     }
 
