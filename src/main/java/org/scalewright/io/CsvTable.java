@@ -15,11 +15,13 @@ import java.util.Locale;
  *
  * @param file     the file read
  * @param comments the text of the comment lines before the header, without the {@code #}
+ * @param commentLines the line number of each comment line
  * @param header   the header cells, trimmed and lower-cased
  * @param headerLine line number of the header
  * @param rows     the data rows
  */
-record CsvTable(Path file, List<String> comments, List<String> header, int headerLine, List<Row> rows) {
+record CsvTable(Path file, List<String> comments, List<Integer> commentLines, List<String> header, int headerLine,
+                List<Row> rows) {
 
     /** One data row. @param line 1-based line number @param cells the cells, trimmed */
     record Row(int line, List<String> cells) {
@@ -32,6 +34,7 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
     static CsvTable parse(Path file, List<String> lines) throws BadInputException {
         CSVParser parser = new CSVParserBuilder().withIgnoreLeadingWhiteSpace(true).build();
         List<String> comments = new ArrayList<>();
+        List<Integer> commentLines = new ArrayList<>();
         List<String> header = null;
         int headerLine = 0;
         List<Row> rows = new ArrayList<>();
@@ -44,6 +47,7 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
             if (stripped.startsWith("#")) {
                 if (header == null) {
                     comments.add(stripped.substring(1).strip());
+                    commentLines.add(i + 1);
                 }
                 continue;
             }
@@ -73,8 +77,8 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
             throw BadInputException.of(file, lines.isEmpty() ? "the file is empty; expected a header line and rows"
                     : "has no header line; expected a line of column names such as key,strings,length_mm,wire");
         }
-        return dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), header, headerLine,
-                List.copyOf(rows)));
+        return dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), List.copyOf(commentLines), header,
+                headerLine, List.copyOf(rows)));
     }
 
     /**
@@ -93,7 +97,8 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
         final int w = width;
         List<Row> rows = t.rows().stream()
                 .map(r -> r.cells().size() > w ? new Row(r.line(), r.cells().subList(0, w)) : r).toList();
-        return new CsvTable(t.file(), t.comments(), t.header().subList(0, w), t.headerLine(), rows);
+        return new CsvTable(t.file(), t.comments(), t.commentLines(), t.header().subList(0, w), t.headerLine(),
+                rows);
     }
 
     private static boolean columnIsBlank(List<Row> rows, int col) {
@@ -118,6 +123,18 @@ record CsvTable(Path file, List<String> comments, List<String> header, int heade
     }
 
     /** @return the value of a {@code # name: value} comment, or null */
+    /** @return the line number of the {@code # name: value} comment, or 0 */
+    int commentLine(String name) {
+        for (int i = 0; i < comments.size(); i++) {
+            String c = comments.get(i);
+            int colon = c.indexOf(':');
+            if (colon > 0 && c.substring(0, colon).strip().equalsIgnoreCase(name)) {
+                return commentLines.get(i);
+            }
+        }
+        return 0;
+    }
+
     String commentValue(String name) {
         for (String c : comments) {
             int colon = c.indexOf(':');

@@ -57,7 +57,7 @@ public final class ScaleSheetReader {
             try {
                 pitch = new PitchStandard(Double.parseDouble(a4));
             } catch (IllegalArgumentException e) {
-                problems.add(new SheetProblem(file, 0, "", "the '# a4_hz:' comment must give a frequency in Hz "
+                problems.add(new SheetProblem(file, table.commentLine("a4_hz"), "", "the '# a4_hz:' comment must give a frequency in Hz "
                         + "between 0 and 1000, was '" + a4 + "'"));
             }
         }

@@ -278,7 +278,7 @@ class ScaleSheetReaderTest {
         only("key,strings,length_mm,wire_mm,wrap1_mm,wrap_metal\n1,1,1500,1.5,1.0,brass\n", 2, "wrap_metal",
                 "wrap metal must be copper, iron or steel, was 'brass'");
         only(HEADER + "1,1,\"1500,1.5\n", 2, "", "cannot be split into cells");
-        only("# a4_hz: high\n" + HEADER + "1,1,1500,1.5\n", 0, "", "a4_hz");
+        only("# title: x\n# a4_hz: high\n" + HEADER + "1,1,1500,1.5\n", 2, "", "a4_hz");
         only(",key,strings,length_mm,wire_mm\n,1,1,1500,1.5\n", 1, "(blank)", "no name");
     }
 
