@@ -122,7 +122,31 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
         return DECIMAL.matcher(cell).matches();
     }
 
-    /** @return the value of a {@code # name: value} comment, or null */
+    /** @return the cell of {@code row} at {@code col}, "" when the row is shorter */
+    static String cell(Row row, int col) {
+        return col >= 0 && col < row.cells().size() ? row.cells().get(col) : "";
+    }
+
+    /**
+     * Reads a required number cell written as a plain decimal, as every reader of the program
+     * accepts them; adds a problem and returns null when the cell is empty or not such a number.
+     *
+     * @param column the column's name, for the message
+     * @param what   what the number is, in words, for the message ({@code "a tension in N"})
+     */
+    static Double requiredNumber(Path file, Row row, int col, String column, String what, List<SheetProblem> problems) {
+        String text = cell(row, col);
+        if (text.isEmpty()) {
+            problems.add(new SheetProblem(file, row.line(), column, "a value is required here (" + what + ")"));
+            return null;
+        }
+        if (!isDecimal(text)) {
+            problems.add(new SheetProblem(file, row.line(), column, "expected " + what + ", was '" + text + "'"));
+            return null;
+        }
+        return Double.parseDouble(text);
+    }
+
     /** @return the line number of the {@code # name: value} comment, or 0 */
     int commentLine(String name) {
         for (int i = 0; i < comments.size(); i++) {
@@ -135,6 +159,7 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
         return 0;
     }
 
+    /** @return the value of a {@code # name: value} comment, or null */
     String commentValue(String name) {
         for (String c : comments) {
             int colon = c.indexOf(':');

@@ -70,8 +70,8 @@ public final class PitchStateReader {
                 problems.add(new SheetProblem(file, r.line(), "", "the row has more cells than the header"));
                 continue;
             }
-            String keyText = cell(r, keyCol);
-            String centsText = cell(r, centsCol);
+            String keyText = CsvTable.cell(r, keyCol);
+            String centsText = CsvTable.cell(r, centsCol);
             Integer key = null;
             if (keyText.isEmpty()) {
                 problems.add(new SheetProblem(file, r.line(), "key", "a key number or note name is required here"));
@@ -82,22 +82,12 @@ public final class PitchStateReader {
                     problems.add(new SheetProblem(file, r.line(), "key", e.getMessage()));
                 }
             }
-            Double cents = null;
-            if (centsText.isEmpty()) {
-                problems.add(new SheetProblem(file, r.line(), "cents_flat", "a value is required here (cents flat, "
-                        + "negative for sharp)"));
-            } else {
-                try {
-                    cents = Double.parseDouble(centsText);
-                    if (!Double.isFinite(cents) || Math.abs(cents) > MAX_CENTS) {
-                        problems.add(new SheetProblem(file, r.line(), "cents_flat", "must be between -1200 and 1200 "
-                                + "cents, was " + centsText));
-                        cents = null;
-                    }
-                } catch (NumberFormatException e) {
-                    problems.add(new SheetProblem(file, r.line(), "cents_flat", "expected a number of cents, was '"
-                            + centsText + "'"));
-                }
+            Double cents = CsvTable.requiredNumber(file, r, centsCol, "cents_flat",
+                    "a number of cents", problems);
+            if (cents != null && Math.abs(cents) > MAX_CENTS) {
+                problems.add(new SheetProblem(file, r.line(), "cents_flat", "must be between -1200 and 1200 "
+                        + "cents, was " + centsText));
+                cents = null;
             }
             if (key == null || cents == null) {
                 continue;
@@ -130,7 +120,4 @@ public final class PitchStateReader {
         return here;
     }
 
-    private static String cell(CsvTable.Row r, int col) {
-        return col < r.cells().size() ? r.cells().get(col) : "";
-    }
 }

@@ -123,24 +123,11 @@ public final class StrengthTableReader {
     }
 
     private static Double positive(Path file, CsvTable.Row r, int col, String name, List<SheetProblem> problems) {
-        String text = col < r.cells().size() ? r.cells().get(col) : "";
-        if (text.isEmpty()) {
-            problems.add(new SheetProblem(file, r.line(), name, "a value is required here (a number)"));
+        Double v = CsvTable.requiredNumber(file, r, col, name, "a number", problems);
+        if (v != null && !(v > 0)) {
+            problems.add(new SheetProblem(file, r.line(), name, "must be greater than 0, was " + CsvTable.cell(r, col)));
             return null;
         }
-        try {
-            if (!CsvTable.isDecimal(text)) {
-                throw new NumberFormatException(text);
-            }
-            double v = Double.parseDouble(text);
-            if (!(v > 0) || Double.isInfinite(v)) {
-                problems.add(new SheetProblem(file, r.line(), name, "must be greater than 0, was " + text));
-                return null;
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            problems.add(new SheetProblem(file, r.line(), name, "expected a number, was '" + text + "'"));
-            return null;
-        }
+        return v;
     }
 }

@@ -77,12 +77,8 @@ public final class TargetCurveReader {
         return TargetCurve.throughPoints(keys, v, "target from " + file.getFileName());
     }
 
-    private static String cell(CsvTable.Row r, int col) {
-        return col < r.cells().size() ? r.cells().get(col) : "";
-    }
-
     private static Integer key(Path file, CsvTable.Row r, int col, List<SheetProblem> problems) {
-        String text = cell(r, col);
+        String text = CsvTable.cell(r, col);
         if (text.isEmpty()) {
             problems.add(new SheetProblem(file, r.line(), KEY, "a value is required here (a key number or note name)"));
             return null;
@@ -96,21 +92,12 @@ public final class TargetCurveReader {
     }
 
     private static Double tension(Path file, CsvTable.Row r, int col, List<SheetProblem> problems) {
-        String text = cell(r, col);
-        if (text.isEmpty()) {
-            problems.add(new SheetProblem(file, r.line(), TENSION, "a value is required here (a tension in N)"));
+        Double v = CsvTable.requiredNumber(file, r, col, TENSION, "a tension in N", problems);
+        if (v != null && !(v > 0)) {
+            problems.add(new SheetProblem(file, r.line(), TENSION, "must be greater than 0 N, was "
+                    + CsvTable.cell(r, col)));
             return null;
         }
-        try {
-            double v = Double.parseDouble(text);
-            if (!(v > 0) || Double.isInfinite(v)) {
-                problems.add(new SheetProblem(file, r.line(), TENSION, "must be greater than 0 N, was " + text));
-                return null;
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            problems.add(new SheetProblem(file, r.line(), TENSION, "expected a number (N), was '" + text + "'"));
-            return null;
-        }
+        return v;
     }
 }

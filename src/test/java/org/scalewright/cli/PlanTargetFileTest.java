@@ -55,6 +55,12 @@ class PlanTargetFileTest {
         assertTrue(r.err().contains("t2.csv, line 6, column tension_n: a value is required here"), r.err());
         assertEquals(4, r.errLines().size(), r.err());
         assertFalse(Files.exists(out));
+        r = PlanCommandRunner.run("plan-plain", in.toString(), "--keys", "40-88", "--target",
+                write("t3.csv", "key,tension_n\n40,720d\n60,0x1p9\n").toString(), "--out", out.toString());
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("t3.csv, line 2, column tension_n: expected a tension in N, was '720d'"), r.err());
+        assertEquals(2, r.errLines().size(), r.err());
+        assertFalse(Files.exists(out));
     }
 
     @Test

@@ -58,6 +58,15 @@ class PitchStateReaderTest {
     }
 
     @Test
+    void numbersOnlyJavaWouldReadAreRefusedLikeInScaleSheets() throws Exception {
+        BadInputException e = assertThrows(BadInputException.class, () -> PitchStateReader.read(file(
+                "key,cents_flat\n40,12d\n41,0x1p3\n42,NaN\n"), scale()));
+        assertEquals(3, e.problems().size(), e.getMessage());
+        assertTrue(e.getMessage().contains("line 2, column cents_flat: expected a number of cents, was '12d'"),
+                e.getMessage());
+    }
+
+    @Test
     void duplicateKeysAndBadHeadersAreRefused() throws Exception {
         BadInputException dup = assertThrows(BadInputException.class, () -> PitchStateReader.read(file(
                 "key,cents_flat\n40,10\nC4,12\n")));
