@@ -1,8 +1,8 @@
 package org.scalewright.app;
 
 import java.util.Locale;
-import org.scalewright.chart.DisplayUnits;
-import org.scalewright.chart.ForceUnit;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.ForceUnit;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.UnitConversions;
 

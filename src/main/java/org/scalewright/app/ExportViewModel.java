@@ -20,7 +20,6 @@ import javafx.beans.property.SimpleObjectProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.jfree.chart.JFreeChart;
-import org.scalewright.chart.ChartFiles;
 import org.scalewright.chart.Curve;
 import org.scalewright.chart.CurveData;
 import org.scalewright.chart.ScaleCurves;
@@ -31,15 +30,17 @@ import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.AtomicFiles;
 import org.scalewright.io.CsvCells;
 import org.scalewright.io.CsvReportWriter;
-import org.scalewright.io.report.CsvSheet;
-import org.scalewright.io.report.ReportContent;
-import org.scalewright.io.report.ReportFiles;
-import org.scalewright.io.report.ReportPackage;
-import org.scalewright.io.report.ReportUnits;
-import org.scalewright.io.report.ScheduleCsv;
-import org.scalewright.io.report.StretchCsv;
-import org.scalewright.io.report.WireOrderCsv;
-import org.scalewright.io.report.WoundOrderCsv;
+import org.scalewright.report.CsvSheet;
+import org.scalewright.report.ReportContent;
+import org.scalewright.report.ReportFiles;
+import org.scalewright.chart.ChartFiles;
+import org.scalewright.report.ReportPackage;
+import org.scalewright.report.Reports;
+import org.scalewright.report.ReportUnits;
+import org.scalewright.report.ScheduleCsv;
+import org.scalewright.report.StretchCsv;
+import org.scalewright.report.WireOrderCsv;
+import org.scalewright.report.WoundOrderCsv;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**
@@ -139,7 +140,7 @@ final class ExportViewModel {
             ReportFiles files = null;
             RuntimeException failure = null;
             try {
-                files = ReportPackage.files(content.get(), ChartFiles.reportCharts(content.get()));
+                files = Reports.make(content.get());
             } catch (RuntimeException e) {
                 failure = e;
             }
@@ -178,7 +179,7 @@ final class ExportViewModel {
         }
         ReportFiles files;
         try {
-            files = ReportPackage.files(content.get(), ChartFiles.reportCharts(content.get()));
+            files = Reports.make(content.get());
         } catch (RuntimeException e) {
             return failed("Report not written", "the report could not be made: " + why(e) + ". Nothing was written.");
         }
@@ -273,7 +274,7 @@ final class ExportViewModel {
             case STRETCH_CSV -> csv(file, StretchCsv.sheet(c.chosenStretch(), c.stretchInOrder(), head));
             case RESULTS -> CsvReportWriter.write(file, AnalysisCsv.comments(c.analysis()), AnalysisCsv.HEADER,
                     AnalysisCsv.rows(c.analysis()));
-            case PDF -> AtomicFiles.write(file, ReportPackage.files(c, ChartFiles.reportCharts(c))
+            case PDF -> AtomicFiles.write(file, Reports.make(c)
                     .content(ReportPackage.PDF), false);
             default -> {
                 JFreeChart chart = chart(piece, c);

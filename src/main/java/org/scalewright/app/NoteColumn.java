@@ -2,7 +2,7 @@ package org.scalewright.app;
 
 import java.util.Locale;
 import java.util.stream.Collectors;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.Note;
 import org.scalewright.physics.Flag;
 import org.scalewright.physics.NoteResult;

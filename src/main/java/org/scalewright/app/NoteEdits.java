@@ -2,7 +2,7 @@ package org.scalewright.app;
 
 import java.util.Locale;
 import java.util.Optional;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;

@@ -1,7 +1,7 @@
 package org.scalewright.app;
 
 import java.util.Locale;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.design.rescale.KeyChange;
 import org.scalewright.model.Note;
 

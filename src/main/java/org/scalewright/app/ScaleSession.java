@@ -15,7 +15,7 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.ScaleSheetReader;

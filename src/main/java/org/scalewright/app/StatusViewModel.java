@@ -6,7 +6,7 @@ import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.SimpleBooleanProperty;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.KeyNames;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.SectionTotal;

@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import java.util.Optional;
 import org.scalewright.chart.Curve;
 import org.scalewright.chart.CurveData;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.chart.ScaleCurves;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.ScaleSheetReader;

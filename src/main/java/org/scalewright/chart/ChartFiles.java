@@ -8,7 +8,6 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import javax.imageio.IIOImage;
@@ -23,9 +22,6 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
 import org.jfree.svg.ViewBox;
-import org.scalewright.io.report.ReportChart;
-import org.scalewright.io.report.ReportContent;
-import org.scalewright.io.report.ReportUnits;
 
 /**
  * Draws a chart into files: PNG at print resolution and SVG. Charts are laid out at a size
@@ -129,43 +125,6 @@ public final class ChartFiles {
     /** @return {@link #svg} as UTF-8 bytes */
     public static byte[] svgBytes(JFreeChart chart, int width, int height) {
         return svg(chart, width, height).getBytes(StandardCharsets.UTF_8);
-    }
-
-    /**
-     * Draws the four charts of a report at print size: {@code tension}, {@code break-percent},
-     * {@code inharmonicity} (the working scale beside the reference, if any) and {@code stretch}
-     * (every octave type).
-     *
-     * @param content the report's content
-     * @return the charts, the three curves first, then the stretch curve
-     */
-    public static List<ReportChart> reportCharts(ReportContent content) {
-        DisplayUnits units = content.units() == ReportUnits.IMPERIAL ? DisplayUnits.IMPERIAL : DisplayUnits.METRIC;
-        CurveData data = CurveData.of(content.analysis(), units)
-                .withReference(content.reference().map(ReportContent.Reference::analysis).orElse(null));
-        String beside = content.reference().isPresent()
-                ? " Working scale in blue, the reference (" + content.reference().get().sheetName()
-                        + ") grey dashed." : "";
-        String marks = " Dashed vertical lines mark section boundaries and wound/plain changes; red triangles "
-                + "mark flagged notes.";
-        List<ReportChart> out = new ArrayList<>();
-        out.add(reportChart("tension", "Tension per string at the working pitch, " + units.force().symbol() + "."
-                + beside + marks, ScaleCurves.tension(data)));
-        out.add(reportChart("break-percent", "Stress as percent of the wire's breaking strength ("
-                + content.analysis().settings().strength().name() + "), stress bands shaded." + beside + marks,
-                ScaleCurves.breakPercent(data)));
-        out.add(reportChart("inharmonicity", "Inharmonicity coefficient B at the working pitch, logarithmic scale."
-                + beside + marks, ScaleCurves.inharmonicity(data)));
-        out.add(reportChart("stretch", "Tuning stretch the scale's inharmonicity asks for, cents from equal "
-                + "temperament, for 2:1, 4:2 and 6:3 octaves; A3-A4 held at equal temperament.",
-                StretchChart.build("", content.stretchInOrder())));
-        return out;
-    }
-
-    /** @return one chart drawn at print size: the image at {@link #PRINT_DPI}, its PNG and its SVG */
-    public static ReportChart reportChart(String name, String caption, JFreeChart chart) {
-        BufferedImage img = image(chart, PRINT_WIDTH, PRINT_HEIGHT, PRINT_DPI);
-        return new ReportChart(name, caption, img, png(img, PRINT_DPI), svgBytes(chart, PRINT_WIDTH, PRINT_HEIGHT));
     }
 
     private static void check(int width, int height) {

@@ -1,5 +1,6 @@
 package org.scalewright.chart;
 
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.physics.NoteResult;
 
 /** The three curves drawn over key number. */

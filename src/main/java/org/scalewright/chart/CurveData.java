@@ -3,6 +3,7 @@ package org.scalewright.chart;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalInt;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**

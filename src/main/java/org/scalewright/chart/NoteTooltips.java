@@ -5,6 +5,7 @@ import java.util.Locale;
 import java.util.stream.Collectors;
 import org.jfree.chart.labels.XYToolTipGenerator;
 import org.jfree.data.xy.XYDataset;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.physics.NoteResult;
 
 /**

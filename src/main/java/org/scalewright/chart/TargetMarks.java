@@ -11,6 +11,7 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.scalewright.design.rescale.ControlPoint;
 import org.scalewright.design.rescale.TargetCurve;
+import org.scalewright.model.DisplayUnits;
 
 /**
  * A rescaling target drawn on the tension chart of {@link ScaleCurves}: the target curve (a

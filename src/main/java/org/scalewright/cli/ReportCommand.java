@@ -7,17 +7,15 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
-import org.scalewright.chart.ChartFiles;
 import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.io.ScaleSheetReader;
-import org.scalewright.io.report.ReportChart;
-import org.scalewright.io.report.ReportContent;
-import org.scalewright.io.report.ReportFiles;
-import org.scalewright.io.report.ReportPackage;
-import org.scalewright.io.report.ReportUnits;
+import org.scalewright.report.ReportContent;
+import org.scalewright.report.ReportFiles;
+import org.scalewright.report.Reports;
+import org.scalewright.report.ReportUnits;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
@@ -96,8 +94,7 @@ public final class ReportCommand implements Callable<Integer> {
         }
         ReportContent content = ReportContent.compute(inputs.scaleFile.getFileName().toString(), a, ref, u, type,
                 allowances);
-        List<ReportChart> charts = ChartFiles.reportCharts(content);
-        ReportFiles files = ReportPackage.files(content, charts);
+        ReportFiles files = Reports.make(content);
         List<Path> written;
         try {
             written = files.writeTo(out);

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 
 /** The Exports tab's behaviour through its view model, without a display, on the demo grand. */
 class ExportViewModelTest {

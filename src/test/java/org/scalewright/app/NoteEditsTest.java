@@ -8,7 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.Note;

@@ -10,7 +10,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * The layer rule of DESIGN §6: model → physics → design → io → chart → cli | app, each
+ * The layer rule of DESIGN §6: model → physics → design → io → chart → report → cli | app, each
  * depending only on those before it; only cli writes to standard output; only app imports
  * JavaFX; cli and app do not depend on each other. The root package holds only the launcher,
  * which may call cli and app.
@@ -32,16 +32,18 @@ class LayerRulesTest {
                 .layer("design").definedBy("org.scalewright.design..")
                 .layer("io").definedBy("org.scalewright.io..")
                 .layer("chart").definedBy("org.scalewright.chart..")
+                .layer("report").definedBy("org.scalewright.report..")
                 .layer("cli").definedBy("org.scalewright.cli..")
                 .layer("app").definedBy("org.scalewright.app..")
                 .layer("launcher").definedBy("org.scalewright")
                 .whereLayer("launcher").mayNotBeAccessedByAnyLayer()
                 .whereLayer("app").mayOnlyBeAccessedByLayers("launcher")
                 .whereLayer("cli").mayOnlyBeAccessedByLayers("launcher")
-                .whereLayer("chart").mayOnlyBeAccessedByLayers("cli", "app")
-                .whereLayer("io").mayOnlyBeAccessedByLayers("chart", "cli", "app")
-                .whereLayer("design").mayOnlyBeAccessedByLayers("io", "chart", "cli", "app")
-                .whereLayer("physics").mayOnlyBeAccessedByLayers("design", "io", "chart", "cli", "app")
+                .whereLayer("report").mayOnlyBeAccessedByLayers("cli", "app")
+                .whereLayer("chart").mayOnlyBeAccessedByLayers("report", "cli", "app")
+                .whereLayer("io").mayOnlyBeAccessedByLayers("chart", "report", "cli", "app")
+                .whereLayer("design").mayOnlyBeAccessedByLayers("io", "chart", "report", "cli", "app")
+                .whereLayer("physics").mayOnlyBeAccessedByLayers("design", "io", "chart", "report", "cli", "app")
                 .withOptionalLayers(true)
                 .check(classes);
     }

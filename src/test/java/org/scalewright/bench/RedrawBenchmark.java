@@ -20,7 +20,7 @@ import org.openjdk.jmh.annotations.Warmup;
 import org.scalewright.chart.ChartImages;
 import org.scalewright.chart.Curve;
 import org.scalewright.chart.CurveData;
-import org.scalewright.chart.DisplayUnits;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.chart.ScaleCurves;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.ScaleSheetReader;

@@ -17,11 +17,12 @@ import org.jfree.chart.JFreeChart;
 import org.junit.jupiter.api.Test;
 import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.stretch.OctaveType;
-import org.scalewright.io.report.ReportChart;
-import org.scalewright.io.report.ReportContent;
-import org.scalewright.io.report.ReportUnits;
+import org.scalewright.report.ReportChart;
+import org.scalewright.report.ReportContent;
+import org.scalewright.report.ReportUnits;
 import org.w3c.dom.Element;
 import org.w3c.dom.NodeList;
+import org.scalewright.model.DisplayUnits;
 
 class ChartFilesTest {
     private final JFreeChart chart = ScaleCurves.tension(CurveData.of(CurveFixtures.analysis(1.0),
@@ -59,23 +60,6 @@ class ChartFilesTest {
         assertEquals(svg, new String(ChartFiles.svgBytes(chart, 640, 380), StandardCharsets.UTF_8));
     }
 
-    @Test
-    void theReportGetsFourChartsEachWithImagePngAndSvg() throws Exception {
-        ReportContent c = ReportContent.compute("small.csv", CurveFixtures.analysis(1.0),
-                Optional.of(new ReportContent.Reference("ref.csv", CurveFixtures.analysis(1.05))),
-                ReportUnits.IMPERIAL, OctaveType.FOUR_TWO, WireAllowances.DEFAULT);
-        List<ReportChart> charts = ChartFiles.reportCharts(c);
-        assertEquals(List.of("tension", "break-percent", "inharmonicity", "stretch"),
-                charts.stream().map(ReportChart::name).toList());
-        for (ReportChart rc : charts) {
-            BufferedImage back = ImageIO.read(new ByteArrayInputStream(rc.png()));
-            assertEquals(rc.image().getWidth(), back.getWidth());
-            assertTrue(new String(rc.svg(), StandardCharsets.UTF_8).contains("<svg"));
-        }
-        assertTrue(charts.get(0).caption().contains("lbf"));
-        assertTrue(charts.get(0).caption().contains("ref.csv"));
-        assertTrue(new String(charts.get(0).svg(), StandardCharsets.UTF_8).contains("reference"));
-    }
 
     @Test
     void badSizesAreRefused() {

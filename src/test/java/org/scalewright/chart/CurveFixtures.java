@@ -18,7 +18,7 @@ import org.scalewright.physics.ScaleAnalyzer;
  * of wound strings (keys 1–10), a "tenor" section with four wound strings (11–14) and plain
  * wire above.
  */
-final class CurveFixtures {
+public final class CurveFixtures {
     private CurveFixtures() {
     }
 
@@ -37,7 +37,7 @@ final class CurveFixtures {
         return new Scale("small invented scale", PitchStandard.ISO_16, notes, null);
     }
 
-    static ScaleAnalysis analysis(double lengthFactor) {
+    public static ScaleAnalysis analysis(double lengthFactor) {
         return ScaleAnalyzer.analyze(scale(lengthFactor), BuiltInData.defaultSettings());
     }
 }

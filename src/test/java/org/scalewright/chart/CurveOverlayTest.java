@@ -12,6 +12,7 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.junit.jupiter.api.Test;
 import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.model.DisplayUnits;
 
 /** Overlays of percent of breaking strength drawn over the percent chart (invented values, drawing only). */
 class CurveOverlayTest {

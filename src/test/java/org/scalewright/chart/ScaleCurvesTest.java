@@ -21,6 +21,7 @@ import org.junit.jupiter.api.Test;
 import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.model.DisplayUnits;
 
 class ScaleCurvesTest {
     private final ScaleAnalysis working = CurveFixtures.analysis(1.0);

@@ -11,6 +11,8 @@ import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.physics.ScaleAnalyzer;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.ForceUnit;
 
 /** A rescaling target drawn on the tension chart: its own datasets, display units, and removal. */
 class TargetMarksTest {

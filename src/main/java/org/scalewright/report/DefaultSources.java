@@ -1,4 +1,4 @@
-package org.scalewright.io.report;
+package org.scalewright.report;
 
 import com.opencsv.CSVReader;
 import com.opencsv.exceptions.CsvException;

@@ -1,4 +1,4 @@
-package org.scalewright.io.report;
+package org.scalewright.report;
 
 import java.awt.Color;
 import java.awt.image.BufferedImage;

@@ -1,6 +1,5 @@
-package org.scalewright.chart;
+package org.scalewright.model;
 
-import org.scalewright.model.LengthUnit;
 
 /**
  * The units lengths and forces are shown and entered in. Stress is always shown in MPa,

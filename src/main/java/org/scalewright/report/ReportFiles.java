@@ -1,4 +1,4 @@
-package org.scalewright.io.report;
+package org.scalewright.report;
 
 import java.io.IOException;
 import java.nio.file.Files;

@@ -1,6 +1,5 @@
-package org.scalewright.chart;
+package org.scalewright.model;
 
-import org.scalewright.model.UnitConversions;
 
 /**
  * A unit of force used for display (charts, tables). Inside the engine every force is in

@@ -1,4 +1,4 @@
-package org.scalewright.io.report;
+package org.scalewright.report;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -16,7 +16,7 @@ import org.scalewright.design.orders.WoundOrderRow;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.design.stretch.TuningStretch;
-import org.scalewright.io.report.PdfTable.Column;
+import org.scalewright.report.PdfTable.Column;
 import org.scalewright.model.Scale;
 import org.scalewright.model.UnitConversions;
 import org.scalewright.model.Wrap;

@@ -1,4 +1,4 @@
-package org.scalewright.io.report;
+package org.scalewright.report;
 
 import java.util.List;
 import java.util.Locale;
