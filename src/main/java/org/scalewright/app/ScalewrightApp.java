@@ -4,6 +4,10 @@ import java.util.List;
 import javafx.application.Application;
 import javafx.application.Platform;
 import javafx.stage.Stage;
+import org.scalewright.app.session.DemoSheet;
+import org.scalewright.app.session.FxPrompts;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.Timings;
 
 /**
  * The JavaFX application: one workstation window on the sheet asked for at launch (the demo

@@ -6,6 +6,8 @@ import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.SimpleBooleanProperty;
+import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.app.session.ScaleSession;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.KeyNames;
 import org.scalewright.physics.ScaleAnalysis;

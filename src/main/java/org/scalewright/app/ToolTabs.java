@@ -5,6 +5,18 @@ import java.util.List;
 import javafx.beans.binding.Bindings;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
+import org.scalewright.app.diagnosis.DiagnosisView;
+import org.scalewright.app.diagnosis.DiagnosisViewModel;
+import org.scalewright.app.export.ExportView;
+import org.scalewright.app.export.ExportViewModel;
+import org.scalewright.app.rescale.RescaleView;
+import org.scalewright.app.rescale.RescaleViewModel;
+import org.scalewright.app.stretch.StretchView;
+import org.scalewright.app.stretch.StretchViewModel;
+import org.scalewright.app.table.FlagsView;
+import org.scalewright.app.tool.Tool;
+import org.scalewright.app.wirecheck.WireCheckView;
+import org.scalewright.app.wirecheck.WireCheckViewModel;
 
 /**
  * The tabbed area under the note table, beside the curves: the flags list first, then one
@@ -12,18 +24,6 @@ import javafx.scene.control.TabPane;
  * view model; a tool adds itself in {@link #tools}.
  */
 final class ToolTabs {
-    /** One tool of the workstation: a titled part of the window. */
-    interface Tool {
-        /** @return the tab's title */
-        String title();
-
-        /** @return the tab's id, for tests and styling */
-        String id();
-
-        /** @return the tool's view */
-        javafx.scene.Node node();
-    }
-
     private ToolTabs() {
     }
 
@@ -61,7 +61,7 @@ final class ToolTabs {
         tools.add(new WireCheckView(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new StretchView(new StretchViewModel(model.session())));
-        tools.add(new ExportView(ExportViewModel.of(model), model.session()));
+        tools.add(new ExportView(ExportViewModel.of(model.session(), model.prompts()), model.session()));
         return tools;
     }
 }

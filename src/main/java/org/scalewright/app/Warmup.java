@@ -2,12 +2,13 @@ package org.scalewright.app;
 
 import java.nio.file.Path;
 import java.util.Optional;
+import org.scalewright.app.session.DemoSheet;
 import org.scalewright.chart.Curve;
 import org.scalewright.chart.CurveData;
-import org.scalewright.model.DisplayUnits;
 import org.scalewright.chart.ScaleCurves;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.ScaleSheetReader;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.physics.ScaleAnalyzer;
 
 /**

@@ -26,6 +26,16 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.scalewright.app.curves.CurvesView;
+import org.scalewright.app.export.ExportMenu;
+import org.scalewright.app.export.ExportViewModel;
+import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.app.session.FxPrompts;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.StrengthChoice;
+import org.scalewright.app.table.FlagsView;
+import org.scalewright.app.table.NoteColumn;
+import org.scalewright.app.table.NoteTableView;
 import org.scalewright.model.Scale;
 
 /**
@@ -135,7 +145,7 @@ final class WorkstationView {
                     }
                 });
         Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(),
-                ExportMenu.build(ExportViewModel.of(model)), new SeparatorMenuItem(), quit);
+                ExportMenu.build(ExportViewModel.of(model.session(), model.prompts())), new SeparatorMenuItem(), quit);
 
         MenuItem undo = item("Undo", "menu-undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN),
                 s::undo);

@@ -6,12 +6,19 @@ import java.util.Locale;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
-import org.scalewright.model.DisplayUnits;
-import org.scalewright.model.ForceUnit;
+import org.scalewright.app.curves.CurvesViewModel;
+import org.scalewright.app.session.CsvFileNames;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.StrengthChoice;
+import org.scalewright.app.session.UserPrompts;
+import org.scalewright.app.table.FlagsViewModel;
+import org.scalewright.app.table.NoteTableViewModel;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.ForceUnit;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.physics.StrengthTable;
 
@@ -19,7 +26,7 @@ import org.scalewright.physics.StrengthTable;
  * The window's commands: open, save, save as (with the unsaved-changes question), reference
  * scale, strength table, units, pitch standard, cautions; and the part view models.
  */
-final class WorkstationViewModel {
+public final class WorkstationViewModel {
     /** The display-unit choices offered. */
     enum UnitChoice {
         METRIC("mm and N", DisplayUnits.METRIC),
@@ -52,7 +59,7 @@ final class WorkstationViewModel {
     private final StatusViewModel status;
     private final StringBinding windowTitle;
 
-    WorkstationViewModel(ScaleSession session, UserPrompts prompts) {
+    public WorkstationViewModel(ScaleSession session, UserPrompts prompts) {
         this.session = session;
         this.prompts = prompts;
         this.table = new NoteTableViewModel(session);
@@ -64,7 +71,7 @@ final class WorkstationViewModel {
                 session.dirtyProperty(), session.documentNameProperty());
     }
 
-    ScaleSession session() {
+    public ScaleSession session() {
         return session;
     }
 
@@ -73,11 +80,11 @@ final class WorkstationViewModel {
         return prompts;
     }
 
-    NoteTableViewModel table() {
+    public NoteTableViewModel table() {
         return table;
     }
 
-    CurvesViewModel curves() {
+    public CurvesViewModel curves() {
         return curves;
     }
 
@@ -109,7 +116,7 @@ final class WorkstationViewModel {
      *
      * @return true when it was opened
      */
-    boolean openSheet(Path sheet, boolean saveBack) {
+    public boolean openSheet(Path sheet, boolean saveBack) {
         try {
             session.open(sheet, saveBack);
             return true;
@@ -136,7 +143,7 @@ final class WorkstationViewModel {
         String suggested = session.file().map(p -> p.getFileName().toString())
                 .orElse(suggestedName(session.documentNameProperty().get()));
         Optional<Path> target = prompts.chooseSheetToSave(suggested);
-        return target.isPresent() && writeTo(withCsvExtension(target.get()));
+        return target.isPresent() && writeTo(CsvFileNames.withCsvExtension(target.get()));
     }
 
     private boolean writeTo(Path target) {
@@ -176,11 +183,6 @@ final class WorkstationViewModel {
     static String suggestedName(String documentName) {
         String base = documentName.replaceAll(" \\(.*\\)$", "").replaceAll("\\.csv$", "");
         return (base.isBlank() || base.equals("untitled") ? "scale" : base + "-edited") + ".csv";
-    }
-
-    static Path withCsvExtension(Path p) {
-        String name = p.getFileName().toString();
-        return name.contains(".") ? p : p.resolveSibling(name + ".csv");
     }
 
     // ---- reference ----

@@ -21,6 +21,9 @@ import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
+import org.scalewright.app.export.ExportTestPrompts;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.TestSheets;
 
 /** The Tuning stretch and Exports tabs in the real window on the demo grand, headless (TestFX with Monocle). */
 @ExtendWith(ApplicationExtension.class)

@@ -9,6 +9,10 @@ import java.util.Optional;
 import java.util.prefs.Preferences;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.scalewright.app.session.DemoSheet;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.TestSheets;
 
 /** What the window opens at start, and the once-only cautions. */
 class LaunchTest {

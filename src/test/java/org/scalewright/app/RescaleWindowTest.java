@@ -24,6 +24,9 @@ import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.TestSheets;
 
 /** The rescaling tab of the real window on the demo grand, headless: propose, see it drawn, apply, undo. */
 @ExtendWith(ApplicationExtension.class)

@@ -16,6 +16,10 @@ import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.TestSheets;
+import org.scalewright.app.wirecheck.WireCheckViewModel;
 
 /** The wire check tab in the real window on the demo grand, driven headless (TestFX with Monocle). */
 @ExtendWith(ApplicationExtension.class)

@@ -16,6 +16,12 @@ import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.NoteResult;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.TestSheets;
+import org.scalewright.app.session.UserPrompts;
+import org.scalewright.app.table.NoteColumn;
+import org.scalewright.app.table.NoteRow;
 
 /** The window's behaviour through its view models, without a display. */
 class WorkstationViewModelTest {

@@ -29,6 +29,11 @@ import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.TestSheets;
+import org.scalewright.app.table.NoteColumn;
+import org.scalewright.app.table.NoteRow;
 
 /**
  * The real window on the demo grand, driven headless (TestFX with Monocle): keyboard edits,

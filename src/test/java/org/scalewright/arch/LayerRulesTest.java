@@ -2,6 +2,7 @@ package org.scalewright.arch;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
@@ -77,5 +78,35 @@ class LayerRulesTest {
                 .should().dependOnClassesThat().resideInAnyPackage("javafx..", "org.scalewright.app..")
                 .allowEmptyShould(true)
                 .check(classes);
+    }
+
+    @Test
+    void theWindowsRoomsHaveNoCycles() {
+        slices().matching("org.scalewright.app.(*)..").should().beFreeOfCycles().check(classes);
+    }
+
+    @Test
+    void eachToolStandsOnTheSharedRoomsOnly() {
+        layeredArchitecture().consideringOnlyDependenciesInLayers()
+                .layer("window").definedBy("org.scalewright.app")
+                .layer("tools").definedBy("org.scalewright.app.rescale..", "org.scalewright.app.wirecheck..",
+                        "org.scalewright.app.diagnosis..", "org.scalewright.app.stretch..",
+                        "org.scalewright.app.export..")
+                .layer("table and curves").definedBy("org.scalewright.app.table..", "org.scalewright.app.curves..")
+                .layer("shared").definedBy("org.scalewright.app.session..", "org.scalewright.app.tool..")
+                .whereLayer("window").mayNotBeAccessedByAnyLayer()
+                .whereLayer("tools").mayOnlyBeAccessedByLayers("window")
+                .whereLayer("table and curves").mayOnlyBeAccessedByLayers("window", "tools")
+                .check(classes);
+        for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export"}) {
+            noClasses().that().resideInAPackage("org.scalewright.app." + tool + "..")
+                    .should().dependOnClassesThat().resideInAnyPackage(otherTools(tool))
+                    .check(classes);
+        }
+    }
+
+    private static String[] otherTools(String tool) {
+        return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export")
+                .filter(t -> !t.equals(tool)).map(t -> "org.scalewright.app." + t + "..").toArray(String[]::new);
     }
 }

@@ -1,0 +1,15 @@
+package org.scalewright.app.session;
+
+import java.nio.file.Path;
+
+/** File names the window proposes and completes. */
+public final class CsvFileNames {
+    private CsvFileNames() {
+    }
+
+    /** @return {@code p}, with {@code .csv} added when its name has no extension */
+    public static Path withCsvExtension(Path p) {
+        String name = p.getFileName().toString();
+        return name.contains(".") ? p : p.resolveSibling(name + ".csv");
+    }
+}

@@ -1,0 +1,313 @@
+package org.scalewright.app.session;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.UnaryOperator;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.io.BadInputException;
+import org.scalewright.io.BuiltInData;
+import org.scalewright.io.ScaleSheetReader;
+import org.scalewright.io.ScaleSheetWriter;
+import org.scalewright.model.PitchStandard;
+import org.scalewright.model.Scale;
+import org.scalewright.physics.AnalysisSettings;
+import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.physics.ScaleAnalyzer;
+
+/**
+ * The state shared by every part of the window: the working scale and its edit history, the
+ * sheet file, the reference scale, the analysis settings, the display units and the selected
+ * key. Every change of the scale or the settings is analysed at once; the parts of the window
+ * listen to {@link #analysisProperty()} and friends.
+ */
+public final class ScaleSession {
+    private final EditHistory history;
+    private final ReadOnlyObjectWrapper<Scale> scale = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<ScaleAnalysis> analysis = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<Scale> reference = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyObjectWrapper<ScaleAnalysis> referenceAnalysis = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper referenceName = new ReadOnlyStringWrapper("");
+    private final ReadOnlyObjectWrapper<StrengthChoice> strength = new ReadOnlyObjectWrapper<>(StrengthChoice.minimum());
+    private final ReadOnlyObjectWrapper<AnalysisSettings> settings =
+            new ReadOnlyObjectWrapper<>(BuiltInData.defaultSettings());
+    private final ObjectProperty<DisplayUnits> units = new SimpleObjectProperty<>(DisplayUnits.METRIC);
+    private final ObjectProperty<Integer> selectedKey = new SimpleObjectProperty<>();
+    private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper documentName = new ReadOnlyStringWrapper("untitled");
+    private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
+    private final ReadOnlyStringWrapper undoText = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper redoText = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("");
+    private final ReadOnlyBooleanWrapper messageIsProblem = new ReadOnlyBooleanWrapper();
+    private final BooleanProperty showReference = new SimpleBooleanProperty(true);
+    private final BooleanProperty showDifferences = new SimpleBooleanProperty(false);
+
+    /** A session on an empty scale (no sheet open). */
+    public ScaleSession() {
+        Scale empty = new Scale("", PitchStandard.ISO_16, List.of(), null);
+        history = new EditHistory(empty);
+        setScale(empty);
+        setReference(empty, "none");
+    }
+
+    // ---- the working scale and its edits ----
+
+    public ReadOnlyObjectProperty<Scale> scaleProperty() {
+        return scale.getReadOnlyProperty();
+    }
+
+    public Scale scale() {
+        return scale.get();
+    }
+
+    public ReadOnlyObjectProperty<ScaleAnalysis> analysisProperty() {
+        return analysis.getReadOnlyProperty();
+    }
+
+    public ScaleAnalysis analysis() {
+        return analysis.get();
+    }
+
+    /**
+     * Applies an edit to the working scale and records it for undo.
+     *
+     * @return false when the edit changed nothing (nothing recorded)
+     */
+    public boolean edit(String description, UnaryOperator<Scale> change) {
+        Scale next = change.apply(scale());
+        if (!history.push(next, description)) {
+            return false;
+        }
+        Timings.editStarted(description);
+        setScale(next);
+        inform("changed " + description);
+        return true;
+    }
+
+    public void undo() {
+        if (history.canUndo()) {
+            String what = history.undoDescription();
+            Timings.editStarted("undo " + what);
+            setScale(history.undo());
+            inform("undid " + what);
+        }
+    }
+
+    public void redo() {
+        if (history.canRedo()) {
+            String what = history.redoDescription();
+            Timings.editStarted("redo " + what);
+            setScale(history.redo());
+            inform("redid " + what);
+        }
+    }
+
+    /** Sets the pitch standard (an undoable edit of the scale). */
+    public boolean setA4(double a4) {
+        PitchStandard p = new PitchStandard(a4);
+        return edit("A4 to " + DisplayFormat.decimals(a4, 1, 2) + " Hz", s -> s.withPitch(p));
+    }
+
+    private void setScale(Scale s) {
+        scale.set(s);
+        reanalyse();
+    }
+
+    private void reanalyse() {
+        analysis.set(ScaleAnalyzer.analyze(scale.get(), settings.get()));
+        Scale ref = reference.get();
+        referenceAnalysis.set(ref == null ? null : ScaleAnalyzer.analyze(ref, settings.get()));
+        updateHistoryState();
+    }
+
+    private void updateHistoryState() {
+        dirty.set(history.isDirty());
+        canUndo.set(history.canUndo());
+        canRedo.set(history.canRedo());
+        undoText.set(history.undoDescription());
+        redoText.set(history.redoDescription());
+    }
+
+    public ReadOnlyBooleanProperty dirtyProperty() {
+        return dirty.getReadOnlyProperty();
+    }
+
+    public boolean isDirty() {
+        return dirty.get();
+    }
+
+    public ReadOnlyBooleanProperty canUndoProperty() {
+        return canUndo.getReadOnlyProperty();
+    }
+
+    public ReadOnlyBooleanProperty canRedoProperty() {
+        return canRedo.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty undoTextProperty() {
+        return undoText.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty redoTextProperty() {
+        return redoText.getReadOnlyProperty();
+    }
+
+    // ---- files ----
+
+    ReadOnlyObjectProperty<Path> fileProperty() {
+        return file.getReadOnlyProperty();
+    }
+
+    /** @return the sheet file saves go to, or empty when Save must ask (new or demo sheet) */
+    public Optional<Path> file() {
+        return Optional.ofNullable(file.get());
+    }
+
+    public ReadOnlyStringProperty documentNameProperty() {
+        return documentName.getReadOnlyProperty();
+    }
+
+    /**
+     * Opens a sheet: it becomes the working scale and the reference, and the history starts
+     * afresh. A sheet that fails to load changes nothing.
+     *
+     * @param saveBack false for a sheet that must not be saved over (the demo): Save then asks for a file
+     * @throws BadInputException with every problem of the sheet
+     */
+    public void open(Path sheet, boolean saveBack) throws BadInputException {
+        Scale loaded = ScaleSheetReader.standard().read(sheet);
+        history.reset(loaded);
+        file.set(saveBack ? sheet : null);
+        documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo)"));
+        selectedKey.set(null);
+        reference.set(loaded);
+        referenceName.set("as opened: " + sheet.getFileName());
+        setScale(loaded);
+        inform(saveBack ? "opened " + sheet + " (" + loaded.notes().size() + " notes)"
+                : "opened the demo sheet " + sheet.getFileName() + " (" + loaded.notes().size()
+                + " notes); Save asks for a new file, so the demo stays as it is");
+    }
+
+    /** Saves to the current file; false when there is none (use {@link #saveAs}). */
+    boolean save() throws IOException {
+        if (file.get() == null) {
+            return false;
+        }
+        saveAs(file.get());
+        return true;
+    }
+
+    /**
+     * Writes the sheet atomically, keeping the previous file as {@code NAME.bak}; on failure
+     * the file on disk is unchanged and the session still points at its old file.
+     */
+    public void saveAs(Path target) throws IOException {
+        ScaleSheetWriter.write(scale(), target, true);
+        file.set(target);
+        documentName.set(target.getFileName().toString());
+        history.markSaved();
+        updateHistoryState();
+        inform("saved " + target);
+    }
+
+    // ---- reference ----
+
+    public ReadOnlyObjectProperty<ScaleAnalysis> referenceAnalysisProperty() {
+        return referenceAnalysis.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<Scale> referenceProperty() {
+        return reference.getReadOnlyProperty();
+    }
+
+    public ReadOnlyStringProperty referenceNameProperty() {
+        return referenceName.getReadOnlyProperty();
+    }
+
+    void setReference(Scale ref, String name) {
+        reference.set(ref);
+        referenceName.set(name);
+        referenceAnalysis.set(ScaleAnalyzer.analyze(ref, settings.get()));
+    }
+
+    public void useCurrentAsReference() {
+        setReference(scale(), "copy of the working scale");
+        inform("the working scale as it is now is the reference");
+    }
+
+    public void openReference(Path sheet) throws BadInputException {
+        setReference(ScaleSheetReader.standard().read(sheet), "from " + sheet.getFileName());
+        inform("reference scale read from " + sheet);
+    }
+
+    public BooleanProperty showReferenceProperty() {
+        return showReference;
+    }
+
+    public BooleanProperty showDifferencesProperty() {
+        return showDifferences;
+    }
+
+    // ---- settings ----
+
+    public ReadOnlyObjectProperty<StrengthChoice> strengthProperty() {
+        return strength.getReadOnlyProperty();
+    }
+
+    public ReadOnlyObjectProperty<AnalysisSettings> settingsProperty() {
+        return settings.getReadOnlyProperty();
+    }
+
+    public void setStrength(StrengthChoice choice) {
+        strength.set(choice);
+        settings.set(settings.get().withStrength(choice.table()));
+        reanalyse();
+        inform("strength table: " + choice.table().name());
+    }
+
+    public ObjectProperty<DisplayUnits> unitsProperty() {
+        return units;
+    }
+
+    public DisplayUnits units() {
+        return units.get();
+    }
+
+    // ---- selection and messages ----
+
+    public ObjectProperty<Integer> selectedKeyProperty() {
+        return selectedKey;
+    }
+
+    public ReadOnlyStringProperty messageProperty() {
+        return message.getReadOnlyProperty();
+    }
+
+    public ReadOnlyBooleanProperty messageIsProblemProperty() {
+        return messageIsProblem.getReadOnlyProperty();
+    }
+
+    public void inform(String text) {
+        messageIsProblem.set(false);
+        message.set(text);
+    }
+
+    public void complain(String text) {
+        messageIsProblem.set(true);
+        message.set(text);
+    }
+}

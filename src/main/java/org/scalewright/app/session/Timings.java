@@ -1,0 +1,103 @@
+package org.scalewright.app.session;
+
+import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.time.Instant;
+import java.util.List;
+import java.util.Locale;
+import javafx.animation.AnimationTimer;
+import org.jfree.chart.fx.ChartViewer;
+
+/**
+ * Measurements of the live window, taken only with {@code -Dscalewright.timingReport=FILE}:
+ * appends to FILE one line with the milliseconds from the start of the process to the first
+ * frame in which all three curves have been drawn, and one line per edit with the time from
+ * the edit to the three curves redrawn (recompute, table rows, chart data, and the drawing
+ * of the three chart canvases after the event). Nothing is measured without the property.
+ */
+public final class Timings {
+    static final String PROPERTY = "scalewright.timingReport";
+
+    private Timings() {
+    }
+
+    private static String reportFile() {
+        String file = System.getProperty(PROPERTY);
+        return file == null || file.isBlank() ? null : file;
+    }
+
+    private static long editStarted;
+    private static String editName = "";
+
+    /** Notes the start of an edit (called on the JavaFX thread). */
+    static void editStarted(String what) {
+        if (reportFile() != null && editStarted == 0) {
+            editStarted = System.nanoTime();
+            editName = what;
+        }
+    }
+
+    /** Records the time from the edit noted by {@link #editStarted} to the curves redrawn now. */
+    public static void curvesShown(int notes) {
+        String file = reportFile();
+        if (file != null && editStarted != 0) {
+            double ms = (System.nanoTime() - editStarted) / 1e6;
+            editStarted = 0;
+            write(Path.of(file), String.format(Locale.ROOT, "edit to table and curves redrawn: %.2f ms (%s, %d notes)%n",
+                    ms, editName, notes));
+        }
+    }
+
+    /** @return milliseconds from the start of the process to now */
+    public static long sinceProcessStart() {
+        Instant start = ProcessHandle.current().info().startInstant()
+                .orElse(Instant.ofEpochMilli(ManagementFactory.getRuntimeMXBean().getStartTime()));
+        return java.time.Duration.between(start, Instant.now()).toMillis();
+    }
+
+    /**
+     * Starts watching for the first frame with all curves drawn.
+     *
+     * @param fxStarted  milliseconds from process start to the application's start method
+     * @param windowBuilt milliseconds from process start to the window built with its sheet open
+     */
+    public static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt) {
+        watch(viewers, fxStarted, windowBuilt, new long[1]);
+    }
+
+    /**
+     * @param shown set by the caller to the milliseconds at which {@code stage.show()} returned
+     */
+    public static void watch(List<ChartViewer> viewers, long fxStarted, long windowBuilt, long[] shown) {
+        String file = reportFile();
+        if (file == null) {
+            return;
+        }
+        new AnimationTimer() {
+            @Override
+            public void handle(long now) {
+                boolean drawn = viewers.stream().allMatch(v -> v.getRenderingInfo() != null
+                        && v.getRenderingInfo().getChartArea().getWidth() > 0);
+                if (drawn) {
+                    stop();
+                    long ms = sinceProcessStart();
+                    write(Path.of(file), String.format(Locale.ROOT, "cold start to a window with curves: %d ms "
+                            + "from process start (JavaFX start method entered at %d ms, window built with the "
+                            + "sheet open at %d ms, shown at %d ms)%n", ms, fxStarted, windowBuilt, shown[0]));
+                }
+            }
+        }.start();
+    }
+
+    private static void write(Path file, String line) {
+        try {
+            Files.writeString(file, line, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
+        } catch (IOException e) {
+            // a measurement that cannot be written is simply not taken
+        }
+    }
+}

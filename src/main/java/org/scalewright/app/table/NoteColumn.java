@@ -1,0 +1,158 @@
+package org.scalewright.app.table;
+
+import java.util.Locale;
+import java.util.stream.Collectors;
+import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.Note;
+import org.scalewright.physics.Flag;
+import org.scalewright.physics.NoteResult;
+
+/**
+ * The columns of the note table: what each shows in the display units and whether it can be
+ * edited. Entries are parsed by {@link NoteEdits}.
+ */
+public enum NoteColumn {
+    KEY("key", false, Group.SPEC),
+    NOTE("note", false, Group.SPEC),
+    SECTION("section", true, Group.SPEC),
+    STRINGS("strings", true, Group.SPEC),
+    LENGTH("length", true, Group.SPEC),
+    WIRE("wire", true, Group.SPEC),
+    WRAP1("wrap 1", true, Group.SPEC),
+    WRAP2("wrap 2", true, Group.SPEC),
+    METAL("wrap metal", true, Group.SPEC),
+    PITCH("pitch", false, Group.COMPUTED),
+    TENSION("T/string", false, Group.COMPUTED),
+    NOTE_TENSION("T/note", false, Group.COMPUTED),
+    STRESS("stress", false, Group.COMPUTED),
+    BREAK_PCT("% break", false, Group.COMPUTED),
+    INHARMONICITY("B", false, Group.COMPUTED),
+    HEADROOM("headroom", false, Group.COMPUTED),
+    FLAGS("flags", false, Group.COMPUTED),
+    DIFF_TENSION("ΔT/string", false, Group.DIFFERENCE),
+    DIFF_BREAK("Δ % break", false, Group.DIFFERENCE),
+    DIFF_B("ΔB %", false, Group.DIFFERENCE),
+    REMARK("remark", true, Group.SPEC);
+
+    /** Which part of the table a column belongs to. */
+    enum Group { SPEC, COMPUTED, DIFFERENCE }
+
+    private final String name;
+    private final boolean editable;
+    private final Group group;
+
+    NoteColumn(String name, boolean editable, Group group) {
+        this.name = name;
+        this.editable = editable;
+        this.group = group;
+    }
+
+    /** @return the column's name in plain words, without unit ({@code speaking length}, {@code wire}) */
+    String word() {
+        return this == LENGTH ? "speaking length" : name;
+    }
+
+    boolean editable() {
+        return editable;
+    }
+
+    Group group() {
+        return group;
+    }
+
+    /** @return the column name with its unit in the display units, on one line ({@code length mm}) */
+    public String header(DisplayUnits u) {
+        return headerLines(u).replace('\n', ' ');
+    }
+
+    /** @return the column header for the table, name and unit on two lines */
+    String headerLines(DisplayUnits u) {
+        return switch (this) {
+            case LENGTH -> "length\n" + u.length().symbol();
+            case WIRE -> "wire\n# or " + u.length().symbol();
+            case WRAP1 -> "wrap 1\n" + u.length().symbol();
+            case WRAP2 -> "wrap 2\n" + u.length().symbol();
+            case METAL -> "wrap\nmetal";
+            case PITCH -> "pitch\nHz";
+            case TENSION -> "T/string\n" + u.force().symbol();
+            case NOTE_TENSION -> "T/note\n" + u.force().symbol();
+            case STRESS -> "stress\nMPa";
+            case BREAK_PCT -> "% of\nbreak";
+            case INHARMONICITY -> "B\n";
+            case HEADROOM -> "headroom\ncents";
+            case DIFF_TENSION -> "ΔT/string\n" + u.force().symbol();
+            case DIFF_BREAK -> "Δ % of\nbreak";
+            case DIFF_B -> "ΔB\n%";
+            default -> name + "\n";
+        };
+    }
+
+    /** @return a one-line explanation for the column header's tooltip */
+    String explanation() {
+        return switch (this) {
+            case KEY -> "key number, A0 = 1, A4 = 49, C8 = 88";
+            case NOTE -> "note name";
+            case SECTION -> "section label; a change of label marks a boundary";
+            case STRINGS -> "strings per note: 1, 2 or 3";
+            case LENGTH -> "speaking length";
+            case WIRE -> "plain wire or core: a music-wire size number (12 to 23, half sizes) or a diameter";
+            case WRAP1 -> "first (inner) wrap wire diameter; blank for plain wire";
+            case WRAP2 -> "second (outer) wrap wire diameter; blank for single-wound";
+            case METAL -> "wrap metal: copper, iron or steel";
+            case PITCH -> "working pitch";
+            case TENSION -> "tension per string";
+            case NOTE_TENSION -> "tension of all strings of the note";
+            case STRESS -> "stress in the plain wire or core";
+            case BREAK_PCT -> "stress as percent of the wire's breaking strength";
+            case INHARMONICITY -> "inharmonicity coefficient B";
+            case HEADROOM -> "cents above the working pitch at which the wire reaches its breaking strength";
+            case FLAGS -> "why the note is flagged";
+            case DIFF_TENSION -> "tension per string minus the reference scale's";
+            case DIFF_BREAK -> "percent of breaking strength minus the reference scale's, in points";
+            case DIFF_B -> "inharmonicity relative to the reference scale's, percent";
+            case REMARK -> "free text";
+        };
+    }
+
+    /** @return the cell text of a row in the display units */
+    public String text(NoteRow row, DisplayUnits u) {
+        Note n = row.note();
+        NoteResult r = row.result();
+        NoteResult ref = row.reference();
+        return switch (this) {
+            case KEY -> Integer.toString(n.key());
+            case NOTE -> r.noteName();
+            case SECTION -> n.section();
+            case STRINGS -> Integer.toString(n.strings());
+            case LENGTH -> DisplayFormat.length(n.speakingLength(), u);
+            case WIRE -> n.wire().musicWireSize().isPresent() ? DisplayFormat.size(n.wire().musicWireSize().getAsDouble())
+                    : DisplayFormat.diameter(n.wire().diameter(), u);
+            case WRAP1 -> n.isWound() ? DisplayFormat.diameter(n.wrap().inner(), u) : "";
+            case WRAP2 -> n.isWound() && n.wrap().isDouble() ? DisplayFormat.diameter(n.wrap().outer(), u) : "";
+            case METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
+            case PITCH -> DisplayFormat.fixed(r.frequency(), 2);
+            case TENSION -> DisplayFormat.force(r.tension(), u);
+            case NOTE_TENSION -> DisplayFormat.force(r.noteTension(), u);
+            case STRESS -> DisplayFormat.fixed(r.stress() / 1e6, 0);
+            case BREAK_PCT -> DisplayFormat.fixed(r.breakPct(), 1);
+            case INHARMONICITY -> DisplayFormat.scientific(r.inharmonicity());
+            case HEADROOM -> DisplayFormat.fixed(r.headroomCents(), 0);
+            case FLAGS -> r.flags().stream().map(f -> f.kind().word()).distinct().collect(Collectors.joining(", "));
+            case DIFF_TENSION -> ref == null ? "" : DisplayFormat.forceDifference(r.tension() - ref.tension(), u);
+            case DIFF_BREAK -> ref == null ? "" : String.format(Locale.ROOT, "%+.1f", r.breakPct() - ref.breakPct());
+            case DIFF_B -> ref == null ? "" : String.format(Locale.ROOT, "%+.1f",
+                    100 * (r.inharmonicity() / ref.inharmonicity() - 1));
+            case REMARK -> n.remark();
+        };
+    }
+
+    /** @return the hover text of a row's flags, one per line, or "" */
+    static String flagDetails(NoteRow row) {
+        return row.result().flags().stream().map(NoteColumn::flagLine).collect(Collectors.joining("\n"));
+    }
+
+    private static String flagLine(Flag f) {
+        return f.kind().word() + ": " + f.detail();
+    }
+}

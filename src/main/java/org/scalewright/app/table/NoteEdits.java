@@ -1,0 +1,170 @@
+package org.scalewright.app.table;
+
+import java.util.Locale;
+import java.util.Optional;
+import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.model.CoreWire;
+import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.Note;
+import org.scalewright.model.WireSize;
+import org.scalewright.model.WireSizeTable;
+import org.scalewright.model.Wrap;
+import org.scalewright.model.WrapMetal;
+
+/**
+ * Turns the text typed into a cell of the note table into a changed note. Lengths are read
+ * in the display length unit unless the text names its own ({@code 1.1 mm}, {@code 0.043 in});
+ * in the wire column a number of 5 or more (or one written {@code #17}) is a music-wire size
+ * number, a smaller one a diameter. A bad entry throws {@link IllegalArgumentException}
+ * whose message says what was expected.
+ */
+final class NoteEdits {
+    /** Wire entries at or above this number are size numbers; no piano wire is 5 mm thick. */
+    static final double SIZE_NUMBER_FROM = 5;
+
+    private final WireSizeTable sizes;
+
+    NoteEdits(WireSizeTable sizes) {
+        this.sizes = sizes;
+    }
+
+    /**
+     * @return the note with the column's value replaced by the entry
+     * @throws IllegalArgumentException when the entry is not a valid value for the column
+     */
+    Note apply(Note note, NoteColumn column, String text, DisplayUnits units) {
+        String t = text == null ? "" : text.trim();
+        return switch (column) {
+            case SECTION -> note.withSection(t);
+            case REMARK -> note.withRemark(t);
+            case STRINGS -> note.withStrings(strings(t));
+            case LENGTH -> note.withSpeakingLength(length("speaking length", t, units));
+            case WIRE -> note.withWire(wire(t, units));
+            case WRAP1 -> wrap1(note, t, units);
+            case WRAP2 -> wrap2(note, t, units);
+            case METAL -> metal(note, t);
+            default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
+        };
+    }
+
+    private static int strings(String t) {
+        try {
+            int n = Integer.parseInt(t);
+            if (n >= 1 && n <= 3) {
+                return n;
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new IllegalArgumentException("strings per note must be 1, 2 or 3, was '" + t + "'");
+    }
+
+    private CoreWire wire(String t, DisplayUnits units) {
+        if (t.isEmpty()) {
+            throw new IllegalArgumentException("a wire is required: a size number (" + sizes.rangeText()
+                    + ") or a diameter in " + units.length().symbol());
+        }
+        boolean marked = t.startsWith("#");
+        String body = marked ? t.substring(1).trim() : t;
+        Quantity q;
+        try {
+            q = quantity(body, units);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("expected a size number (" + sizes.rangeText()
+                    + ") or a diameter in " + units.length().symbol() + ", was '" + t + "'");
+        }
+        if (marked || (q.unit().isEmpty() && q.value() >= SIZE_NUMBER_FROM)) {
+            Optional<WireSize> s = sizes.bySize(q.value());
+            if (s.isEmpty()) {
+                throw new IllegalArgumentException("wire size " + DisplayFormat.size(q.value())
+                        + " is not a music-wire size (" + sizes.rangeText() + " in half steps); "
+                        + "enter a size number or a diameter in " + units.length().symbol());
+            }
+            return CoreWire.ofSize(s.get().size(), s.get().diameter());
+        }
+        return CoreWire.ofDiameter(positive("wire diameter", q, units));
+    }
+
+    private static Note wrap1(Note note, String t, DisplayUnits units) {
+        if (t.isEmpty()) {
+            return note.withWrap(null);
+        }
+        double inner = length("first wrap diameter", t, units);
+        Wrap old = note.wrap();
+        return note.withWrap(old == null ? Wrap.single(inner, WrapMetal.COPPER)
+                : new Wrap(inner, old.outer(), old.metal()));
+    }
+
+    private static Note wrap2(Note note, String t, DisplayUnits units) {
+        Wrap old = note.wrap();
+        if (t.isEmpty()) {
+            return old == null ? note : note.withWrap(new Wrap(old.inner(), 0, old.metal()));
+        }
+        if (old == null) {
+            throw new IllegalArgumentException("a second wrap needs a first wrap: enter wrap 1 first");
+        }
+        return note.withWrap(new Wrap(old.inner(), length("second wrap diameter", t, units), old.metal()));
+    }
+
+    private static Note metal(Note note, String t) {
+        Wrap old = note.wrap();
+        if (old == null) {
+            if (t.isEmpty()) {
+                return note;
+            }
+            throw new IllegalArgumentException("plain wire has no wrap metal: enter wrap 1 first");
+        }
+        if (t.isEmpty()) {
+            throw new IllegalArgumentException("a wound string needs a wrap metal: copper, iron or steel");
+        }
+        String lower = t.toLowerCase(Locale.ROOT);
+        for (WrapMetal m : WrapMetal.values()) {
+            if (m.sheetName().startsWith(lower)) {
+                return note.withWrap(new Wrap(old.inner(), old.outer(), m));
+            }
+        }
+        throw new IllegalArgumentException("wrap metal must be copper, iron or steel, was '" + t + "'");
+    }
+
+    private static double length(String what, String t, DisplayUnits units) {
+        if (t.isEmpty()) {
+            throw new IllegalArgumentException(what + " is required (a number in " + units.length().symbol() + ")");
+        }
+        return positive(what, quantity(t, units), units);
+    }
+
+    private static double positive(String what, Quantity q, DisplayUnits units) {
+        LengthUnit unit = q.unit().orElse(units.length());
+        if (!(q.value() > 0)) {
+            throw new IllegalArgumentException(what + " must be > 0 " + unit.symbol() + ", was "
+                    + DisplayFormat.decimals(q.value(), 0, 4));
+        }
+        return unit.toMetres(q.value());
+    }
+
+    /** A number with the unit it was written with, if any. */
+    private record Quantity(double value, Optional<LengthUnit> unit) {
+    }
+
+    private static Quantity quantity(String t, DisplayUnits units) {
+        String s = t.replace(',', '.').trim();
+        Optional<LengthUnit> unit = Optional.empty();
+        for (LengthUnit u : LengthUnit.values()) {
+            if (s.toLowerCase(Locale.ROOT).endsWith(u.symbol())) {
+                unit = Optional.of(u);
+                s = s.substring(0, s.length() - u.symbol().length()).trim();
+                break;
+            }
+        }
+        try {
+            double v = Double.parseDouble(s);
+            if (Double.isFinite(v)) {
+                return new Quantity(v, unit);
+            }
+        } catch (NumberFormatException e) {
+            // reported below
+        }
+        throw new IllegalArgumentException("expected a number in " + units.length().symbol() + ", was '" + t + "'");
+    }
+}

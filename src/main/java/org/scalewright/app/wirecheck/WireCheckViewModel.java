@@ -1,0 +1,467 @@
+package org.scalewright.app.wirecheck;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanWrapper;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.scalewright.app.curves.CurvesViewModel;
+import org.scalewright.app.session.CsvFileNames;
+import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.UserPrompts;
+import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.chart.CurveOverlay;
+import org.scalewright.design.wirecheck.PitchState;
+import org.scalewright.design.wirecheck.SizeRounding;
+import org.scalewright.design.wirecheck.StageLimit;
+import org.scalewright.design.wirecheck.WireCheck;
+import org.scalewright.design.wirecheck.WireCheckNote;
+import org.scalewright.design.wirecheck.WireCheckReport;
+import org.scalewright.design.wirecheck.WireCheckRequest;
+import org.scalewright.design.wirecheck.WireConversion;
+import org.scalewright.io.BadInputException;
+import org.scalewright.io.BuiltInData;
+import org.scalewright.io.CsvReportWriter;
+import org.scalewright.io.PitchStateReader;
+import org.scalewright.io.SheetProblem;
+import org.scalewright.io.StrengthTableReader;
+import org.scalewright.io.WireCheckCsv;
+import org.scalewright.model.PitchStandard;
+import org.scalewright.model.UnitConversions;
+import org.scalewright.physics.StrengthTable;
+
+/**
+ * The wire check tool: what a replacement wire (another maker's table and/or plain sizes
+ * converted to the other size system), a target pitch standard and a pitch raise with overpull
+ * do to every string of the working scale. The results are the engine's
+ * ({@link WireCheck#run}); this model reads the entries, shows the report in rows and lines,
+ * draws after and peak over the percent-of-breaking-strength curve and writes the CSV.
+ */
+public final class WireCheckViewModel {
+    /** The overlay names on the percent chart. */
+    public static final String AFTER = "after: replacement at target";
+    public static final String PEAK = "peak of the overpull";
+    private static final String OVERLAY_OWNER = "wire check";
+
+    /** How plain wire sizes are converted. */
+    enum Conversion {
+        KEEP("keep the sizes", null, null),
+        METRIC_NEAREST("to metric, nearest", true, SizeRounding.NEAREST),
+        METRIC_UP("to metric, next larger", true, SizeRounding.UP),
+        METRIC_DOWN("to metric, next smaller", true, SizeRounding.DOWN),
+        INCH_NEAREST("to inch sizes, nearest", false, SizeRounding.NEAREST),
+        INCH_UP("to inch sizes, next larger", false, SizeRounding.UP),
+        INCH_DOWN("to inch sizes, next smaller", false, SizeRounding.DOWN);
+
+        private final String label;
+        private final Boolean metric;
+        private final SizeRounding rounding;
+
+        Conversion(String label, Boolean metric, SizeRounding rounding) {
+            this.label = label;
+            this.metric = metric;
+            this.rounding = rounding;
+        }
+
+        WireConversion conversion() {
+            if (metric == null) {
+                return WireConversion.keep();
+            }
+            return metric ? WireConversion.toMetric(rounding, BuiltInData.metricPlainWire())
+                    : WireConversion.toInch(rounding, BuiltInData.musicWireSizes());
+        }
+
+        @Override
+        public String toString() {
+            return label;
+        }
+    }
+
+    /** One row of the results: percent of breaking strength before, after and at the peak. */
+    public record Row(int key, String note, String wireBefore, String wireAfter, double centsFlat, double pctBefore,
+               double pctAfter, double pctPeak, double headroomAfter, boolean overDanger, boolean cautionAtPeak) {
+    }
+
+    private final ScaleSession session;
+    private final UserPrompts prompts;
+    private final CurvesViewModel curves;
+    private final ReadOnlyObjectWrapper<StrengthTable> replacement = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper replacementName = new ReadOnlyStringWrapper();
+    private final ObjectProperty<Conversion> conversion = new SimpleObjectProperty<>(Conversion.KEEP);
+    private final StringProperty targetA4 = new SimpleStringProperty("");
+    private final StringProperty centsFlat = new SimpleStringProperty("0");
+    private final ReadOnlyObjectWrapper<PitchState> measuredFlat = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper flatFileName = new ReadOnlyStringWrapper("");
+    private final StringProperty overpull = new SimpleStringProperty("0");
+    private final StringProperty stageLimit = new SimpleStringProperty("5 %");
+    private final ObservableList<Row> rows = FXCollections.observableArrayList();
+    private final ReadOnlyObjectWrapper<WireCheckReport> report = new ReadOnlyObjectWrapper<>();
+    private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper totals = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper stages = new ReadOnlyStringWrapper("");
+    private final ObservableList<String> cautions = FXCollections.observableArrayList();
+    private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
+    private final ReadOnlyBooleanWrapper stale = new ReadOnlyBooleanWrapper();
+
+    public WireCheckViewModel(ScaleSession session, UserPrompts prompts, CurvesViewModel curves) {
+        this.session = session;
+        this.prompts = prompts;
+        this.curves = curves;
+        replacementName.set(presentTableWords());
+        targetA4.set(a4Text(session.scale().pitch().a4()));
+        session.scaleProperty().addListener((o, a, b) -> {
+            if (a == null || b == null || a.pitch().a4() != b.pitch().a4()
+                    && targetA4.get().equals(a4Text(a.pitch().a4()))) {
+                targetA4.set(a4Text(b.pitch().a4()));
+            }
+        });
+        session.analysisProperty().addListener((o, a, b) -> markStale());
+        session.strengthProperty().addListener((o, a, b) -> {
+            if (replacement.get() == null) {
+                replacementName.set(presentTableWords());
+            }
+        });
+    }
+
+    // ---- entries ----
+
+    ReadOnlyObjectProperty<StrengthTable> replacementProperty() {
+        return replacement.getReadOnlyProperty();
+    }
+
+    ReadOnlyStringProperty replacementNameProperty() {
+        return replacementName.getReadOnlyProperty();
+    }
+
+    /** Reads a maker's table as the replacement; a bad file shows its problems and changes nothing. */
+    boolean loadReplacement() {
+        Optional<Path> file = prompts.chooseStrengthTable();
+        if (file.isEmpty()) {
+            return false;
+        }
+        try {
+            StrengthTable t = StrengthTableReader.read(file.get());
+            replacement.set(t);
+            replacementName.set(t.name() + " (" + file.get().getFileName() + ")");
+            session.inform("replacement wire: " + t.name());
+            return true;
+        } catch (BadInputException e) {
+            prompts.showProblems("Strength table not read", file.get()
+                    + " could not be read; the replacement is unchanged.", problems(e));
+            session.complain("could not read " + file.get().getFileName() + ": " + e.problems().size() + " problem"
+                    + (e.problems().size() == 1 ? "" : "s"));
+            return false;
+        }
+    }
+
+    /** The replacement is the present wire's table again. */
+    void clearReplacement() {
+        replacement.set(null);
+        replacementName.set(presentTableWords());
+    }
+
+    ObjectProperty<Conversion> conversionProperty() {
+        return conversion;
+    }
+
+    StringProperty targetA4Property() {
+        return targetA4;
+    }
+
+    StringProperty centsFlatProperty() {
+        return centsFlat;
+    }
+
+    StringProperty overpullProperty() {
+        return overpull;
+    }
+
+    StringProperty stageLimitProperty() {
+        return stageLimit;
+    }
+
+    ReadOnlyStringProperty flatFileNameProperty() {
+        return flatFileName.getReadOnlyProperty();
+    }
+
+    /** Reads how flat each note stands from a file; a bad file shows its problems and changes nothing. */
+    boolean loadFlatFile() {
+        Optional<Path> file = prompts.choosePitchStateFile();
+        if (file.isEmpty()) {
+            return false;
+        }
+        try {
+            PitchState state = PitchStateReader.read(file.get(), session.scale());
+            measuredFlat.set(state);
+            flatFileName.set(file.get().getFileName() + " (" + state.measured().size() + " keys)");
+            session.inform("cents flat per note read from " + file.get().getFileName());
+            return true;
+        } catch (BadInputException e) {
+            prompts.showProblems("Cents flat not read", file.get()
+                    + " could not be read; the pitch raise is unchanged.", problems(e));
+            return false;
+        }
+    }
+
+    /** Back to one figure of cents flat for every note. */
+    void clearFlatFile() {
+        measuredFlat.set(null);
+        flatFileName.set("");
+    }
+
+    // ---- the check ----
+
+    /**
+     * Runs the check with the entries; entries that cannot be read are named in
+     * {@link #problemProperty()} and nothing changes.
+     *
+     * @return true when the check ran
+     */
+    boolean check() {
+        List<String> bad = new ArrayList<>();
+        if (session.scale().notes().isEmpty()) {
+            bad.add("open a scale sheet first");
+        }
+        Double a4 = TypedEntry.number(targetA4.get(), "target A4", "Hz", bad);
+        if (a4 != null && !(a4 >= 300 && a4 <= 600)) {
+            bad.add("target A4 must be between 300 and 600 Hz, was " + targetA4.get().strip());
+        }
+        Double flat = measuredFlat.get() != null ? Double.valueOf(0) : TypedEntry.number(centsFlat.get(), "cents flat", "c", bad);
+        if (flat != null && !(Math.abs(flat) <= PitchStateReader.MAX_CENTS)) {
+            bad.add("cents flat must be between -1200 and 1200, was " + centsFlat.get().strip());
+        }
+        Double pull = TypedEntry.number(overpull.get(), "overpull", "%", bad);
+        if (pull != null && !(pull >= 0 && pull <= 100)) {
+            bad.add("overpull must be 0 to 100 %, was " + overpull.get().strip());
+        }
+        StageLimit limit = stageLimit(stageLimit.get(), bad);
+        if (!bad.isEmpty()) {
+            problem.set(String.join("; ", bad));
+            session.complain("wire check: " + String.join("; ", bad));
+            return false;
+        }
+        var settings = session.settingsProperty().get();
+        PitchState state = measuredFlat.get() != null ? measuredFlat.get() : PitchState.uniform(flat);
+        WireCheckRequest request = WireCheckRequest.of(session.scale(), settings)
+                .withReplacement(replacement.get() == null ? settings.strength() : replacement.get())
+                .withConversion(conversion.get().conversion())
+                .withTarget(new PitchStandard(a4))
+                .withFlat(state)
+                .withOverpull(pull)
+                .withStageLimit(limit);
+        WireCheckReport r;
+        try {
+            r = WireCheck.run(request);
+        } catch (IllegalArgumentException e) {
+            problem.set(e.getMessage());
+            session.complain("wire check: " + e.getMessage());
+            return false;
+        }
+        problem.set("");
+        show(r);
+        session.inform("wire check: " + r.atRisk().size() + " of " + r.notes().size()
+                + " notes at or above the danger band at the peak");
+        return true;
+    }
+
+    private void show(WireCheckReport r) {
+        report.set(r);
+        stale.set(false);
+        double caution = r.request().settings().bands().caution();
+        List<Row> next = new ArrayList<>(r.notes().size());
+        for (WireCheckNote n : r.notes()) {
+            next.add(new Row(n.key(), n.noteName(), WireCheckText.wire(n.presentNote()), WireCheckText.wire(n.replacementNote()),
+                    n.centsFlat(), n.breakPctBefore(), n.breakPctAfter(), n.breakPctPeak(), n.headroomCentsAfter(),
+                    n.overDanger(), n.breakPctPeak() >= caution));
+        }
+        rows.setAll(next);
+        double danger = r.request().settings().bands().danger();
+        summary.set(r.atRisk().isEmpty()
+                ? String.format(Locale.ROOT, "No note reaches the danger band (%.0f %%) at the peak.", danger)
+                : String.format(Locale.ROOT, "%d note%s at or above the danger band (%.0f %%) at the peak, listed "
+                        + "first, highest first.", r.atRisk().size(), r.atRisk().size() == 1 ? "" : "s", danger));
+        totals.set(totalsText(r));
+        stages.set(WireCheckText.stages(r));
+        cautions.setAll(r.request().isPitchRaise() ? BuiltInData.cautions() : List.of());
+        curves.overlays().put(OVERLAY_OWNER, overlays(r));
+    }
+
+    /** @return after (and the peak, where it differs) as overlays of the percent chart */
+    static List<CurveOverlay> overlays(WireCheckReport r) {
+        Map<Integer, Double> after = new TreeMap<>();
+        Map<Integer, Double> peak = new TreeMap<>();
+        boolean peakDiffers = false;
+        for (WireCheckNote n : r.byKey()) {
+            after.put(n.key(), n.breakPctAfter());
+            peak.put(n.key(), n.breakPctPeak());
+            peakDiffers |= Math.abs(n.breakPctPeak() - n.breakPctAfter()) > 1e-9;
+        }
+        List<CurveOverlay> list = new ArrayList<>();
+        list.add(CurveOverlay.of(AFTER, after, CurveOverlay.Look.LINE));
+        if (peakDiffers) {
+            list.add(CurveOverlay.of(PEAK, peak, CurveOverlay.Look.DOTTED));
+        }
+        return list;
+    }
+
+    /** @return present → target → peak, each in kN and lbf with its change from the present, one a line */
+    static String totalsText(WireCheckReport r) {
+        var t = r.totals();
+        return String.join("\n",
+                line("present", t.present(), Double.NaN, Double.NaN),
+                line("present wire at target", t.beforeAtTarget(), t.beforeAtTarget() - t.present(),
+                        100 * (t.beforeAtTarget() / t.present() - 1)),
+                line("replacement at target", t.afterAtTarget(), t.changeToTarget(), t.changeToTargetPct()),
+                line("at the overpull peak", t.peak(), t.changeToPeak(), t.changeToPeakPct()));
+    }
+
+    private static String line(String what, double n, double change, double pct) {
+        String s = String.format(Locale.ROOT, "%s: %.1f kN (%,.0f lbf)", what, n / 1e3,
+                UnitConversions.newtonsToLbf(n));
+        if (Double.isFinite(change)) {
+            s += String.format(Locale.ROOT, ", %+.1f kN (%+,.0f lbf, %+.1f %%)", change / 1e3,
+                    UnitConversions.newtonsToLbf(change), pct);
+        }
+        return s;
+    }
+
+    /** Writes the per-note results as CSV (DESIGN §5 columns) to a file the user chooses. */
+    boolean exportCsv() {
+        WireCheckReport r = report.get();
+        if (r == null) {
+            session.complain("run the wire check before exporting it");
+            return false;
+        }
+        Optional<Path> chosen = prompts.chooseExportFile("Save the wire check as CSV", "wire-check.csv", "csv");
+        if (chosen.isEmpty()) {
+            return false;
+        }
+        Path file = CsvFileNames.withCsvExtension(chosen.get());
+        try {
+            CsvReportWriter.write(file, WireCheckCsv.comments(r), WireCheckCsv.HEADER, WireCheckCsv.rows(r));
+            session.inform("wrote the wire check to " + file);
+            return true;
+        } catch (IOException | RuntimeException e) {
+            String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+            prompts.showError("Wire check not saved", "Could not write " + file + ": " + why);
+            session.complain("wire check not saved: " + why);
+            return false;
+        }
+    }
+
+    /** Takes the results away, and their overlays off the curves. */
+    void clear() {
+        report.set(null);
+        stale.set(false);
+        rows.clear();
+        totals.set("");
+        stages.set("");
+        cautions.clear();
+        summary.set("");
+        curves.overlays().remove(OVERLAY_OWNER);
+    }
+
+    /** Selects the key of a result row (the table and curves follow). */
+    void select(Row row) {
+        if (row != null) {
+            session.selectedKeyProperty().set(row.key());
+        }
+    }
+
+    // ---- results ----
+
+    ObservableList<Row> rows() {
+        return rows;
+    }
+
+    ReadOnlyObjectProperty<WireCheckReport> reportProperty() {
+        return report.getReadOnlyProperty();
+    }
+
+    ReadOnlyStringProperty summaryProperty() {
+        return summary.getReadOnlyProperty();
+    }
+
+    ReadOnlyStringProperty totalsProperty() {
+        return totals.getReadOnlyProperty();
+    }
+
+    ReadOnlyStringProperty stagesProperty() {
+        return stages.getReadOnlyProperty();
+    }
+
+    /** @return the safety cautions, shown where the check involves a pitch raise (else empty) */
+    ObservableList<String> cautions() {
+        return cautions;
+    }
+
+    ReadOnlyStringProperty problemProperty() {
+        return problem.getReadOnlyProperty();
+    }
+
+    /** @return true when the scale or settings changed after the check (its overlays are taken down) */
+    ReadOnlyBooleanProperty staleProperty() {
+        return stale.getReadOnlyProperty();
+    }
+
+    double dangerPct() {
+        return session.settingsProperty().get().bands().danger();
+    }
+
+    private void markStale() {
+        if (report.get() != null && !stale.get()) {
+            stale.set(true);
+            curves.overlays().remove(OVERLAY_OWNER);
+        }
+    }
+
+    private String presentTableWords() {
+        return "none: the present table (" + session.settingsProperty().get().strength().name() + ")";
+    }
+
+    private static List<String> problems(BadInputException e) {
+        return e.problems().stream().map(SheetProblem::toString).toList();
+    }
+
+    private static String a4Text(double a4) {
+        return DisplayFormat.decimals(a4, 1, 2);
+    }
+
+    private static final Pattern LIMIT = Pattern.compile("\\s*([0-9]*[.,]?[0-9]+)\\s*(%|kn|n|lbf)\\s*");
+
+    /** Reads a stage limit: {@code 5 %}, {@code 10 kN}, {@code 9000 N} or {@code 2200 lbf}. */
+    static StageLimit stageLimit(String text, List<String> bad) {
+        Matcher m = LIMIT.matcher(text == null ? "" : text.toLowerCase(Locale.ROOT));
+        if (!m.matches() || !(Double.parseDouble(m.group(1).replace(',', '.')) > 0)) {
+            bad.add("stage limit: expected a percent of the present total or a force > 0, such as 5 %, 10 kN or "
+                    + "2200 lbf, was '" + (text == null ? "" : text.strip()) + "'");
+            return null;
+        }
+        double v = Double.parseDouble(m.group(1).replace(',', '.'));
+        return switch (m.group(2)) {
+            case "%" -> StageLimit.percentOfTotal(v);
+            case "kn" -> StageLimit.kiloNewtons(v);
+            case "n" -> StageLimit.kiloNewtons(v / 1e3);
+            default -> StageLimit.kiloNewtons(UnitConversions.lbfToNewtons(v) / 1e3);
+        };
+    }
+
+}
