@@ -61,7 +61,7 @@ final class ToolTabs {
         tools.add(new WireCheckView(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new StretchView(new StretchViewModel(model.session())));
-        tools.add(new ExportView(ExportViewModel.of(model.session(), model.prompts()), model.session()));
+        tools.add(new ExportView(ExportViewModel.of(model.session(), model.prompts())));
         return tools;
     }
 }

@@ -92,11 +92,13 @@ class LayerRulesTest {
                 .layer("tools").definedBy("org.scalewright.app.rescale..", "org.scalewright.app.wirecheck..",
                         "org.scalewright.app.diagnosis..", "org.scalewright.app.stretch..",
                         "org.scalewright.app.export..")
+                .layer("tool parts").definedBy("org.scalewright.app.tool..")
                 .layer("table and curves").definedBy("org.scalewright.app.table..", "org.scalewright.app.curves..")
-                .layer("shared").definedBy("org.scalewright.app.session..", "org.scalewright.app.tool..")
+                .layer("session").definedBy("org.scalewright.app.session..")
                 .whereLayer("window").mayNotBeAccessedByAnyLayer()
                 .whereLayer("tools").mayOnlyBeAccessedByLayers("window")
-                .whereLayer("table and curves").mayOnlyBeAccessedByLayers("window", "tools")
+                .whereLayer("tool parts").mayOnlyBeAccessedByLayers("window", "tools")
+                .whereLayer("table and curves").mayOnlyBeAccessedByLayers("window", "tools", "tool parts")
                 .check(classes);
         for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export"}) {
             noClasses().that().resideInAPackage("org.scalewright.app." + tool + "..")

@@ -1,6 +1,5 @@
 package org.scalewright.app.diagnosis;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -9,7 +8,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 import javafx.beans.property.ReadOnlyBooleanProperty;
-import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -19,10 +17,10 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
-import org.scalewright.app.session.CsvFileNames;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.UserPrompts;
+import org.scalewright.app.tool.ToolResult;
 import org.scalewright.app.tool.TypedEntry;
 import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.diagnosis.DiagnosedNote;
@@ -34,7 +32,6 @@ import org.scalewright.design.diagnosis.SectionDiagnosis;
 import org.scalewright.design.wirecheck.MakerTables;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
-import org.scalewright.io.CsvReportWriter;
 import org.scalewright.io.DiagnosisCsv;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
@@ -53,7 +50,6 @@ import org.scalewright.physics.StrengthTable;
 public final class DiagnosisViewModel {
     /** The overlay name of the notes standing out on the percent chart. */
     static final String STANDING_OUT = "stands out from its section";
-    private static final String OVERLAY_OWNER = "diagnosis";
 
     /** One row of the results. */
     record Row(int key, String note, String section, double stressMpa, double breakPct, double trendPct,
@@ -66,27 +62,23 @@ public final class DiagnosisViewModel {
 
     private final ScaleSession session;
     private final UserPrompts prompts;
-    private final CurvesViewModel curves;
     private final StringProperty range = new SimpleStringProperty("");
     private final StringProperty margin = new SimpleStringProperty(
             DisplayFormat.decimals(DiagnosisRequest.DEFAULT_MARGIN_PCT, 0, 1));
     private final ReadOnlyObjectWrapper<MakerTables> candidates = new ReadOnlyObjectWrapper<>(MakerTables.empty());
     private final ReadOnlyStringWrapper candidateNames = new ReadOnlyStringWrapper("none");
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
-    private final ReadOnlyObjectWrapper<DiagnosisReport> report = new ReadOnlyObjectWrapper<>();
+    private final ToolResult<DiagnosisReport> result;
     private final ReadOnlyStringWrapper finding = new ReadOnlyStringWrapper("");
     private final ObservableList<RemedyLine> remedies = FXCollections.observableArrayList();
     private final ObservableList<String> inspect = FXCollections.observableArrayList();
-    private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
-    private final ReadOnlyBooleanWrapper stale = new ReadOnlyBooleanWrapper();
     private String lastFilled = "";
 
     public DiagnosisViewModel(ScaleSession session, UserPrompts prompts, CurvesViewModel curves) {
         this.session = session;
         this.prompts = prompts;
-        this.curves = curves;
+        this.result = new ToolResult<>(session, prompts, curves, "diagnosis");
         session.selectedKeyProperty().addListener((o, a, b) -> followSelection());
-        session.analysisProperty().addListener((o, a, b) -> markStale());
         followSelection();
     }
 
@@ -170,14 +162,11 @@ public final class DiagnosisViewModel {
             bad.add("margin must be between 0 and 100 %, was " + margin.get().strip());
         }
         if (!bad.isEmpty()) {
-            problem.set(String.join("; ", bad));
-            session.complain("diagnosis: " + String.join("; ", bad));
-            return false;
+            return result.refuse(bad);
         }
         DiagnosisReport r = SectionDiagnosis.diagnose(DiagnosisRequest.of(scale, keys, session.settingsProperty().get(),
                         BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire())
                 .withCandidates(candidates.get().tables()).withMargin(m));
-        problem.set("");
         show(r);
         session.inform("diagnosis of keys " + keys + ": " + r.standingOut().size() + " notes stand out; "
                 + r.finding().cause().words());
@@ -185,8 +174,6 @@ public final class DiagnosisViewModel {
     }
 
     private void show(DiagnosisReport r) {
-        report.set(r);
-        stale.set(false);
         List<Row> next = new ArrayList<>();
         Map<Integer, Double> marks = new TreeMap<>();
         for (DiagnosedNote d : r.notes()) {
@@ -207,54 +194,45 @@ public final class DiagnosisViewModel {
         }
         remedies.setAll(lines);
         inspect.setAll(f.inspect());
-        if (marks.isEmpty()) {
-            curves.overlays().remove(OVERLAY_OWNER);
-        } else {
-            curves.overlays().put(OVERLAY_OWNER, List.of(CurveOverlay.of(STANDING_OUT, marks,
-                    CurveOverlay.Look.MARKS)));
-        }
+        result.show(r, marks.isEmpty() ? List.of()
+                : List.of(CurveOverlay.of(STANDING_OUT, marks, CurveOverlay.Look.MARKS)));
     }
 
     /** Writes the per-note results as CSV (DESIGN §5 columns) to a file the user chooses. */
     boolean exportCsv() {
-        DiagnosisReport r = report.get();
-        if (r == null) {
-            session.complain("run the diagnosis before exporting it");
-            return false;
-        }
-        Optional<Path> chosen = prompts.chooseExportFile("Save the diagnosis as CSV",
-                "diagnosis-" + r.request().range().toString().replace(' ', '_') + ".csv", "csv");
-        if (chosen.isEmpty()) {
-            return false;
-        }
-        Path file = CsvFileNames.withCsvExtension(chosen.get());
-        try {
-            CsvReportWriter.write(file, DiagnosisCsv.comments(r), DiagnosisCsv.HEADER, DiagnosisCsv.rows(r));
-            session.inform("wrote the diagnosis to " + file);
-            return true;
-        } catch (IOException | RuntimeException e) {
-            String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-            prompts.showError("Diagnosis not saved", "Could not write " + file + ": " + why);
-            session.complain("diagnosis not saved: " + why);
-            return false;
-        }
+        DiagnosisReport r = result.get();
+        return result.exportCsv(r == null ? "" : "diagnosis-" + r.request().range().toString().replace(' ', '_')
+                + ".csv", new ToolResult.CsvForm<>() {
+                    @Override
+                    public List<String> comments(DiagnosisReport d) {
+                        return DiagnosisCsv.comments(d);
+                    }
+
+                    @Override
+                    public List<String> header() {
+                        return DiagnosisCsv.HEADER;
+                    }
+
+                    @Override
+                    public List<List<String>> rows(DiagnosisReport d) {
+                        return DiagnosisCsv.rows(d);
+                    }
+                });
     }
 
     /** Takes the results away, and their overlays off the curves. */
     void clear() {
-        report.set(null);
-        stale.set(false);
+        result.clear();
         rows.clear();
         finding.set("");
         remedies.clear();
         inspect.clear();
-        curves.overlays().remove(OVERLAY_OWNER);
     }
 
     /** Selects the key of a result row (the table and curves follow). */
     void select(Row row) {
         if (row != null) {
-            session.selectedKeyProperty().set(row.key());
+            result.select(row.key());
         }
     }
 
@@ -265,7 +243,7 @@ public final class DiagnosisViewModel {
     }
 
     ReadOnlyObjectProperty<DiagnosisReport> reportProperty() {
-        return report.getReadOnlyProperty();
+        return result.reportProperty();
     }
 
     /** @return the cause and the finding's paragraphs, one a line */
@@ -282,11 +260,11 @@ public final class DiagnosisViewModel {
     }
 
     ReadOnlyStringProperty problemProperty() {
-        return problem.getReadOnlyProperty();
+        return result.problemProperty();
     }
 
     ReadOnlyBooleanProperty staleProperty() {
-        return stale.getReadOnlyProperty();
+        return result.staleProperty();
     }
 
     double cautionPct() {
@@ -297,13 +275,6 @@ public final class DiagnosisViewModel {
         String now = range.get() == null ? "" : range.get().strip();
         if (now.isEmpty() || now.equals(lastFilled)) {
             useSectionOfSelection();
-        }
-    }
-
-    private void markStale() {
-        if (report.get() != null && !stale.get()) {
-            stale.set(true);
-            curves.overlays().remove(OVERLAY_OWNER);
         }
     }
 

@@ -15,7 +15,6 @@ import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.tool.Tool;
 import org.scalewright.design.stretch.OctaveType;
 
@@ -27,7 +26,7 @@ public final class ExportView implements Tool {
     private final ExportViewModel model;
     private final HBox root;
 
-    public ExportView(ExportViewModel model, ScaleSession session) {
+    public ExportView(ExportViewModel model) {
         this.model = model;
         Button report = new Button("Whole report into a folder…");
         report.setId("export-report");
@@ -39,10 +38,7 @@ public final class ExportView implements Tool {
         Label reportText = small("PDF, charts (PNG and SVG) and the five tables");
 
         Label settings = small("");
-        settings.textProperty().bind(Bindings.createStringBinding(() -> "Lengths in "
-                        + model.units().length().symbol() + " (the display's units)  ·  reference: "
-                        + model.referenceText(),
-                session.unitsProperty(), session.referenceNameProperty(), session.referenceAnalysisProperty()));
+        settings.textProperty().bind(model.settingsTextProperty());
         ChoiceBox<OctaveType> octave = new ChoiceBox<>();
         octave.setId("export-octave");
         octave.getItems().setAll(OctaveType.values());

@@ -11,6 +11,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.WeakHashMap;
 import javafx.application.Platform;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.StringExpression;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
@@ -81,6 +83,13 @@ public final class ExportViewModel {
         synchronized (PER_WINDOW) {
             return PER_WINDOW.computeIfAbsent(session, s -> new ExportViewModel(s, prompts));
         }
+    }
+
+    /** @return the settings an export uses, in words: the length unit and the reference */
+    StringExpression settingsTextProperty() {
+        return Bindings.createStringBinding(() -> "Lengths in "
+                        + units().length().symbol() + " (the display's units)  ·  reference: " + referenceText(),
+                session.unitsProperty(), session.referenceNameProperty(), session.referenceAnalysisProperty());
     }
 
     /** @return the octave type whose stretch is {@code stretch_cents} in the stretch table */

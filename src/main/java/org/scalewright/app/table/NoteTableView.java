@@ -13,7 +13,6 @@ import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
-import org.scalewright.app.session.ScaleSession;
 
 /**
  * The note table: one row per note, the specification columns editable like a spreadsheet
@@ -41,10 +40,9 @@ public final class NoteTableView {
         for (NoteColumn c : NoteColumn.values()) {
             table.getColumns().add(column(c));
         }
-        ScaleSession s = model.session();
         for (NoteColumn c : NoteColumn.values()) {
             if (c.group() == NoteColumn.Group.DIFFERENCE) {
-                columns.get(c).visibleProperty().bind(s.showDifferencesProperty());
+                columns.get(c).visibleProperty().bind(model.showDifferencesProperty());
             }
         }
         // the remark is shown from the table's column menu (the + at the top right)
@@ -52,9 +50,9 @@ public final class NoteTableView {
         table.setRowFactory(t -> new FlaggedRow());
         table.addEventFilter(KeyEvent.KEY_PRESSED, this::onKeyPressed);
         table.addEventHandler(KeyEvent.KEY_TYPED, this::onKeyTyped);
-        s.unitsProperty().addListener((o, a, b) -> table.refresh());
+        model.unitsProperty().addListener((o, a, b) -> table.refresh());
         table.getSelectionModel().selectedIndexProperty().addListener((o, a, b) -> selectionChanged());
-        s.selectedKeyProperty().addListener((o, a, b) -> selectKey(b));
+        model.selectedKeyProperty().addListener((o, a, b) -> selectKey(b));
     }
 
     public TableView<NoteRow> node() {
@@ -171,7 +169,7 @@ public final class NoteTableView {
         if (i >= 0 && i < table.getItems().size()) {
             syncing = true;
             try {
-                model.session().selectedKeyProperty().set(table.getItems().get(i).key());
+                model.selectedKeyProperty().set(table.getItems().get(i).key());
             } finally {
                 syncing = false;
             }

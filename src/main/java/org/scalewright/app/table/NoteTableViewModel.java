@@ -6,10 +6,14 @@ import java.util.List;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.value.ObservableBooleanValue;
+import javafx.beans.value.ObservableValue;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.io.BuiltInData;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.Note;
 import org.scalewright.physics.NoteResult;
@@ -42,8 +46,19 @@ public final class NoteTableViewModel {
         return rows;
     }
 
-    ScaleSession session() {
-        return session;
+    /** @return whether the difference-from-reference columns are shown */
+    public ObservableBooleanValue showDifferencesProperty() {
+        return session.showDifferencesProperty();
+    }
+
+    /** @return the display units, which the cells follow */
+    public ObservableValue<org.scalewright.model.DisplayUnits> unitsProperty() {
+        return session.unitsProperty();
+    }
+
+    /** @return the selected key, shared with the curves and the tools */
+    public ObjectProperty<Integer> selectedKeyProperty() {
+        return session.selectedKeyProperty();
     }
 
     /** @return the two-line header of a column, following the display units */
