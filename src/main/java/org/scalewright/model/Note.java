@@ -1,6 +1,7 @@
 package org.scalewright.model;
 
 import java.util.OptionalDouble;
+import java.util.function.Consumer;
 
 /**
  * One note of a scale as measured or specified: the strings of one key. All lengths in metres.
@@ -66,37 +67,76 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
     }
 
     public Note withWire(CoreWire newWire) {
-        return new Note(key, strings, speakingLength, newWire, wrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, section, remark);
+        return edited(e -> e.wire = newWire);
     }
 
     public Note withWrap(Wrap newWrap) {
-        return new Note(key, strings, speakingLength, wire, newWrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, section, remark);
+        return edited(e -> e.wrap = newWrap);
     }
 
     public Note withSpeakingLength(double newLength) {
-        return new Note(key, strings, newLength, wire, wrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, section, remark);
+        return edited(e -> e.speakingLength = newLength);
     }
 
     public Note withStrings(int newStrings) {
-        return new Note(key, newStrings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, section, remark);
+        return edited(e -> e.strings = newStrings);
     }
 
     public Note withSection(String newSection) {
-        return new Note(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, newSection, remark);
+        return edited(e -> e.section = newSection);
     }
 
     public Note withRemark(String newRemark) {
-        return new Note(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
-                stretchedLength, woundLength, section, newRemark);
+        return edited(e -> e.remark = newRemark);
     }
 
     public Note withPitch(OptionalDouble newPitchHz, double newCents) {
-        return new Note(key, strings, speakingLength, wire, wrap, newPitchHz, newCents, strikePoint,
-                stretchedLength, woundLength, section, remark);
+        return edited(e -> {
+            e.pitchHz = newPitchHz;
+            e.cents = newCents;
+        });
+    }
+
+    /** @return a copy of this note with the changes {@code change} makes, checked as a new note */
+    private Note edited(Consumer<Edit> change) {
+        Edit e = new Edit(this);
+        change.accept(e);
+        return e.note();
+    }
+
+    /** The values of a note while one or two of them change; becomes a new, checked note. */
+    private static final class Edit {
+        private final int key;
+        private int strings;
+        private double speakingLength;
+        private CoreWire wire;
+        private Wrap wrap;
+        private OptionalDouble pitchHz;
+        private double cents;
+        private final OptionalDouble strikePoint;
+        private final OptionalDouble stretchedLength;
+        private final OptionalDouble woundLength;
+        private String section;
+        private String remark;
+
+        Edit(Note n) {
+            key = n.key;
+            strings = n.strings;
+            speakingLength = n.speakingLength;
+            wire = n.wire;
+            wrap = n.wrap;
+            pitchHz = n.pitchHz;
+            cents = n.cents;
+            strikePoint = n.strikePoint;
+            stretchedLength = n.stretchedLength;
+            woundLength = n.woundLength;
+            section = n.section;
+            remark = n.remark;
+        }
+
+        Note note() {
+            return new Note(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
+                    stretchedLength, woundLength, section, remark);
+        }
     }
 }
