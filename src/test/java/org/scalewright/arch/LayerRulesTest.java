@@ -1,10 +1,18 @@
 package org.scalewright.arch;
 
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.fields;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.Architectures.layeredArchitecture;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
+import com.tngtech.archunit.base.DescribedPredicate;
+import com.tngtech.archunit.core.domain.JavaClass;
 import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.domain.JavaMethodCall;
+import com.tngtech.archunit.core.domain.JavaModifier;
+import java.io.FileOutputStream;
+import java.io.FileWriter;
+import java.util.Set;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
@@ -14,7 +22,8 @@ import org.junit.jupiter.api.Test;
  * The layer rule of DESIGN §6: model → physics → design → io → chart → report → cli | app, each
  * depending only on those before it; only cli writes to standard output; only app imports
  * JavaFX; cli and app do not depend on each other. The root package holds only the launcher,
- * which may call cli and app.
+ * which may call cli and app. Also the conventions of DEVELOPERS.md that can be checked: the
+ * window's rooms, one home per library, files written only through io, an immutable model.
  */
 class LayerRulesTest {
     private static JavaClasses classes;
@@ -110,5 +119,53 @@ class LayerRulesTest {
     private static String[] otherTools(String tool) {
         return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export")
                 .filter(t -> !t.equals(tool)).map(t -> "org.scalewright.app." + t + "..").toArray(String[]::new);
+    }
+
+    @Test
+    void eachLibraryHasOneHome() {
+        noClasses().that().resideOutsideOfPackage("org.scalewright.cli..")
+                .should().dependOnClassesThat().resideInAPackage("picocli..").check(classes);
+        noClasses().that().resideOutsideOfPackage("org.scalewright.report..")
+                .should().dependOnClassesThat().resideInAPackage("org.apache.pdfbox..").check(classes);
+        noClasses().that().resideOutsideOfPackages("org.scalewright.io..", "org.scalewright.report..")
+                .should().dependOnClassesThat().resideInAPackage("com.opencsv..").check(classes);
+        noClasses().that().resideOutsideOfPackages("org.scalewright.chart..", "org.scalewright.report..",
+                        "org.scalewright.app..")
+                .should().dependOnClassesThat().resideInAPackage("org.jfree..").check(classes);
+        noClasses().should().dependOnClassesThat().resideInAPackage("java.sql..")
+                .because("only the workshop archive, when it comes, may use JDBC").allowEmptyShould(true)
+                .check(classes);
+    }
+
+    @Test
+    void filesAreWrittenOnlyThroughTheFileWritersOfIo() {
+        noClasses().that().resideOutsideOfPackage("org.scalewright.io..")
+                .and().doNotHaveFullyQualifiedName("org.scalewright.app.session.Timings") // appends a timing log
+                .should().callMethodWhere(target("java.nio.file.Files", "write", "writeString", "newOutputStream",
+                        "newBufferedWriter", "move", "copy"))
+                .orShould().callConstructor(FileOutputStream.class, String.class)
+                .orShould().callConstructor(FileWriter.class, String.class)
+                .because("a user's file is written through a temporary file and a move (io.AtomicFiles)")
+                .check(classes);
+    }
+
+    private static DescribedPredicate<JavaMethodCall> target(String owner,
+            String... names) {
+        Set<String> set = Set.of(names);
+        return DescribedPredicate.describe(owner + " " + set, call -> call.getTargetOwner().getName().equals(owner)
+                && set.contains(call.getName()));
+    }
+
+    @Test
+    void modelValuesAreImmutable() {
+        fields().that().areDeclaredInClassesThat(publicOrPackageTypesIn("org.scalewright.model"))
+                .should().beFinal()
+                .because("the model is immutable values; a change makes a new value")
+                .check(classes);
+    }
+
+    private static DescribedPredicate<JavaClass> publicOrPackageTypesIn(String pkg) {
+        return DescribedPredicate.describe("types of " + pkg + " that are not private helpers",
+                c -> c.getPackageName().startsWith(pkg) && !c.getModifiers().contains(JavaModifier.PRIVATE));
     }
 }
