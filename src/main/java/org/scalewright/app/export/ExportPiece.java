@@ -1,5 +1,7 @@
 package org.scalewright.app.export;
 
+import java.util.Locale;
+
 /**
  * One file the window can export on its own: a table as CSV, a chart as PNG or SVG, or the
  * PDF report.
@@ -22,19 +24,17 @@ enum ExportPiece {
 
     /** The kinds of file written. */
     enum Format {
-        CSV("csv", "CSV tables"), PNG("png", "PNG images"), SVG("svg", "SVG drawings"), PDF("pdf", "PDF documents");
+        CSV("CSV tables"), PNG("PNG images"), SVG("SVG drawings"), PDF("PDF documents");
 
-        private final String extension;
         private final String description;
 
-        Format(String extension, String description) {
-            this.extension = extension;
+        Format(String description) {
             this.description = description;
         }
 
-        /** @return the file name extension, without the dot */
+        /** @return the file name extension, without the dot: the format's name in lower case */
         String extension() {
-            return extension;
+            return name().toLowerCase(Locale.ROOT);
         }
 
         /** @return the kind of file in words, for the file chooser's filter */
