@@ -1,30 +1,59 @@
 package org.scalewright.physics;
 
-/** Why a note is flagged. */
+/**
+ * Why a note is flagged, and how seriously a rebuilder should take it. The severity is decided
+ * here once; the terminal marks, the window's tints, status line and flags list and the report
+ * all ask {@link #severity()}.
+ */
 public enum FlagKind {
     /** percent of breaking strength below the low band */
-    LOW_STRESS("low stress"),
+    LOW_STRESS("low stress", Severity.NOTICE),
     /** in the caution band */
-    CAUTION("caution band"),
+    CAUTION("caution band", Severity.CAUTION),
     /** in the danger band */
-    DANGER("danger band"),
+    DANGER("danger band", Severity.DANGER),
     /** at or above 100 % of breaking strength: the string would break at pitch */
-    OVER_STRENGTH("over breaking strength"),
+    OVER_STRENGTH("over breaking strength", Severity.DANGER),
     /** per-string tension steps from the next key by more than the neighbour step */
-    NEIGHBOUR_STEP("tension step"),
-    /** a legal but implausible value */
-    IMPLAUSIBLE("implausible value"),
+    NEIGHBOUR_STEP("tension step", Severity.CAUTION),
+    /**
+     * a legal but implausible value: shown as danger, because every other figure of the note
+     * rests on it and a rebuilder must look at it before trusting any of them
+     */
+    IMPLAUSIBLE("implausible value", Severity.DANGER),
     /** the strength table had to be extrapolated for this diameter */
-    OUTSIDE_STRENGTH_TABLE("outside strength table");
+    OUTSIDE_STRENGTH_TABLE("outside strength table", Severity.NOTICE);
+
+    /** How seriously a flag is to be taken, most serious first. */
+    public enum Severity {
+        /** look at this note before anything else: it may break, or its data is suspect */
+        DANGER,
+        /** worth a look: close to the limits, or out of line with its neighbour */
+        CAUTION,
+        /** for information */
+        NOTICE
+    }
 
     private final String word;
+    private final Severity severity;
 
-    FlagKind(String word) {
+    FlagKind(String word, Severity severity) {
         this.word = word;
+        this.severity = severity;
     }
 
     /** @return the flag in plain words */
     public String word() {
         return word;
+    }
+
+    /** @return how seriously the flag is to be taken */
+    public Severity severity() {
+        return severity;
+    }
+
+    /** @return true when the flag is shown as danger */
+    public boolean isDanger() {
+        return severity == Severity.DANGER;
     }
 }

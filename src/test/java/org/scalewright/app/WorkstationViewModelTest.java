@@ -15,6 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.Scale;
+import org.scalewright.physics.FlagKind;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.ScriptedPrompts;
@@ -268,5 +269,20 @@ class WorkstationViewModelTest {
         assertSame(nine, row(9), "the row object stays, so the table keeps its selection");
         assertNotEquals(nineBefore, nine.state());
         assertEquals(0.9, nine.note().speakingLength(), 1e-12);
+    }
+
+    @Test
+    void theFlagsListTakesEachFlagsSeverityFromItsKind() throws Exception {
+        // a 5 mm plain wire: implausible, and shown as danger (physics.FlagKind)
+        Path thick = Files.writeString(dir.resolve("thick.csv"), "key,strings,length_mm,wire_mm\n40,3,620,5\n");
+        assertTrue(vm.openSheet(thick, true));
+        var items = vm.flags().items();
+        assertTrue(items.stream().anyMatch(it -> it.kind().equals(FlagKind.IMPLAUSIBLE.word())
+                && it.severity() == FlagKind.Severity.DANGER), items.toString());
+        for (var it : items) {
+            FlagKind kind = java.util.Arrays.stream(FlagKind.values()).filter(k -> k.word().equals(it.kind()))
+                    .findFirst().orElseThrow();
+            assertEquals(kind.severity(), it.severity(), it.toString());
+        }
     }
 }

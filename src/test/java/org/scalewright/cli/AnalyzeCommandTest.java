@@ -284,4 +284,17 @@ class AnalyzeCommandTest {
         assertEquals("", CsvCells.safeText(""));
         assertEquals("", CsvCells.safeText(null));
     }
+
+    @Test
+    @DisplayName("an implausible value is marked as danger and brings the caution, as the flag kind says")
+    void implausibleValueIsShownAsDanger() throws Exception {
+        // a 5 mm plain wire at a sensible length and pitch: implausible, but far under its strength
+        Path thick = sheet("key,strings,length_mm,wire_mm\n40,3,620,5\n");
+        Run r = run("analyze", thick.toString());
+        assertEquals(0, r.status(), r.err());
+        String row = r.out().lines().filter(l -> l.matches("\\s*40\\s+C4.*")).findFirst().orElseThrow();
+        assertTrue(row.contains("!"), row);
+        assertTrue(r.out().contains("Caution: "), r.out());
+        assertTrue(r.out().contains("! danger band, over strength or implausible value"), r.out());
+    }
 }
