@@ -156,7 +156,8 @@ class WorkstationViewModelTest {
         assertEquals(442, session.scale().pitch().a4());
         assertTrue(row(5).result().frequency() > before);
         assertFalse(vm.setA4("44"));
-        assertTrue(session.messageProperty().get().contains("between 300 and 600"));
+        assertTrue(session.messageProperty().get().contains("pitch standard A4 must be 300 to 600 Hz, was 44"),
+                session.messageProperty().get());
         session.undo();
         assertEquals(440, session.scale().pitch().a4());
     }
@@ -269,6 +270,19 @@ class WorkstationViewModelTest {
         assertSame(nine, row(9), "the row object stays, so the table keeps its selection");
         assertNotEquals(nineBefore, nine.state());
         assertEquals(0.9, nine.note().speakingLength(), 1e-12);
+    }
+
+    @Test
+    void a4FieldRefusesWithThePitchStandardsMessageAndTakesADecimalComma() {
+        assertFalse(vm.setA4("1200"));
+        // the same message as `analyze --a4 1200` on the command line (AnalyzeCommandTest)
+        assertEquals("pitch standard A4 must be 300 to 600 Hz, was 1200", session.messageProperty().get());
+        assertEquals(440, session.scale().pitch().a4());
+        assertTrue(vm.setA4("442,5 Hz"));
+        assertEquals(442.5, session.scale().pitch().a4());
+        assertFalse(vm.setA4("0x1p9"));
+        assertEquals("A4: expected a number in Hz, was '0x1p9'", session.messageProperty().get());
+        assertEquals(442.5, session.scale().pitch().a4());
     }
 
     @Test
