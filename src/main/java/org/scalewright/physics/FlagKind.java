@@ -7,22 +7,22 @@ package org.scalewright.physics;
  */
 public enum FlagKind {
     /** percent of breaking strength below the low band */
-    LOW_STRESS("low stress", Severity.NOTICE),
+    LOW_STRESS("low stress"),
     /** in the caution band */
-    CAUTION("caution band", Severity.CAUTION),
+    CAUTION("caution band"),
     /** in the danger band */
-    DANGER("danger band", Severity.DANGER),
+    DANGER("danger band"),
     /** at or above 100 % of breaking strength: the string would break at pitch */
-    OVER_STRENGTH("over breaking strength", Severity.DANGER),
+    OVER_STRENGTH("over breaking strength"),
     /** per-string tension steps from the next key by more than the neighbour step */
-    NEIGHBOUR_STEP("tension step", Severity.CAUTION),
+    NEIGHBOUR_STEP("tension step"),
     /**
-     * a legal but implausible value: shown as danger, because every other figure of the note
-     * rests on it and a rebuilder must look at it before trusting any of them
+     * a legal but implausible value: shown as danger ({@link #severity()}), because every other
+     * figure of the note rests on it and a rebuilder must look at it before trusting any of them
      */
-    IMPLAUSIBLE("implausible value", Severity.DANGER),
+    IMPLAUSIBLE("implausible value"),
     /** the strength table had to be extrapolated for this diameter */
-    OUTSIDE_STRENGTH_TABLE("outside strength table", Severity.NOTICE);
+    OUTSIDE_STRENGTH_TABLE("outside strength table");
 
     /** How seriously a flag is to be taken, most serious first. */
     public enum Severity {
@@ -35,11 +35,9 @@ public enum FlagKind {
     }
 
     private final String word;
-    private final Severity severity;
 
-    FlagKind(String word, Severity severity) {
+    FlagKind(String word) {
         this.word = word;
-        this.severity = severity;
     }
 
     /** @return the flag in plain words */
@@ -49,11 +47,15 @@ public enum FlagKind {
 
     /** @return how seriously the flag is to be taken */
     public Severity severity() {
-        return severity;
+        return switch (this) {
+            case DANGER, OVER_STRENGTH, IMPLAUSIBLE -> Severity.DANGER;
+            case CAUTION, NEIGHBOUR_STEP -> Severity.CAUTION;
+            case LOW_STRESS, OUTSIDE_STRENGTH_TABLE -> Severity.NOTICE;
+        };
     }
 
     /** @return true when the flag is shown as danger */
     public boolean isDanger() {
-        return severity == Severity.DANGER;
+        return severity() == Severity.DANGER;
     }
 }
