@@ -47,9 +47,10 @@ final class StatusViewModel {
     private String totalsText(ScaleAnalysis a, DisplayUnits u) {
         int strings = a.notes().stream().mapToInt(r -> r.strings()).sum();
         long flagged = a.flaggedNoteCount();
-        return String.format(Locale.ROOT, "Total tension %s  ·  %d notes, %d strings  ·  %d flags on %d notes  ·  "
-                        + "A4 = %s Hz  ·  strength: %s", DisplayFormat.total(a.totalTension(), u), a.notes().size(),
-                strings, a.flags().size(), flagged, DisplayFormat.decimals(a.scale().pitch().a4(), 1, 2),
+        return String.format(Locale.ROOT, "Total tension %s  ·  %d notes, %d strings  ·  %d flags on %d notes, %d "
+                        + "in danger  ·  A4 = %s Hz  ·  strength: %s", DisplayFormat.total(a.totalTension(), u),
+                a.notes().size(), strings, a.flags().size(), flagged, a.dangerNoteCount(),
+                DisplayFormat.decimals(a.scale().pitch().a4(), 1, 2),
                 session.strengthProperty().get().label());
     }
 

@@ -2,7 +2,6 @@ package org.scalewright.app;
 
 import java.io.IOException;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
@@ -13,12 +12,14 @@ import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.table.FlagsViewModel;
 import org.scalewright.app.table.NoteTableViewModel;
+import org.scalewright.app.tool.TypedEntry;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.ForceUnit;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.physics.StrengthTable;
 
@@ -237,15 +238,10 @@ public final class WorkstationViewModel {
      */
     boolean setA4(String text) {
         try {
-            double a4 = Double.parseDouble(text.trim().replace(',', '.').replaceAll("(?i)\\s*hz$", ""));
-            if (!(a4 >= 300 && a4 <= 600)) {
-                session.complain(String.format(Locale.ROOT, "A4 must be between 300 and 600 Hz, was %s", text.trim()));
-                return false;
-            }
-            session.setA4(a4);
+            session.setA4(TypedEntry.parse(text, "A4", "Hz"));
             return true;
-        } catch (NumberFormatException e) {
-            session.complain("A4: expected a frequency in Hz, was '" + text.trim() + "'");
+        } catch (InvalidInput e) {
+            session.complain(e.getMessage());
             return false;
         }
     }

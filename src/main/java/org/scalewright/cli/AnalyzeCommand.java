@@ -10,7 +10,6 @@ import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.Flag;
-import org.scalewright.physics.FlagKind;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
@@ -64,7 +63,8 @@ public final class AnalyzeCommand implements Callable<Integer> {
         t.print(w);
         w.println();
         w.println("wire: #size = music-wire size, else diameter in mm; wound: core/wrap[+second wrap] metal (co, ir, st)");
-        w.println("flag: ! danger band or over strength, ^ caution band, v low stress, s tension step, ? other");
+        w.println("flag: ! danger band, over strength or implausible value, ^ caution band, v low stress, "
+                + "s tension step, ? outside the strength table");
         w.println();
         if (a.flags().isEmpty()) {
             w.println("No flagged notes.");
@@ -87,7 +87,7 @@ public final class AnalyzeCommand implements Callable<Integer> {
         }
         st.print(w);
         w.println("Whole instrument: " + Formats.kN(a.totalTension()));
-        if (a.flags().stream().anyMatch(f -> f.kind() == FlagKind.DANGER || f.kind() == FlagKind.OVER_STRENGTH)) {
+        if (a.dangerNoteCount() > 0) {
             w.println();
             w.println("Caution: " + BuiltInData.cautions().get(0));
         }
@@ -97,12 +97,11 @@ public final class AnalyzeCommand implements Callable<Integer> {
     static String marker(NoteResult r) {
         StringBuilder m = new StringBuilder();
         for (Flag f : r.flags()) {
-            String c = switch (f.kind()) {
-                case DANGER, OVER_STRENGTH -> "!";
+            String c = f.kind().isDanger() ? "!" : switch (f.kind()) {
                 case CAUTION -> "^";
                 case LOW_STRESS -> "v";
                 case NEIGHBOUR_STEP -> "s";
-                case IMPLAUSIBLE, OUTSIDE_STRENGTH_TABLE -> "?";
+                default -> "?";
             };
             if (m.indexOf(c) < 0) {
                 m.append(c);

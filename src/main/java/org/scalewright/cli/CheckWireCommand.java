@@ -9,9 +9,8 @@ import java.util.concurrent.Callable;
 import org.scalewright.design.wirecheck.PitchState;
 import org.scalewright.design.wirecheck.RaiseStage;
 import org.scalewright.design.wirecheck.SizeRounding;
-import org.scalewright.design.wirecheck.StageAdvice;
 import org.scalewright.design.wirecheck.StageLimit;
-import org.scalewright.design.wirecheck.StrengthComparison;
+import org.scalewright.design.wirecheck.StageWords;
 import org.scalewright.design.wirecheck.TensionTotals;
 import org.scalewright.design.wirecheck.WireCheck;
 import org.scalewright.design.wirecheck.WireCheckNote;
@@ -24,6 +23,7 @@ import org.scalewright.io.PitchStateReader;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.io.StrengthTableReader;
 import org.scalewright.io.WireCheckCsv;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
@@ -96,11 +96,11 @@ public final class CheckWireCommand implements Callable<Integer> {
                     + "no overpull)")
     double overpull;
 
-    @Option(names = "--stage-above", paramLabel = "AMOUNT", converter = StageLimitConverter.class,
+    @Option(names = "--stage-above", paramLabel = "AMOUNT",
             description = "advise raising in stages when the total tension changes by more than this in one "
                     + "pass: 10kN, 2200lbf or 5%% (default: 5%% of the present total, a rule of thumb, common "
-                    + "practice, no source)")
-    StageLimit stageAbove;
+                    + "practice, no source); a decimal comma is taken too (7,5kN)")
+    String stageAbove;
 
     @Option(names = "--out", paramLabel = "FILE.csv", description = "write the per-note results as CSV (SI units)")
     Path out;
@@ -121,15 +121,11 @@ public final class CheckWireCommand implements Callable<Integer> {
 
     private WireCheckRequest request() throws BadInputException {
         List<String> problems = new ArrayList<>();
-        if (flatness != null && flatness.cents != null && !(Math.abs(flatness.cents) <= PitchStateReader.MAX_CENTS)) {
-            problems.add("--flat-cents must be between -1200 and 1200 cents, was " + Formats.trim(flatness.cents));
-        }
-        if (!(overpull >= 0 && overpull <= 100)) {
-            problems.add("--overpull must be 0 to 100 %, was " + Formats.trim(overpull));
-        }
-        if (a4 != null && !(a4 > 0 && a4 < 1000)) {
-            problems.add("--a4 must be a frequency in Hz between 0 and 1000, was " + Formats.trim(a4));
-        }
+        PitchState uniform = check(problems, () -> flatness != null && flatness.cents != null
+                ? PitchState.flatBy(flatness.cents) : null);
+        check(problems, () -> WireCheckRequest.overpull(overpull));
+        PitchStandard a4Target = check(problems, () -> a4 == null ? null : PitchStandard.of(a4));
+        StageLimit limit = check(problems, () -> stageAbove == null ? StageLimit.DEFAULT : StageLimit.parse(stageAbove));
         if (!problems.isEmpty()) {
             throw new UserError(String.join("\n", problems));
         }
@@ -144,14 +140,24 @@ public final class CheckWireCommand implements Callable<Integer> {
             c = WireConversion.toInch(conversion.toInch, BuiltInData.musicWireSizes());
         }
         PitchState state = PitchState.atPitch();
-        if (flatness != null && flatness.cents != null) {
-            state = PitchState.uniform(flatness.cents);
+        if (uniform != null) {
+            state = uniform;
         } else if (flatness != null && flatness.file != null) {
             state = PitchStateReader.read(flatness.file, scale);
         }
-        PitchStandard target = a4 == null ? scale.pitch() : new PitchStandard(a4);
+        PitchStandard target = a4Target == null ? scale.pitch() : a4Target;
         return new WireCheckRequest(scale, settings, replacement, c, target, state, overpull,
-                stageAbove == null ? StageLimit.DEFAULT : stageAbove);
+                limit);
+    }
+
+    /** @return what {@code value} gives, or null with its refusal added to {@code problems} */
+    private static <T> T check(List<String> problems, java.util.function.Supplier<T> value) {
+        try {
+            return value.get();
+        } catch (InvalidInput e) {
+            problems.add(e.getMessage());
+            return null;
+        }
     }
 
     static void print(WireCheckReport r, PrintWriter w) {
@@ -164,19 +170,17 @@ public final class CheckWireCommand implements Callable<Integer> {
         w.println("  replacement judged by:  " + q.replacement().name());
         w.println("  wire: " + q.conversion().describe() + (r.converted().isEmpty() ? ""
                 : " (" + r.converted().size() + " notes change diameter)"));
-        w.println("  present state: " + flatWords(q) + "; overpull " + Formats.trim(q.overpullPct())
+        w.println("  present state: " + q.flat().describe() + "; overpull " + Formats.trim(q.overpullPct())
                 + " % of how flat each note is");
         for (WireCheckNote n : r.conversionWarnings()) {
             w.println("  note: key " + n.key() + " " + n.noteName() + ": " + n.wireChange().remark());
         }
         w.println();
-        double danger = q.settings().bands().danger();
         List<WireCheckNote> risk = r.atRisk();
         if (risk.isEmpty()) {
-            w.println(String.format(Locale.ROOT, "No note reaches the danger band (%.0f %%) at the peak.", danger));
+            w.println(r.riskSummary());
         } else {
-            w.println(String.format(Locale.ROOT, "Notes at risk: %d at or above the danger band (%.0f %%) at the "
-                    + "peak, highest first", risk.size(), danger));
+            w.println("Notes at risk: " + r.riskSummary());
             table(risk, q).print(w);
         }
         w.println();
@@ -184,24 +188,17 @@ public final class CheckWireCommand implements Callable<Integer> {
         table(r.notes().stream().filter(n -> !n.overDanger()).toList(), q).print(w);
         w.println("mark: ! at or above the danger band at the peak, ^ in the caution band at the peak");
         w.println();
-        StrengthComparison c = r.tables();
-        if (!c.first().name().equals(c.second().name())) {
-            WordWrap.print(w, "", String.format(Locale.ROOT, "Strength tables compared on the replacement wire: the "
-                            + "replacement table is %+.1f to %+.1f %% stronger than the present one over these "
-                            + "diameters.", c.minSecondStrongerPct(), c.maxSecondStrongerPct()));
+        if (!r.tablesSummary().isEmpty()) {
+            WordWrap.print(w, "", r.tablesSummary());
             w.println();
         }
-        TensionTotals t = r.totals();
         w.println("Total tension on the plate:");
         TextTable tt = new TextTable("state", ">kN", ">lbf", ">change kN", ">change lbf", ">change %");
-        tt.row("present (present wire, present pitch)", Formats.f(t.present() / 1e3, 1), lbf(t.present()), "", "", "");
-        tt.row("present wire at target", Formats.f(t.beforeAtTarget() / 1e3, 1), lbf(t.beforeAtTarget()),
-                signedKn(t.beforeAtTarget() - t.present()), signedLbf(t.beforeAtTarget() - t.present()),
-                Formats.f(100 * (t.beforeAtTarget() / t.present() - 1), 1));
-        tt.row("replacement at target", Formats.f(t.afterAtTarget() / 1e3, 1), lbf(t.afterAtTarget()),
-                signedKn(t.changeToTarget()), signedLbf(t.changeToTarget()), Formats.f(t.changeToTargetPct(), 1));
-        tt.row("replacement at the overpull peak", Formats.f(t.peak() / 1e3, 1), lbf(t.peak()),
-                signedKn(t.changeToPeak()), signedLbf(t.changeToPeak()), Formats.f(t.changeToPeakPct(), 1));
+        for (TensionTotals.State st : r.totals().states()) {
+            boolean present = !Double.isFinite(st.change());
+            tt.row(st.name(), Formats.f(st.total() / 1e3, 1), lbf(st.total()), present ? "" : signedKn(st.change()),
+                    present ? "" : signedLbf(st.change()), present ? "" : Formats.f(st.changePct(), 1));
+        }
         tt.print(w);
         w.println();
         printStages(r, w);
@@ -215,40 +212,26 @@ public final class CheckWireCommand implements Callable<Integer> {
     }
 
     private static void printStages(WireCheckReport r, PrintWriter w) {
-        StageAdvice a = r.stages();
-        WireCheckRequest q = r.request();
-        if (!a.advised()) {
-            w.println("Raise in stages: not needed by these figures (no peak in the danger band; total tension "
-                    + "change within " + q.stageLimit().describe() + ").");
-            return;
-        }
-        w.println("Raise in stages: advised, because");
-        for (String reason : a.reasons()) {
+        StageWords words = r.stageWords();
+        w.println(words.headline());
+        for (String reason : words.reasons()) {
             WordWrap.print(w, "  - ", reason);
         }
-        if (!a.dangerAtTarget().isEmpty()) {
-            WordWrap.print(w, "  - ", keyList(a.dangerAtTarget()) + (a.dangerAtTarget().size() == 1 ? " is" : " are")
-                    + " in the danger band at the target pitch itself with the replacement: staging cannot help"
-                    + (a.dangerAtTarget().size() == 1 ? " it" : " them") + "; change the wire or the pitch standard");
+        if (!words.plan().isEmpty()) {
+            WordWrap.print(w, "  ", words.plan());
         }
-        if (!a.hasPlan()) {
-            w.println(String.format(Locale.ROOT, "  No plan of up to %d passes keeps every pass within the limits; "
-                    + "consider a lower target pitch or a stronger wire.", StageAdvice.MAX_STAGES));
+        if (words.passes().isEmpty()) {
             return;
         }
-        double overpull = q.overpullPct();
-        w.println(String.format(Locale.ROOT, "  Plan: %d passes, each raising every note by 1/%d of how flat it is, "
-                + "tuned %s %% sharp of that step:", a.stages().size(), a.stages().size(), Formats.trim(overpull)));
         TextTable t = new TextTable(">pass", ">raised to %", ">total at start kN", ">total at peak kN", ">change kN",
                 ">highest % at peak", ">at key");
-        for (RaiseStage st : a.stages()) {
+        for (RaiseStage st : r.stages().stages()) {
             t.row(st.number(), Formats.f(100 * st.endFraction(), 0), Formats.f(st.totalAtStart() / 1e3, 1),
                     Formats.f(st.totalAtPeak() / 1e3, 1), signedKn(st.change()), Formats.f(st.maxPeakPct(), 1),
                     st.maxPeakKey());
         }
         t.print(w);
-        w.println("  Each pass stays within the stage limit (" + q.stageLimit().describe() + ", "
-                + Formats.f(a.limitNewtons() / 1e3, 1) + " kN) and under the danger band at its peak.");
+        WordWrap.print(w, "  ", words.closing());
     }
 
     private static TextTable table(List<WireCheckNote> notes, WireCheckRequest q) {
@@ -265,26 +248,6 @@ public final class CheckWireCommand implements Callable<Integer> {
                     n.breakPctPeak() >= danger ? "!" : n.breakPctPeak() >= caution ? "^" : "");
         }
         return t;
-    }
-
-    private static String keyList(List<Integer> keys) {
-        StringBuilder b = new StringBuilder(keys.size() == 1 ? "key " : "keys ");
-        for (int i = 0; i < keys.size(); i++) {
-            b.append(i == 0 ? "" : ", ").append(keys.get(i)).append(' ')
-                    .append(org.scalewright.model.KeyNames.name(keys.get(i)));
-        }
-        return b.toString();
-    }
-
-    private static String flatWords(WireCheckRequest q) {
-        PitchState f = q.flat();
-        if (f.isPerNote()) {
-            return "cents flat measured on " + f.measured().size() + " keys (" + Formats.f(
-                    f.measured().values().stream().mapToDouble(Double::doubleValue).min().orElse(0), 1) + " to "
-                    + Formats.f(f.measured().values().stream().mapToDouble(Double::doubleValue).max().orElse(0), 1)
-                    + "), interpolated between them";
-        }
-        return Formats.trim(f.uniformCents()) + " cents flat on every note";
     }
 
     private static String lbf(double n) {

@@ -3,6 +3,7 @@ package org.scalewright.cli;
 import java.io.PrintWriter;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.SheetProblem;
+import org.scalewright.model.InvalidInput;
 import picocli.CommandLine;
 
 /** Turns exceptions from a command into messages and exit statuses, without stack traces. */
@@ -23,7 +24,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
             err.flush();
             return ExitStatus.BAD_INPUT;
         }
-        if (e instanceof UserError || e instanceof IllegalArgumentException) {
+        if (e instanceof UserError || e instanceof InvalidInput || e instanceof IllegalArgumentException) {
             for (String line : e.getMessage().split("\n")) {
                 err.println("error: " + line);
             }

@@ -27,14 +27,17 @@ public final class Inputs {
 
     /** @return the scale as read, tuned to {@code --a4} where given */
     public Scale scale() throws BadInputException {
+        PitchStandard pitch = pitch();
         Scale s = ScaleSheetReader.standard().read(scaleFile);
-        if (a4 != null) {
-            if (!(a4 > 0 && a4 < 1000)) {
-                throw new UserError("--a4 must be a frequency in Hz between 0 and 1000, was " + a4);
-            }
-            s = s.withPitch(new PitchStandard(a4));
-        }
-        return s;
+        return pitch == null ? s : s.withPitch(pitch);
+    }
+
+    /**
+     * @return the pitch standard of {@code --a4}, or null where it is not given
+     * @throws org.scalewright.model.InvalidInput when {@code --a4} is outside the accepted range
+     */
+    public PitchStandard pitch() {
+        return a4 == null ? null : PitchStandard.of(a4);
     }
 
     /** @return the strength table chosen */

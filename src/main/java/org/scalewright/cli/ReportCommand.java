@@ -16,7 +16,6 @@ import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;
 import org.scalewright.report.Reports;
 import org.scalewright.report.ReportUnits;
-import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
@@ -87,7 +86,7 @@ public final class ReportCommand implements Callable<Integer> {
         if (reference != null) {
             Scale r = ScaleSheetReader.standard().read(reference);
             if (inputs.a4 != null) {
-                r = r.withPitch(new PitchStandard(inputs.a4));
+                r = r.withPitch(inputs.pitch());
             }
             ref = Optional.of(new ReportContent.Reference(reference.getFileName().toString(),
                     ScaleAnalyzer.analyze(r, settings)));

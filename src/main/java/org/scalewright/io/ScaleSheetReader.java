@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
 import org.scalewright.model.CoreWire;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 import org.scalewright.model.PitchStandard;
@@ -55,10 +56,13 @@ public final class ScaleSheetReader {
         String a4 = table.commentValue("a4_hz");
         if (a4 != null) {
             try {
-                pitch = new PitchStandard(Double.parseDouble(a4));
-            } catch (IllegalArgumentException e) {
-                problems.add(new SheetProblem(file, table.commentLine("a4_hz"), "", "the '# a4_hz:' comment must give a frequency in Hz "
-                        + "between 0 and 1000, was '" + a4 + "'"));
+                pitch = PitchStandard.of(Double.parseDouble(a4));
+            } catch (NumberFormatException e) {
+                problems.add(new SheetProblem(file, table.commentLine("a4_hz"), "", "the '# a4_hz:' comment must give "
+                        + "a frequency in Hz, was '" + a4 + "'"));
+            } catch (InvalidInput e) {
+                problems.add(new SheetProblem(file, table.commentLine("a4_hz"), "", "the '# a4_hz:' comment: "
+                        + e.getMessage()));
             }
         }
         String title = table.commentValue("title");

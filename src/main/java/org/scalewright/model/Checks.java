@@ -43,7 +43,8 @@ public final class Checks {
         return value;
     }
 
-    static String format(double v) {
+    /** @return {@code v} as a message shows it: whole numbers without decimals, else six significant digits */
+    public static String format(double v) {
         if (v == Math.rint(v) && Math.abs(v) < 1e15) {
             return Long.toString((long) v);
         }

@@ -1,6 +1,10 @@
 package org.scalewright.physics;
 
-/** Why a note is flagged. */
+/**
+ * Why a note is flagged, and how seriously a rebuilder should take it. The severity is decided
+ * here once; the terminal marks, the window's tints, status line and flags list and the report
+ * all ask {@link #severity()}.
+ */
 public enum FlagKind {
     /** percent of breaking strength below the low band */
     LOW_STRESS("low stress"),
@@ -12,10 +16,23 @@ public enum FlagKind {
     OVER_STRENGTH("over breaking strength"),
     /** per-string tension steps from the next key by more than the neighbour step */
     NEIGHBOUR_STEP("tension step"),
-    /** a legal but implausible value */
+    /**
+     * a legal but implausible value: shown as danger ({@link #severity()}), because every other
+     * figure of the note rests on it and a rebuilder must look at it before trusting any of them
+     */
     IMPLAUSIBLE("implausible value"),
     /** the strength table had to be extrapolated for this diameter */
     OUTSIDE_STRENGTH_TABLE("outside strength table");
+
+    /** How seriously a flag is to be taken, most serious first. */
+    public enum Severity {
+        /** look at this note before anything else: it may break, or its data is suspect */
+        DANGER,
+        /** worth a look: close to the limits, or out of line with its neighbour */
+        CAUTION,
+        /** for information */
+        NOTICE
+    }
 
     private final String word;
 
@@ -26,5 +43,19 @@ public enum FlagKind {
     /** @return the flag in plain words */
     public String word() {
         return word;
+    }
+
+    /** @return how seriously the flag is to be taken */
+    public Severity severity() {
+        return switch (this) {
+            case DANGER, OVER_STRENGTH, IMPLAUSIBLE -> Severity.DANGER;
+            case CAUTION, NEIGHBOUR_STEP -> Severity.CAUTION;
+            case LOW_STRESS, OUTSIDE_STRENGTH_TABLE -> Severity.NOTICE;
+        };
+    }
+
+    /** @return true when the flag is shown as danger */
+    public boolean isDanger() {
+        return severity() == Severity.DANGER;
     }
 }

@@ -38,4 +38,9 @@ public record ScaleAnalysis(Scale scale, AnalysisSettings settings, List<NoteRes
     public long flaggedNoteCount() {
         return notes.stream().filter(NoteResult::isFlagged).count();
     }
+
+    /** @return how many notes carry a flag shown as danger ({@link FlagKind#isDanger()}) */
+    public long dangerNoteCount() {
+        return notes.stream().filter(r -> r.flags().stream().anyMatch(f -> f.kind().isDanger())).count();
+    }
 }

@@ -118,7 +118,8 @@ public final class PdfReportWriter {
         }
         String kinds = count.entrySet().stream().map(e -> e.getValue() + " " + e.getKey().word())
                 .collect(Collectors.joining(", "));
-        return a.flaggedNoteCount() + " of " + a.notes().size() + " notes flagged: " + kinds
+        return a.flaggedNoteCount() + " of " + a.notes().size() + " notes flagged, " + a.dangerNoteCount()
+                + " of them as danger (danger band, over breaking strength or an implausible value): " + kinds
                 + ". Each is listed with its reason after the curves.";
     }
 

@@ -15,6 +15,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.Scale;
+import org.scalewright.physics.FlagKind;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.ScriptedPrompts;
@@ -155,7 +156,8 @@ class WorkstationViewModelTest {
         assertEquals(442, session.scale().pitch().a4());
         assertTrue(row(5).result().frequency() > before);
         assertFalse(vm.setA4("44"));
-        assertTrue(session.messageProperty().get().contains("between 300 and 600"));
+        assertTrue(session.messageProperty().get().contains("pitch standard A4 must be 300 to 600 Hz, was 44"),
+                session.messageProperty().get());
         session.undo();
         assertEquals(440, session.scale().pitch().a4());
     }
@@ -268,5 +270,33 @@ class WorkstationViewModelTest {
         assertSame(nine, row(9), "the row object stays, so the table keeps its selection");
         assertNotEquals(nineBefore, nine.state());
         assertEquals(0.9, nine.note().speakingLength(), 1e-12);
+    }
+
+    @Test
+    void a4FieldRefusesWithThePitchStandardsMessageAndTakesADecimalComma() {
+        assertFalse(vm.setA4("1200"));
+        // the same message as `analyze --a4 1200` on the command line (AnalyzeCommandTest)
+        assertEquals("pitch standard A4 must be 300 to 600 Hz, was 1200", session.messageProperty().get());
+        assertEquals(440, session.scale().pitch().a4());
+        assertTrue(vm.setA4("442,5 Hz"));
+        assertEquals(442.5, session.scale().pitch().a4());
+        assertFalse(vm.setA4("0x1p9"));
+        assertEquals("A4: expected a number in Hz, was '0x1p9'", session.messageProperty().get());
+        assertEquals(442.5, session.scale().pitch().a4());
+    }
+
+    @Test
+    void theFlagsListTakesEachFlagsSeverityFromItsKind() throws Exception {
+        // a 5 mm plain wire: implausible, and shown as danger (physics.FlagKind)
+        Path thick = Files.writeString(dir.resolve("thick.csv"), "key,strings,length_mm,wire_mm\n40,3,620,5\n");
+        assertTrue(vm.openSheet(thick, true));
+        var items = vm.flags().items();
+        assertTrue(items.stream().anyMatch(it -> it.kind().equals(FlagKind.IMPLAUSIBLE.word())
+                && it.severity() == FlagKind.Severity.DANGER), items.toString());
+        for (var it : items) {
+            FlagKind kind = java.util.Arrays.stream(FlagKind.values()).filter(k -> k.word().equals(it.kind()))
+                    .findFirst().orElseThrow();
+            assertEquals(kind.severity(), it.severity(), it.toString());
+        }
     }
 }

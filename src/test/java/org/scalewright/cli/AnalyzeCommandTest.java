@@ -2,6 +2,7 @@ package org.scalewright.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.opencsv.CSVReader;
@@ -27,6 +28,8 @@ import org.scalewright.model.WrapMetal;
 import org.scalewright.physics.Pitch;
 import org.scalewright.physics.StrengthTable;
 import org.scalewright.physics.StringPhysics;
+import org.scalewright.model.InvalidInput;
+import org.scalewright.model.PitchStandard;
 import picocli.CommandLine;
 
 /** The {@code analyze} command in-process (DESIGN §5): output, exit statuses, no stack traces. */
@@ -283,5 +286,36 @@ class AnalyzeCommandTest {
         assertEquals("bass", CsvCells.safeText("bass"));
         assertEquals("", CsvCells.safeText(""));
         assertEquals("", CsvCells.safeText(null));
+    }
+
+    @Test
+    @DisplayName("--a4 outside 300-600 Hz is refused with the pitch standard's own message, the window's too")
+    void a4OutsideTheAcceptedRange() throws Exception {
+        Path good = sheet(SHEET);
+        Run r = run("analyze", good.toString(), "--a4", "1200");
+        assertEquals(2, r.status(), r.err());
+        assertEquals("error: pitch standard A4 must be 300 to 600 Hz, was 1200", r.err().strip());
+        // the same message from the one home of the rule
+        assertEquals("pitch standard A4 must be 300 to 600 Hz, was 1200",
+                assertThrows(InvalidInput.class, () -> PitchStandard.of(1200)).getMessage());
+        Run low = run("analyze", good.toString(), "--a4", "299.5");
+        assertEquals(2, low.status(), low.err());
+        assertTrue(low.err().contains("pitch standard A4 must be 300 to 600 Hz, was 299.5"), low.err());
+        assertEquals(0, run("analyze", good.toString(), "--a4", "300").status());
+        assertEquals(0, run("analyze", good.toString(), "--a4", "600").status());
+        noStackTrace(r);
+    }
+
+    @Test
+    @DisplayName("an implausible value is marked as danger and brings the caution, as the flag kind says")
+    void implausibleValueIsShownAsDanger() throws Exception {
+        // a 5 mm plain wire at a sensible length and pitch: implausible, but far under its strength
+        Path thick = sheet("key,strings,length_mm,wire_mm\n40,3,620,5\n");
+        Run r = run("analyze", thick.toString());
+        assertEquals(0, r.status(), r.err());
+        String row = r.out().lines().filter(l -> l.matches("\\s*40\\s+C4.*")).findFirst().orElseThrow();
+        assertTrue(row.contains("!"), row);
+        assertTrue(r.out().contains("Caution: "), r.out());
+        assertTrue(r.out().contains("! danger band, over strength or implausible value"), r.out());
     }
 }

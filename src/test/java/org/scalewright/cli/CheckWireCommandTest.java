@@ -187,4 +187,19 @@ class CheckWireCommandTest {
             assertTrue(r.out().contains("Raise in stages: advised"), r.out());
         }
     }
+
+    @Test
+    void theStageLimitTakesADecimalCommaAndBadValuesGetTheStageLimitsOwnMessage() throws IOException {
+        Run ok = run("check-wire", sheet().toString(), "--flat-cents", "100", "--stage-above", "7,5kN");
+        assertEquals(0, ok.rc(), ok.err());
+        assertTrue(ok.out().contains("7.5 kN"), ok.out());
+        Run bad = run("check-wire", sheet().toString(), "--stage-above", "lots");
+        assertEquals(2, bad.rc());
+        assertTrue(bad.err().contains("stage limit: expected a percent of the present total or a force > 0, such as "
+                + "5%, 10kN or 2200lbf, was 'lots'"), bad.err());
+        Run a4 = run("check-wire", sheet().toString(), "--a4", "1200", "--overpull", "150");
+        assertEquals(2, a4.rc());
+        assertTrue(a4.err().contains("error: overpull must be 0 to 100 %, was 150"), a4.err());
+        assertTrue(a4.err().contains("error: pitch standard A4 must be 300 to 600 Hz, was 1200"), a4.err());
+    }
 }

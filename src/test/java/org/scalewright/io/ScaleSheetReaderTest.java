@@ -279,6 +279,8 @@ class ScaleSheetReaderTest {
                 "wrap metal must be copper, iron or steel, was 'brass'");
         only(HEADER + "1,1,\"1500,1.5\n", 2, "", "cannot be split into cells");
         only("# title: x\n# a4_hz: high\n" + HEADER + "1,1,1500,1.5\n", 2, "", "a4_hz");
+        only("# title: x\n# a4_hz: 1200\n" + HEADER + "1,1,1500,1.5\n", 2, "",
+                "the '# a4_hz:' comment: pitch standard A4 must be 300 to 600 Hz, was 1200");
         only(",key,strings,length_mm,wire_mm\n,1,1,1500,1.5\n", 1, "(blank)", "no name");
     }
 

@@ -261,6 +261,11 @@ class ScaleAnalyzerTest {
         assertEquals(120, h.breakPct(), 1e-9);
         assertTrue(has(h, FlagKind.OVER_STRENGTH));
         assertTrue(h.headroomCents() < 0);
+        // an implausible value is shown as danger, as the danger band and a wire over strength are
+        assertTrue(FlagKind.IMPLAUSIBLE.isDanger() && FlagKind.DANGER.isDanger() && FlagKind.OVER_STRENGTH.isDanger());
+        assertEquals(FlagKind.Severity.CAUTION, FlagKind.NEIGHBOUR_STEP.severity());
+        assertFalse(FlagKind.LOW_STRESS.isDanger() || FlagKind.OUTSIDE_STRENGTH_TABLE.isDanger());
+        assertEquals(3, a.dangerNoteCount());
         // a sensible plain string raises none of these
         NoteResult ok = NoteCalculator.compute(plain(40, 0.62, 1.0e-3), PitchStandard.ISO_16, S);
         assertFalse(has(ok, FlagKind.IMPLAUSIBLE) || has(ok, FlagKind.OUTSIDE_STRENGTH_TABLE)

@@ -19,6 +19,7 @@ import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.tool.TypedEntry;
 import org.scalewright.chart.TargetMarks;
 import org.scalewright.design.SmoothTrend;
 import org.scalewright.design.rescale.ControlPoint;
@@ -33,6 +34,7 @@ import org.scalewright.design.rescale.TargetSpec;
 import org.scalewright.design.rescale.WoundPlanOptions;
 import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.design.rescale.WrapWires;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
 import org.scalewright.physics.NoteResult;
@@ -551,12 +553,12 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private static double number(String text, String what) {
         String t = text == null ? "" : text.trim();
         try {
-            double v = Double.parseDouble(t);
-            if (v >= 0 && !Double.isInfinite(v) && (v > 0 || what.equals("change cost"))) {
+            double v = TypedEntry.parse(t, what, "");
+            if (v >= 0 && (v > 0 || what.equals("change cost"))) {
                 return v;
             }
-        } catch (NumberFormatException e) {
-            // said below
+        } catch (InvalidInput e) {
+            // said below, with the range
         }
         throw new IllegalArgumentException(what + ": expected a number > 0, was '" + t + "'");
     }

@@ -116,9 +116,15 @@ public final class ScaleSession {
         }
     }
 
-    /** Sets the pitch standard (an undoable edit of the scale). */
+    /**
+     * Sets the pitch standard (an undoable edit of the scale).
+     *
+     * @param a4 frequency of A4, Hz, in the range {@link PitchStandard#of} accepts
+     * @return true when the scale changed
+     * @throws org.scalewright.model.InvalidInput when A4 is outside that range (nothing changes)
+     */
     public boolean setA4(double a4) {
-        PitchStandard p = new PitchStandard(a4);
+        PitchStandard p = PitchStandard.of(a4);
         return edit("A4 to " + DisplayFormat.decimals(a4, 1, 2) + " Hz", s -> s.withPitch(p));
     }
 

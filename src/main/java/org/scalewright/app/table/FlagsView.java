@@ -31,11 +31,10 @@ public final class FlagsView {
                 setText(item.key() + " " + item.noteName() + "  " + item.kind() + " — " + item.detail());
                 tip.setText(item.detail());
                 setTooltip(tip);
-                if (item.kind().startsWith("danger") || item.kind().startsWith("over")
-                        || item.kind().startsWith("implausible")) {
-                    getStyleClass().add("flag-danger");
-                } else if (item.kind().startsWith("caution") || item.kind().startsWith("tension step")) {
-                    getStyleClass().add("flag-caution");
+                switch (item.severity()) {
+                    case DANGER -> getStyleClass().add("flag-danger");
+                    case CAUTION -> getStyleClass().add("flag-caution");
+                    case NOTICE -> { }
                 }
             }
         });

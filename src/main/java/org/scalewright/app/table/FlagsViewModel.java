@@ -7,11 +7,12 @@ import javafx.collections.ObservableList;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.model.KeyNames;
 import org.scalewright.physics.Flag;
+import org.scalewright.physics.FlagKind;
 
 /** The list of flags of the working scale, bass to treble; choosing one selects its note. */
 public final class FlagsViewModel {
-    /** One line of the flags list. */
-    public record Item(int key, String noteName, String kind, String detail) {
+    /** One line of the flags list; {@code severity} is the flag kind's own ({@link FlagKind#severity()}). */
+    public record Item(int key, String noteName, String kind, String detail, FlagKind.Severity severity) {
         @Override
         public String toString() {
             return key + " " + noteName + "  " + kind + ": " + detail;
@@ -41,7 +42,7 @@ public final class FlagsViewModel {
     private void refresh() {
         List<Item> next = new ArrayList<>();
         for (Flag f : session.analysis().flags()) {
-            next.add(new Item(f.key(), KeyNames.name(f.key()), f.kind().word(), f.detail()));
+            next.add(new Item(f.key(), KeyNames.name(f.key()), f.kind().word(), f.detail(), f.kind().severity()));
         }
         if (!next.equals(items)) {
             items.setAll(next);

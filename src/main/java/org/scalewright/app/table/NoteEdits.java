@@ -3,8 +3,10 @@ package org.scalewright.app.table;
 import java.util.Locale;
 import java.util.Optional;
 import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.app.tool.TypedEntry;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.DisplayUnits;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 import org.scalewright.model.WireSize;
@@ -148,7 +150,7 @@ final class NoteEdits {
     }
 
     private static Quantity quantity(String t, DisplayUnits units) {
-        String s = t.replace(',', '.').trim();
+        String s = t.trim();
         Optional<LengthUnit> unit = Optional.empty();
         for (LengthUnit u : LengthUnit.values()) {
             if (s.toLowerCase(Locale.ROOT).endsWith(u.symbol())) {
@@ -158,13 +160,9 @@ final class NoteEdits {
             }
         }
         try {
-            double v = Double.parseDouble(s);
-            if (Double.isFinite(v)) {
-                return new Quantity(v, unit);
-            }
-        } catch (NumberFormatException e) {
-            // reported below
+            return new Quantity(TypedEntry.parse(s, "length", ""), unit);
+        } catch (InvalidInput e) {
+            throw new IllegalArgumentException("expected a number in " + units.length().symbol() + ", was '" + t + "'");
         }
-        throw new IllegalArgumentException("expected a number in " + units.length().symbol() + ", was '" + t + "'");
     }
 }

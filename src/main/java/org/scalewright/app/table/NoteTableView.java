@@ -1,5 +1,6 @@
 package org.scalewright.app.table;
 
+import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
@@ -13,6 +14,7 @@ import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
+import org.scalewright.physics.FlagKind;
 
 /**
  * The note table: one row per note, the specification columns editable like a spreadsheet
@@ -230,18 +232,13 @@ public final class NoteTableView {
         }
 
         private static String worst(NoteRow row) {
-            boolean danger = row.result().flags().stream().anyMatch(f -> switch (f.kind()) {
-                case DANGER, OVER_STRENGTH, IMPLAUSIBLE -> true;
-                default -> false;
-            });
-            if (danger) {
-                return MARKS[0];
-            }
-            boolean caution = row.result().flags().stream().anyMatch(f -> switch (f.kind()) {
-                case CAUTION, NEIGHBOUR_STEP -> true;
-                default -> false;
-            });
-            return caution ? MARKS[1] : MARKS[2];
+            FlagKind.Severity worst = row.result().flags().stream().map(f -> f.kind().severity())
+                    .min(Comparator.naturalOrder()).orElse(FlagKind.Severity.NOTICE);
+            return switch (worst) {
+                case DANGER -> MARKS[0];
+                case CAUTION -> MARKS[1];
+                case NOTICE -> MARKS[2];
+            };
         }
     }
 }

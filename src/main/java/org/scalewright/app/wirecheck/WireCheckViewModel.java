@@ -4,12 +4,11 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
+import java.util.function.Supplier;
+import java.util.stream.Collectors;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
@@ -32,6 +31,7 @@ import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.wirecheck.PitchState;
 import org.scalewright.design.wirecheck.SizeRounding;
 import org.scalewright.design.wirecheck.StageLimit;
+import org.scalewright.design.wirecheck.TensionTotals;
 import org.scalewright.design.wirecheck.WireCheck;
 import org.scalewright.design.wirecheck.WireCheckNote;
 import org.scalewright.design.wirecheck.WireCheckReport;
@@ -44,8 +44,8 @@ import org.scalewright.io.PitchStateReader;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
 import org.scalewright.io.WireCheckCsv;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.PitchStandard;
-import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.StrengthTable;
 
 /**
@@ -241,29 +241,25 @@ public final class WireCheckViewModel {
             bad.add("open a scale sheet first");
         }
         Double a4 = TypedEntry.number(targetA4.get(), "target A4", "Hz", bad);
-        if (a4 != null && !(a4 >= 300 && a4 <= 600)) {
-            bad.add("target A4 must be between 300 and 600 Hz, was " + targetA4.get().strip());
+        PitchStandard target = a4 == null ? null : refused(bad, () -> PitchStandard.of(a4));
+        PitchState state = measuredFlat.get();
+        if (state == null) {
+            Double flat = TypedEntry.number(centsFlat.get(), "cents flat", "c", bad);
+            state = flat == null ? null : refused(bad, () -> PitchState.flatBy(flat));
         }
-        Double flat = measuredFlat.get() != null ? Double.valueOf(0) : TypedEntry.number(centsFlat.get(), "cents flat", "c", bad);
-        if (flat != null && !(Math.abs(flat) <= PitchStateReader.MAX_CENTS)) {
-            bad.add("cents flat must be between -1200 and 1200, was " + centsFlat.get().strip());
-        }
-        Double pull = TypedEntry.number(overpull.get(), "overpull", "%", bad);
-        if (pull != null && !(pull >= 0 && pull <= 100)) {
-            bad.add("overpull must be 0 to 100 %, was " + overpull.get().strip());
-        }
-        StageLimit limit = stageLimit(stageLimit.get(), bad);
+        Double typedPull = TypedEntry.number(overpull.get(), "overpull", "%", bad);
+        Double pull = typedPull == null ? null : refused(bad, () -> WireCheckRequest.overpull(typedPull));
+        StageLimit limit = refused(bad, () -> StageLimit.parse(stageLimit.get()));
         if (!bad.isEmpty()) {
             problem.set(String.join("; ", bad));
             session.complain("wire check: " + String.join("; ", bad));
             return false;
         }
         var settings = session.settingsProperty().get();
-        PitchState state = measuredFlat.get() != null ? measuredFlat.get() : PitchState.uniform(flat);
         WireCheckRequest request = WireCheckRequest.of(session.scale(), settings)
                 .withReplacement(replacement.get() == null ? settings.strength() : replacement.get())
                 .withConversion(conversion.get().conversion())
-                .withTarget(new PitchStandard(a4))
+                .withTarget(target)
                 .withFlat(state)
                 .withOverpull(pull)
                 .withStageLimit(limit);
@@ -293,12 +289,8 @@ public final class WireCheckViewModel {
                     n.overDanger(), n.breakPctPeak() >= caution));
         }
         rows.setAll(next);
-        double danger = r.request().settings().bands().danger();
-        summary.set(r.atRisk().isEmpty()
-                ? String.format(Locale.ROOT, "No note reaches the danger band (%.0f %%) at the peak.", danger)
-                : String.format(Locale.ROOT, "%d note%s at or above the danger band (%.0f %%) at the peak, listed "
-                        + "first, highest first.", r.atRisk().size(), r.atRisk().size() == 1 ? "" : "s", danger));
-        totals.set(totalsText(r));
+        summary.set(r.riskSummary());
+        totals.set(r.totals().states().stream().map(TensionTotals.State::words).collect(Collectors.joining("\n")));
         stages.set(WireCheckText.stages(r));
         cautions.setAll(r.request().isPitchRaise() ? BuiltInData.cautions() : List.of());
         curves.overlays().put(OVERLAY_OWNER, overlays(r));
@@ -320,27 +312,6 @@ public final class WireCheckViewModel {
             list.add(CurveOverlay.of(PEAK, peak, CurveOverlay.Look.DOTTED));
         }
         return list;
-    }
-
-    /** @return present → target → peak, each in kN and lbf with its change from the present, one a line */
-    static String totalsText(WireCheckReport r) {
-        var t = r.totals();
-        return String.join("\n",
-                line("present", t.present(), Double.NaN, Double.NaN),
-                line("present wire at target", t.beforeAtTarget(), t.beforeAtTarget() - t.present(),
-                        100 * (t.beforeAtTarget() / t.present() - 1)),
-                line("replacement at target", t.afterAtTarget(), t.changeToTarget(), t.changeToTargetPct()),
-                line("at the overpull peak", t.peak(), t.changeToPeak(), t.changeToPeakPct()));
-    }
-
-    private static String line(String what, double n, double change, double pct) {
-        String s = String.format(Locale.ROOT, "%s: %.1f kN (%,.0f lbf)", what, n / 1e3,
-                UnitConversions.newtonsToLbf(n));
-        if (Double.isFinite(change)) {
-            s += String.format(Locale.ROOT, ", %+.1f kN (%+,.0f lbf, %+.1f %%)", change / 1e3,
-                    UnitConversions.newtonsToLbf(change), pct);
-        }
-        return s;
     }
 
     /** Writes the per-note results as CSV (DESIGN §5 columns) to a file the user chooses. */
@@ -445,23 +416,13 @@ public final class WireCheckViewModel {
         return DisplayFormat.decimals(a4, 1, 2);
     }
 
-    private static final Pattern LIMIT = Pattern.compile("\\s*([0-9]*[.,]?[0-9]+)\\s*(%|kn|n|lbf)\\s*");
-
-    /** Reads a stage limit: {@code 5 %}, {@code 10 kN}, {@code 9000 N} or {@code 2200 lbf}. */
-    static StageLimit stageLimit(String text, List<String> bad) {
-        Matcher m = LIMIT.matcher(text == null ? "" : text.toLowerCase(Locale.ROOT));
-        if (!m.matches() || !(Double.parseDouble(m.group(1).replace(',', '.')) > 0)) {
-            bad.add("stage limit: expected a percent of the present total or a force > 0, such as 5 %, 10 kN or "
-                    + "2200 lbf, was '" + (text == null ? "" : text.strip()) + "'");
+    /** @return what {@code value} gives, or null with its refusal added to {@code bad} */
+    private static <T> T refused(List<String> bad, Supplier<T> value) {
+        try {
+            return value.get();
+        } catch (InvalidInput e) {
+            bad.add(e.getMessage());
             return null;
         }
-        double v = Double.parseDouble(m.group(1).replace(',', '.'));
-        return switch (m.group(2)) {
-            case "%" -> StageLimit.percentOfTotal(v);
-            case "kn" -> StageLimit.kiloNewtons(v);
-            case "n" -> StageLimit.kiloNewtons(v / 1e3);
-            default -> StageLimit.kiloNewtons(UnitConversions.lbfToNewtons(v) / 1e3);
-        };
     }
-
 }

@@ -5,6 +5,7 @@ import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
 import org.scalewright.model.Checks;
+import org.scalewright.model.InvalidInput;
 
 /**
  * How far flat of its target pitch each note of a piano stands now, in cents (positive = flat,
@@ -41,6 +42,24 @@ public record PitchState(double uniformCents, SortedMap<Integer, Double> measure
     /** @return every note at its target pitch (no pitch raise) */
     public static PitchState atPitch() {
         return new PitchState(0, null);
+    }
+
+    /** How far flat (positive) or sharp (negative) a user may say a note stands, cents. */
+    public static final double MAX_CENTS = 1200;
+
+    /**
+     * Every note the same number of cents flat, as a user gave it.
+     *
+     * @param cents cents flat of the target (negative: sharp), -{@value #MAX_CENTS} to {@value #MAX_CENTS}
+     * @return the pitch state
+     * @throws InvalidInput outside that range; the message both front ends show
+     */
+    public static PitchState flatBy(double cents) {
+        if (!(Math.abs(cents) <= MAX_CENTS)) {
+            throw new InvalidInput("cents flat must be " + Checks.format(-MAX_CENTS) + " to " + Checks.format(MAX_CENTS)
+                    + ", was " + Checks.format(cents));
+        }
+        return uniform(cents);
     }
 
     /** @param cents how far flat every note stands, cents (negative: sharp) */
@@ -95,5 +114,19 @@ public record PitchState(double uniformCents, SortedMap<Integer, Double> measure
         int k1 = tail.firstKey();
         double t = (key - k0) / (double) (k1 - k0);
         return head.get(k0) + t * (tail.get(k1) - head.get(k0));
+    }
+
+    /**
+     * @return the state in words: {@code 30 cents flat on every note}, or the measured keys and
+     *         their range
+     */
+    public String describe() {
+        if (!isPerNote()) {
+            return Checks.format(uniformCents) + " cents flat on every note";
+        }
+        double lo = measured.values().stream().mapToDouble(Double::doubleValue).min().orElse(0);
+        double hi = measured.values().stream().mapToDouble(Double::doubleValue).max().orElse(0);
+        return String.format(java.util.Locale.ROOT, "cents flat measured on %d keys (%.1f to %.1f), interpolated "
+                + "between them", measured.size(), lo, hi);
     }
 }

@@ -82,9 +82,9 @@ public final class WireCheck {
         if (totals.changeToPeak() > limit) {
             reasons.add(String.format(Locale.ROOT,
                     "the total tension rises by %.1f kN (%,.0f lbf, %.1f %%) to the peak, more than the stage limit "
-                            + "of %s (%.1f kN)", totals.changeToPeak() / 1e3,
+                            + "of %s", totals.changeToPeak() / 1e3,
                     UnitConversions.newtonsToLbf(totals.changeToPeak()), totals.changeToPeakPct(),
-                    request.stageLimit().describe(), limit / 1e3));
+                    request.stageLimit().describe(limit)));
         }
         List<Integer> dangerAtTarget = notes.stream().filter(w -> w.breakPctAfter() >= danger)
                 .map(WireCheckNote::key).toList();

@@ -1,6 +1,7 @@
 package org.scalewright.design.wirecheck;
 
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 
 /**
@@ -43,5 +44,35 @@ public record WireCheckReport(WireCheckRequest request, List<WireCheckNote> note
     /** @return the conversion remarks worth showing (fell back to the nearest end of the list) */
     public List<WireCheckNote> conversionWarnings() {
         return byKey().stream().filter(n -> n.wireChange().remark().startsWith("no ")).toList();
+    }
+
+    /**
+     * @return how many notes reach the danger band at the peak, in one sentence:
+     *         {@code 5 notes at or above the danger band (70 %) at the peak, listed first, highest first.}
+     */
+    public String riskSummary() {
+        double danger = request.settings().bands().danger();
+        int n = atRisk().size();
+        return n == 0 ? String.format(Locale.ROOT, "No note reaches the danger band (%.0f %%) at the peak.", danger)
+                : String.format(Locale.ROOT, "%d note%s at or above the danger band (%.0f %%) at the peak, listed "
+                        + "first, highest first.", n, n == 1 ? "" : "s", danger);
+    }
+
+    /** @return the advice on raising in stages, in words */
+    public StageWords stageWords() {
+        return StageWords.of(this);
+    }
+
+    /**
+     * @return the two strength tables compared in one sentence, or "" when the replacement is judged
+     *         by the present table
+     */
+    public String tablesSummary() {
+        if (tables.first().name().equals(tables.second().name())) {
+            return "";
+        }
+        return String.format(Locale.ROOT, "Strength tables compared on the replacement wire: the replacement table "
+                + "is %+.1f to %+.1f %% stronger than the present one over these diameters.",
+                tables.minSecondStrongerPct(), tables.maxSecondStrongerPct());
     }
 }

@@ -1,5 +1,7 @@
 package org.scalewright.design.wirecheck;
 
+import org.scalewright.model.Checks;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
@@ -48,6 +50,20 @@ public record WireCheckRequest(Scale scale, AnalysisSettings settings, StrengthT
         if (!(overpullPct >= 0 && overpullPct <= 100)) {
             throw new IllegalArgumentException("overpull must be 0 to 100 %, was " + overpullPct);
         }
+    }
+
+    /**
+     * Checks an overpull a user gave.
+     *
+     * @param pct the overpull, % of how flat a note stands, 0 to 100
+     * @return {@code pct}
+     * @throws InvalidInput outside that range; the message both front ends show
+     */
+    public static double overpull(double pct) {
+        if (!(pct >= 0 && pct <= 100)) {
+            throw new InvalidInput("overpull must be 0 to 100 %, was " + Checks.format(pct));
+        }
+        return pct;
     }
 
     /** @return a request with no replacement, no conversion, the scale's own pitch and no pitch raise */

@@ -167,4 +167,20 @@ class WireCheckViewModelTest {
         check.select(check.rows().get(0));
         assertEquals(check.rows().get(0).key(), vm.session().selectedKeyProperty().get());
     }
+
+    @Test
+    void theStageLimitAndTheTargetA4AreReadByTheirOwnHomes() {
+        check.centsFlatProperty().set("40");
+        check.stageLimitProperty().set("7,5 kN");
+        assertTrue(check.check(), check.problemProperty().get());
+        assertEquals(7500, check.reportProperty().get().request().stageLimit().newtons(0), 1e-9);
+        check.stageLimitProperty().set("lots");
+        check.targetA4Property().set("1200");
+        assertFalse(check.check());
+        // the same messages as the command line's --stage-above and --a4 (StageLimit.parse, PitchStandard.of)
+        assertTrue(check.problemProperty().get().contains("pitch standard A4 must be 300 to 600 Hz, was 1200"),
+                check.problemProperty().get());
+        assertTrue(check.problemProperty().get().contains("stage limit: expected a percent of the present total or "
+                + "a force > 0, such as 5%, 10kN or 2200lbf, was 'lots'"), check.problemProperty().get());
+    }
 }

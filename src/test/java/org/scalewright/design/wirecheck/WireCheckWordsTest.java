@@ -1,0 +1,120 @@
+package org.scalewright.design.wirecheck;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.scalewright.model.InvalidInput;
+import org.scalewright.model.UnitConversions;
+
+/**
+ * The one wording of a wire check's results (stage advice, totals, the at-risk summary) and the
+ * one reading of its inputs (stage limit, cents flat, overpull), shared by both front ends.
+ */
+class WireCheckWordsTest {
+    private static final WireCheckRequest BASE = WireCheckRequest.of(WireCheckTest.testScale(),
+            WireCheckTest.settings(WireCheckTest.SLOPED)).withOverpull(25);
+
+    @Test
+    void aSmallRaiseSaysStagingIsNotNeededAndNamesTheLimit() {
+        WireCheckReport r = WireCheck.run(BASE.withFlat(PitchState.uniform(5)));
+        StageWords w = r.stageWords();
+        assertEquals("Raise in stages: not needed by these figures (no peak in the danger band; total tension change "
+                + "within 5 % of the present total).", w.headline());
+        assertTrue(w.reasons().isEmpty() && w.passes().isEmpty() && w.plan().isEmpty() && w.closing().isEmpty());
+    }
+
+    @Test
+    void aLargeRaiseGivesReasonsAPlanAndOneLinePerPass() {
+        WireCheckReport r = WireCheck.run(BASE.withFlat(PitchState.uniform(100)));
+        StageWords w = r.stageWords();
+        StageAdvice a = r.stages();
+        assertEquals("Raise in stages: advised, because", w.headline());
+        assertEquals(a.reasons(), w.reasons().subList(0, a.reasons().size()));
+        int n = a.stages().size();
+        assertEquals("Plan: " + n + " passes, each raising every note by 1/" + n + " of how flat it is, tuned 25 % "
+                + "sharp of that step:", w.plan());
+        assertEquals(n, w.passes().size());
+        RaiseStage first = a.stages().get(0);
+        assertTrue(w.passes().get(0).startsWith("pass 1: to " + Math.round(100 * first.endFraction())
+                + " % of the raise; total "), w.passes().get(0));
+        assertTrue(w.passes().get(0).endsWith("key " + first.maxPeakKey() + " "
+                + org.scalewright.model.KeyNames.name(first.maxPeakKey())), w.passes().get(0));
+        assertEquals("Each pass stays within the stage limit of 5 % of the present total ("
+                + String.format(java.util.Locale.ROOT, "%.1f", a.limitNewtons() / 1e3) + " kN) and under the danger "
+                + "band at its peak.", w.closing());
+        assertEquals("7.5 kN", StageLimit.kiloNewtons(7.5).describe(7500));
+    }
+
+    @Test
+    void keysInTheDangerBandAtTheTargetAreNamedAsBeyondStaging() {
+        WireCheckReport r = WireCheck.run(WireCheckRequest.of(WireCheckTest.testScale(),
+                        WireCheckTest.settings(WireCheckTest.SLOPED))
+                .withReplacement(WireCheckTest.SLOPED.scaled(0.6, "much weaker")).withFlat(PitchState.uniform(20))
+                .withOverpull(25));
+        List<Integer> keys = r.stages().dangerAtTarget();
+        String last = r.stageWords().reasons().get(r.stageWords().reasons().size() - 1);
+        assertTrue(last.startsWith(StageWords.keyList(keys)), last);
+        assertTrue(last.contains("staging cannot help " + (keys.size() == 1 ? "it" : "them")), last);
+        assertEquals("key 49 A4", StageWords.keyList(List.of(49)));
+        assertEquals("keys 1 A0, 88 C8", StageWords.keyList(List.of(1, 88)));
+    }
+
+    @Test
+    void totalsInKiloNewtonsAndPoundsForceWithTheChangeFromThePresent() {
+        TensionTotals t = new TensionTotals(200_000, 205_000, 210_000, 220_000);
+        List<TensionTotals.State> states = t.states();
+        assertEquals(4, states.size());
+        assertEquals("present (present wire, present pitch): 200.0 kN (44,962 lbf)", states.get(0).words());
+        // 10 kN = 2248.09 lbf (NIST SP 811: 1 lbf = 4.4482216152605 N)
+        assertEquals(2248.09, UnitConversions.newtonsToLbf(10_000), 0.005);
+        assertEquals("replacement at target: 210.0 kN (47,210 lbf), +10.0 kN (+2,248 lbf, +5.0 %)",
+                states.get(2).words());
+        assertEquals(10.0, states.get(3).changePct(), 1e-12);
+    }
+
+    @Test
+    void theAtRiskSummaryCountsTheNotesAtThePeak() {
+        WireCheckReport calm = WireCheck.run(BASE.withFlat(PitchState.uniform(5)));
+        assertEquals("No note reaches the danger band (70 %) at the peak.", calm.riskSummary());
+        WireCheckReport risky = WireCheck.run(WireCheckRequest.of(WireCheckTest.testScale(),
+                        WireCheckTest.settings(WireCheckTest.SLOPED))
+                .withReplacement(WireCheckTest.SLOPED.scaled(0.6, "much weaker")).withFlat(PitchState.uniform(20)));
+        int n = risky.atRisk().size();
+        assertTrue(n > 1);
+        assertEquals(n + " notes at or above the danger band (70 %) at the peak, listed first, highest first.",
+                risky.riskSummary());
+        assertTrue(risky.tablesSummary().startsWith("Strength tables compared on the replacement wire: the "
+                + "replacement table is -40.0 to -40.0 % stronger"), risky.tablesSummary());
+        assertEquals("", calm.tablesSummary());
+    }
+
+    @Test
+    void stageLimitIsReadAsAPercentOrAForceWithADecimalPointOrComma() {
+        assertEquals(StageLimit.percentOfTotal(5), StageLimit.parse("5%"));
+        assertEquals(StageLimit.percentOfTotal(7.5), StageLimit.parse(" 7,5 % "));
+        assertEquals(StageLimit.kiloNewtons(10), StageLimit.parse("10kN"));
+        assertEquals(StageLimit.kiloNewtons(9.5), StageLimit.parse("9500 N"));
+        assertEquals(StageLimit.kiloNewtons(12.5), StageLimit.parse("12,5 KN"));
+        // 2200 lbf × 4.4482216152605 N/lbf (NIST SP 811)
+        assertEquals(2200 * 4.4482216152605, StageLimit.parse("2200lbf").newtons(0), 1e-9);
+        for (String bad : new String[] {"lots", "0%", "5", "-3kN", "", "1,2,3kN"}) {
+            InvalidInput e = assertThrows(InvalidInput.class, () -> StageLimit.parse(bad), bad);
+            assertEquals("stage limit: expected a percent of the present total or a force > 0, such as 5%, 10kN "
+                    + "or 2200lbf, was '" + bad.strip() + "'", e.getMessage());
+        }
+    }
+
+    @Test
+    void centsFlatAndOverpullAsAUserGivesThem() {
+        assertEquals(PitchState.uniform(-1200), PitchState.flatBy(-1200));
+        assertEquals("cents flat must be -1200 to 1200, was 5000",
+                assertThrows(InvalidInput.class, () -> PitchState.flatBy(5000)).getMessage());
+        assertEquals(100.0, WireCheckRequest.overpull(100));
+        assertEquals("overpull must be 0 to 100 %, was 150",
+                assertThrows(InvalidInput.class, () -> WireCheckRequest.overpull(150)).getMessage());
+        assertEquals("30 cents flat on every note", PitchState.uniform(30).describe());
+    }
+}
