@@ -21,8 +21,8 @@ final class StatusView {
         totals.textProperty().bind(model.totalsProperty());
         Label message = new Label();
         message.setId("status-message");
-        message.textProperty().bind(model.session().messageProperty());
-        model.session().messageIsProblemProperty().addListener((o, a, problem) -> {
+        message.textProperty().bind(model.messageProperty());
+        model.messageIsProblemProperty().addListener((o, a, problem) -> {
             message.getStyleClass().remove("problem");
             if (problem) {
                 message.getStyleClass().add("problem");

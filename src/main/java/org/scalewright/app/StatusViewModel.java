@@ -5,6 +5,8 @@ import java.util.stream.Collectors;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.SimpleBooleanProperty;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
@@ -66,5 +68,15 @@ final class StatusViewModel {
         return String.format(Locale.ROOT, "%s %d–%d (%s–%s): %s, %d strings", name, s.firstKey(), s.lastKey(),
                 KeyNames.name(s.firstKey()), KeyNames.name(s.lastKey()), DisplayFormat.total(s.tension(), u),
                 s.strings());
+    }
+
+    /** @return the last message of the window (what was done, or what went wrong) */
+    ReadOnlyStringProperty messageProperty() {
+        return session.messageProperty();
+    }
+
+    /** @return true when the last message is a problem */
+    ReadOnlyBooleanProperty messageIsProblemProperty() {
+        return session.messageIsProblemProperty();
     }
 }

@@ -29,9 +29,7 @@ import javafx.stage.Stage;
 import org.scalewright.app.curves.CurvesView;
 import org.scalewright.app.export.ExportMenu;
 import org.scalewright.app.export.ExportViewModel;
-import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.FxPrompts;
-import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.table.FlagsView;
 import org.scalewright.app.table.NoteColumn;
@@ -131,7 +129,6 @@ final class WorkstationView {
     }
 
     private MenuBar menuBar() {
-        ScaleSession s = model.session();
         MenuItem open = item("Open sheet…", "menu-open", new KeyCodeCombination(KeyCode.O, KeyCombination.SHORTCUT_DOWN),
                 model::open);
         MenuItem save = item("Save", "menu-save", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN),
@@ -145,21 +142,21 @@ final class WorkstationView {
                     }
                 });
         Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(),
-                ExportMenu.build(ExportViewModel.of(model.session(), model.prompts())), new SeparatorMenuItem(), quit);
+                ExportMenu.build(model.exports()), new SeparatorMenuItem(), quit);
 
         MenuItem undo = item("Undo", "menu-undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN),
-                s::undo);
-        undo.textProperty().bind(Bindings.when(s.canUndoProperty())
-                .then(Bindings.concat("Undo ", s.undoTextProperty())).otherwise("Undo"));
-        undo.disableProperty().bind(s.canUndoProperty().not());
+                model::undo);
+        undo.textProperty().bind(Bindings.when(model.canUndoProperty())
+                .then(Bindings.concat("Undo ", model.undoTextProperty())).otherwise("Undo"));
+        undo.disableProperty().bind(model.canUndoProperty().not());
         MenuItem redo = item("Redo", "menu-redo", new KeyCodeCombination(KeyCode.Y, KeyCombination.SHORTCUT_DOWN),
-                s::redo);
-        redo.textProperty().bind(Bindings.when(s.canRedoProperty())
-                .then(Bindings.concat("Redo ", s.redoTextProperty())).otherwise("Redo"));
-        redo.disableProperty().bind(s.canRedoProperty().not());
+                model::redo);
+        redo.textProperty().bind(Bindings.when(model.canRedoProperty())
+                .then(Bindings.concat("Redo ", model.redoTextProperty())).otherwise("Redo"));
+        redo.disableProperty().bind(model.canRedoProperty().not());
         MenuItem redoAlt = item("Redo (Ctrl+Shift+Z)", "menu-redo-alt", new KeyCodeCombination(KeyCode.Z,
-                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), s::redo);
-        redoAlt.disableProperty().bind(s.canRedoProperty().not());
+                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), model::redo);
+        redoAlt.disableProperty().bind(model.canRedoProperty().not());
         redoAlt.setVisible(false);
         Menu edit = new Menu("Edit", null, undo, redo, redoAlt);
 
@@ -170,9 +167,9 @@ final class WorkstationView {
         for (WorkstationViewModel.UnitChoice c : WorkstationViewModel.UnitChoice.values()) {
             RadioMenuItem r = new RadioMenuItem(c.toString());
             r.setToggleGroup(units);
-            r.setSelected(s.units().equals(c.units()));
+            r.setSelected(model.unitsProperty().get().equals(c.units()));
             r.setOnAction(e -> model.setUnits(c));
-            s.unitsProperty().addListener((o, a, b) -> r.setSelected(b.equals(c.units())));
+            model.unitsProperty().addListener((o, a, b) -> r.setSelected(b.equals(c.units())));
             unitsMenu.getItems().add(r);
         }
         CheckMenuItem sections = new CheckMenuItem("Section totals in the status line");
@@ -190,20 +187,18 @@ final class WorkstationView {
     }
 
     private MenuItem[] referenceItems() {
-        ScaleSession s = model.session();
         MenuItem current = item("Use the working scale as it is now", "menu-ref-current", null,
-                s::useCurrentAsReference);
+                model::useCurrentAsReference);
         MenuItem open = item("Open reference sheet…", "menu-ref-open", null, model::openReference);
         CheckMenuItem show = new CheckMenuItem("Draw the reference on the curves");
-        show.selectedProperty().bindBidirectional(s.showReferenceProperty());
+        show.selectedProperty().bindBidirectional(model.showReferenceProperty());
         CheckMenuItem diff = new CheckMenuItem("Differences to the reference in the table");
         diff.setId("menu-ref-diff");
-        diff.selectedProperty().bindBidirectional(s.showDifferencesProperty());
+        diff.selectedProperty().bindBidirectional(model.showDifferencesProperty());
         return new MenuItem[] {current, open, new SeparatorMenuItem(), show, diff};
     }
 
     private MenuItem[] strengthItems() {
-        ScaleSession s = model.session();
         ToggleGroup g = new ToggleGroup();
         RadioMenuItem min = new RadioMenuItem("ASTM A228 minimum (default)");
         RadioMenuItem max = new RadioMenuItem("ASTM A228 maximum");
@@ -212,12 +207,12 @@ final class WorkstationView {
             r.setToggleGroup(g);
         }
         Runnable sync = () -> {
-            StrengthChoice c = s.strengthProperty().get();
+            StrengthChoice c = model.strengthProperty().get();
             min.setSelected(c.file().isEmpty() && c.table() == StrengthChoice.minimum().table());
             max.setSelected(c.file().isEmpty() && c.table() == StrengthChoice.maximum().table());
             maker.setSelected(c.file().isPresent());
         };
-        s.strengthProperty().addListener((o, a, b) -> sync.run());
+        model.strengthProperty().addListener((o, a, b) -> sync.run());
         min.setOnAction(e -> model.useBuiltInMinimum());
         max.setOnAction(e -> model.useBuiltInMaximum());
         // a cancelled or failed maker's table leaves the previous choice selected
@@ -230,13 +225,12 @@ final class WorkstationView {
     }
 
     private ToolBar toolBar() {
-        ScaleSession s = model.session();
         ChoiceBox<WorkstationViewModel.UnitChoice> units = new ChoiceBox<>();
         units.setId("units-choice");
         units.getItems().setAll(WorkstationViewModel.UnitChoice.values());
         units.setValue(WorkstationViewModel.UnitChoice.METRIC);
         units.setOnAction(e -> model.setUnits(units.getValue()));
-        s.unitsProperty().addListener((o, a, b) -> {
+        model.unitsProperty().addListener((o, a, b) -> {
             for (var c : WorkstationViewModel.UnitChoice.values()) {
                 if (c.units().equals(b)) {
                     units.setValue(c);
@@ -248,16 +242,16 @@ final class WorkstationView {
         TextField a4 = new TextField();
         a4.setId("a4-field");
         a4.setPrefColumnCount(5);
-        Runnable showA4 = () -> a4.setText(DisplayFormat.decimals(s.scale().pitch().a4(), 1, 2));
+        Runnable showA4 = () -> a4.setText(model.a4Text());
         showA4.run();
-        s.scaleProperty().addListener((o, a, b) -> showA4.run());
+        model.scaleProperty().addListener((o, a, b) -> showA4.run());
         a4.setOnAction(e -> {
             if (!model.setA4(a4.getText())) {
                 showA4.run();
             }
         });
         a4.focusedProperty().addListener((o, was, is) -> {
-            if (!is && !a4.getText().equals(DisplayFormat.decimals(s.scale().pitch().a4(), 1, 2))
+            if (!is && !a4.getText().equals(model.a4Text())
                     && !model.setA4(a4.getText())) {
                 showA4.run();
             }
@@ -266,14 +260,14 @@ final class WorkstationView {
 
         MenuButton strength = new MenuButton();
         strength.setId("strength-button");
-        strength.textProperty().bind(Bindings.createStringBinding(() -> s.strengthProperty().get().label(),
-                s.strengthProperty()));
+        strength.textProperty().bind(Bindings.createStringBinding(() -> model.strengthProperty().get().label(),
+                model.strengthProperty()));
         strength.getItems().setAll(strengthItems());
         strength.setTooltip(new Tooltip("breaking-strength table the percent of breaking strength is taken against"));
 
         MenuButton reference = new MenuButton();
         reference.setId("reference-button");
-        reference.textProperty().bind(s.referenceNameProperty());
+        reference.textProperty().bind(model.referenceNameProperty());
         reference.getItems().setAll(referenceItems());
         reference.setTooltip(new Tooltip("the reference scale, drawn as a wide pale line under the working scale"));
 
@@ -309,6 +303,6 @@ final class WorkstationView {
 
     /** @return the working scale shown (for tests) */
     Scale scale() {
-        return model.session().scale();
+        return model.scaleProperty().get();
     }
 }

@@ -5,14 +5,21 @@ import java.nio.file.Path;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
 import org.scalewright.app.curves.CurvesViewModel;
+import org.scalewright.app.export.ExportViewModel;
 import org.scalewright.app.session.CsvFileNames;
+import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.table.FlagsViewModel;
 import org.scalewright.app.table.NoteTableViewModel;
-import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.SheetProblem;
@@ -21,6 +28,7 @@ import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.ForceUnit;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
+import org.scalewright.model.Scale;
 import org.scalewright.physics.StrengthTable;
 
 /**
@@ -95,6 +103,71 @@ public final class WorkstationViewModel {
 
     StatusViewModel status() {
         return status;
+    }
+
+    // ---- what the window's menus and tool bar show, from the session ----
+
+    void undo() {
+        session.undo();
+    }
+
+    void redo() {
+        session.redo();
+    }
+
+    ReadOnlyBooleanProperty canUndoProperty() {
+        return session.canUndoProperty();
+    }
+
+    ReadOnlyBooleanProperty canRedoProperty() {
+        return session.canRedoProperty();
+    }
+
+    /** @return what Undo would take back, in words */
+    ReadOnlyStringProperty undoTextProperty() {
+        return session.undoTextProperty();
+    }
+
+    ReadOnlyStringProperty redoTextProperty() {
+        return session.redoTextProperty();
+    }
+
+    ObjectProperty<DisplayUnits> unitsProperty() {
+        return session.unitsProperty();
+    }
+
+    void useCurrentAsReference() {
+        session.useCurrentAsReference();
+    }
+
+    BooleanProperty showReferenceProperty() {
+        return session.showReferenceProperty();
+    }
+
+    BooleanProperty showDifferencesProperty() {
+        return session.showDifferencesProperty();
+    }
+
+    ReadOnlyStringProperty referenceNameProperty() {
+        return session.referenceNameProperty();
+    }
+
+    ReadOnlyObjectProperty<StrengthChoice> strengthProperty() {
+        return session.strengthProperty();
+    }
+
+    ReadOnlyObjectProperty<Scale> scaleProperty() {
+        return session.scaleProperty();
+    }
+
+    /** @return the working scale's pitch standard as shown in the A4 field: {@code 440.0} */
+    String a4Text() {
+        return DisplayFormat.decimals(session.scale().pitch().a4(), 1, 2);
+    }
+
+    /** @return the exports of this window, shared by its File menu and its Exports tab */
+    ExportViewModel exports() {
+        return ExportViewModel.of(session, prompts);
     }
 
     StringBinding windowTitleProperty() {

@@ -168,4 +168,12 @@ class LayerRulesTest {
         return DescribedPredicate.describe("types of " + pkg + " that are not private helpers",
                 c -> c.getPackageName().startsWith(pkg) && !c.getModifiers().contains(JavaModifier.PRIVATE));
     }
+
+    @Test
+    void aViewTalksToItsViewModelNotToTheSession() {
+        noClasses().that().haveSimpleNameEndingWith("View")
+                .should().callMethodWhere(DescribedPredicate.describe("a method of ScaleSession",
+                        call -> call.getTargetOwner().getName().equals("org.scalewright.app.session.ScaleSession")))
+                .check(classes);
+    }
 }

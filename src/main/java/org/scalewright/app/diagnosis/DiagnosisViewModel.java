@@ -21,7 +21,7 @@ import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.tool.ToolResult;
-import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.diagnosis.DiagnosedNote;
 import org.scalewright.design.diagnosis.DiagnosisReport;

@@ -19,7 +19,7 @@ import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
-import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.chart.TargetMarks;
 import org.scalewright.design.SmoothTrend;
 import org.scalewright.design.rescale.ControlPoint;

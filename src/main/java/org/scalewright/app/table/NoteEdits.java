@@ -3,7 +3,7 @@ package org.scalewright.app.table;
 import java.util.Locale;
 import java.util.Optional;
 import org.scalewright.app.session.DisplayFormat;
-import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.InvalidInput;

@@ -26,7 +26,7 @@ import org.scalewright.app.session.CsvFileNames;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.UserPrompts;
-import org.scalewright.app.tool.TypedEntry;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.wirecheck.PitchState;
 import org.scalewright.design.wirecheck.SizeRounding;

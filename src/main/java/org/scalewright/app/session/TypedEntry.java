@@ -1,4 +1,4 @@
-package org.scalewright.app.tool;
+package org.scalewright.app.session;
 
 import java.util.List;
 import java.util.Locale;

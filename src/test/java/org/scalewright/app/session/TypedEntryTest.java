@@ -1,4 +1,4 @@
-package org.scalewright.app.tool;
+package org.scalewright.app.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
