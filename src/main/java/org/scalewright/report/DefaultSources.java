@@ -39,6 +39,7 @@ public final class DefaultSources {
         l.add("Pitch standard A4 = 440 Hz unless the sheet or the user sets another: ISO 16:1975.");
         String name = settings.strength().name();
         l.add("Breaking strength - " + name + ": " + String.join(" ", settings.strength().sourceNotes().stream()
+                .takeWhile(n -> !n.startsWith("How this table was obtained"))
                 .filter(n -> !n.strip().equals(name.strip())).toList()));
         for (String m : materials()) {
             l.add(m);

@@ -242,9 +242,9 @@ class ScaleAnalyzerTest {
     }
 
     @Test
-    @DisplayName("implausible but legal values are analysed and flagged: 5 mm plain wire, 4 m length, > 100 %")
+    @DisplayName("implausible but legal values are analysed and flagged: 7 mm plain wire, 4 m length, > 100 %")
     void implausibleValues() {
-        Note thick = plain(40, 0.62, 5e-3);
+        Note thick = plain(40, 0.62, 7e-3);
         Note longString = note(10, 1, 4.0, 1.2e-3, Wrap.single(0.8e-3, WrapMetal.COPPER), null, "");
         Note hot = plain(60, 0.40, 0.9e-3);
         hot = hot.withPitch(OptionalDouble.of(pitchForPct(hot, 120)), 0);
@@ -252,7 +252,7 @@ class ScaleAnalyzerTest {
                 null), S);
         NoteResult t = a.result(40).orElseThrow();
         assertTrue(has(t, FlagKind.IMPLAUSIBLE));
-        assertTrue(has(t, FlagKind.OUTSIDE_STRENGTH_TABLE), "5 mm is beyond the ASTM table's 0.125 in");
+        assertTrue(has(t, FlagKind.OUTSIDE_STRENGTH_TABLE), "7 mm is beyond the ASTM table's 0.250 in (6.35 mm)");
         assertTrue(Double.isFinite(t.breakPct()) && t.tension() > 0);
         NoteResult l = a.result(10).orElseThrow();
         assertTrue(l.flags().stream().anyMatch(f -> f.kind() == FlagKind.IMPLAUSIBLE && f.detail().contains("4000 mm")),
