@@ -6,12 +6,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.scalewright.design.rescale.KeyChange;
+import org.scalewright.design.rescale.PlainPlanner;
 import org.scalewright.design.rescale.PlanChecks;
 import org.scalewright.design.rescale.PlanNotPossible;
 import org.scalewright.design.rescale.Proposal;
 import org.scalewright.design.rescale.TargetCurve;
 import org.scalewright.design.rescale.TargetQuantity;
 import org.scalewright.design.rescale.TargetSpec;
+import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.model.KeyRange;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
@@ -35,13 +37,18 @@ abstract class PlanCommand implements Callable<Integer> {
     @Mixin
     PlanTargetOptions targetOptions;
 
-    @Option(names = "--keys", required = true, paramLabel = "A-B", converter = KeyRangeConverter.class,
-            description = "the keys to plan: key numbers or note names, e.g. 29-88 or C#3-C8")
-    KeyRange keys;
+    @Mixin
+    KeysOption range;
 
     @Option(names = "--max-break", paramLabel = "PCT",
             description = "maximum percent of breaking strength for every planned string (default: the danger band, 70)")
     Double maxBreak;
+
+    @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
+            description = "cost of each change of wire between neighbouring keys: of plain size, in squared fractions "
+                    + "of the target (0.002 weighs as much as one key 4.5 %% off the target); of core when cores are "
+                    + "chosen, in squared log-B units (default: ${DEFAULT-VALUE})")
+    double changeCost;
 
     @Option(names = "--step-cost", paramLabel = "X", defaultValue = "1",
             description = "cost per unit fraction a neighbour step exceeds the step limit (1: 1 %% over weighs as "
@@ -54,9 +61,36 @@ abstract class PlanCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** What the target gives; a command that offers a choice sets it in {@link #checkOwnOptions()}. */
+    TargetQuantity quantity = TargetQuantity.TENSION;
+
+    private final boolean wound;
+    private final String strings;
+    private final String otherKindAdvice;
+    private final String planWords;
+
+    /**
+     * @param wound           true when the command plans wound strings, false for plain wire
+     * @param strings         the strings it plans, in words: {@code plain-wire strings}
+     * @param otherKindAdvice where the other kind is planned: {@code wound strings are planned with plan-wound}
+     * @param planWords       what it makes: {@code plain-wire plan}
+     */
+    PlanCommand(boolean wound, String strings, String otherKindAdvice, String planWords) {
+        this.wound = wound;
+        this.strings = strings;
+        this.otherKindAdvice = otherKindAdvice;
+        this.planWords = planWords;
+    }
+
+    /** @return the keys asked for */
+    final KeyRange keys() {
+        return range.keys;
+    }
+
     @Override
     public final Integer call() throws Exception {
         targetOptions.check();
+        OptionChecks.named("--change-cost", () -> PlanChecks.changeCost(changeCost));
         OptionChecks.named("--step-cost", () -> PlanChecks.stepCost(stepCost));
         checkOwnOptions();
         Scale scale = inputs.scale();
@@ -64,23 +98,25 @@ abstract class PlanCommand implements Callable<Integer> {
         double max = OptionChecks.named("--max-break",
                 () -> PlanChecks.maxBreakPct(maxBreak == null ? settings.bands().danger() : maxBreak));
         ScaleAnalysis present = ScaleAnalyzer.analyze(scale, settings);
-        List<NoteResult> planned = plannedKeys(present);
+        KeyRange keys = keys();
+        List<NoteResult> planned = wound ? WoundPlanner.plannedKeys(present, keys) : PlainPlanner.plannedKeys(present, keys);
         if (planned.isEmpty()) {
-            throw new UserError("keys " + keys + " hold no " + kindWords() + " in " + inputs.scaleFile.getFileName()
-                    + " (" + otherKindAdvice() + ")");
+            throw new UserError("keys " + keys + " hold no " + strings + " in " + inputs.scaleFile.getFileName()
+                    + " (" + otherKindAdvice + ")");
         }
-        TargetSpec recipe = targetOptions.spec(quantity(), planned.get(0).key(), planned.get(planned.size() - 1).key());
+        TargetSpec recipe = targetOptions.spec(quantity, planned.get(0).key(), planned.get(planned.size() - 1).key());
         Proposal p;
         try {
-            TargetCurve target = target(present, recipe, targetOptions.perSection());
+            TargetCurve target = wound ? WoundPlanner.target(present, keys, recipe, quantity, targetOptions.perSection())
+                    : PlainPlanner.target(present, keys, recipe, targetOptions.perSection());
             p = plan(present, target, max);
         } catch (PlanNotPossible e) {
-            throw new UserError("no " + planWords() + " for keys " + keys + " meets the constraints:\n"
+            throw new UserError("no " + planWords + " for keys " + keys + " meets the constraints:\n"
                     + String.join("\n", e.reasons()));
         }
         PrintWriter w = spec.commandLine().getOut();
         Scale s = p.before().scale();
-        w.println((s.title().isEmpty() ? "Scale" : s.title()) + ": " + planWords() + " for keys " + keys + ", A4 = "
+        w.println((s.title().isEmpty() ? "Scale" : s.title()) + ": " + planWords + " for keys " + keys + ", A4 = "
                 + Formats.trim(s.pitch().a4()) + " Hz");
         w.println("target: " + p.target().description()
                 + (p.quantity() == TargetQuantity.BREAK_PCT ? " (core percent of breaking strength)" : ""));
@@ -108,24 +144,8 @@ abstract class PlanCommand implements Callable<Integer> {
     /** Checks the options of this command before any file is read; a bad value is an InvalidInput or UserError. */
     abstract void checkOwnOptions();
 
-    /** @return what the target gives */
-    abstract TargetQuantity quantity();
-
-    /** @return the present results of the keys this command plans */
-    abstract List<NoteResult> plannedKeys(ScaleAnalysis present);
-
-    abstract TargetCurve target(ScaleAnalysis present, TargetSpec recipe, boolean perSection);
-
+    /** @return the proposal for the planned keys of {@link #keys()} to the target */
     abstract Proposal plan(ScaleAnalysis present, TargetCurve target, double maxBreakPct);
-
-    /** @return the strings this command plans: {@code plain-wire strings}, {@code wound strings} */
-    abstract String kindWords();
-
-    /** @return {@code wound strings are planned with plan-wound} */
-    abstract String otherKindAdvice();
-
-    /** @return {@code plain-wire plan}, {@code wound-string design} */
-    abstract String planWords();
 
     /** Prints the lines that echo this command's wire and cost options, after the target line. */
     abstract void printOptions(Proposal p, PrintWriter w);

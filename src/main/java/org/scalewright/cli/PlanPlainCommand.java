@@ -8,12 +8,9 @@ import org.scalewright.design.rescale.PlainPlanner;
 import org.scalewright.design.rescale.PlanChecks;
 import org.scalewright.design.rescale.Proposal;
 import org.scalewright.design.rescale.TargetCurve;
-import org.scalewright.design.rescale.TargetQuantity;
-import org.scalewright.design.rescale.TargetSpec;
 import org.scalewright.design.rescale.WireLists;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.model.CoreWire;
-import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -30,53 +27,21 @@ public final class PlanPlainCommand extends PlanCommand {
                     + "size numbers and diameters, e.g. 13,13.5,14 or 0.8mm,0.825mm (default: ${DEFAULT-VALUE})")
     String sizes;
 
-    @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
-            description = "cost of each change of size, in squared fractions of the target (0.002 weighs as much as "
-                    + "one key 4.5 %% off the target; default: ${DEFAULT-VALUE})")
-    double changeCost;
-
     private List<CoreWire> wires;
+
+    public PlanPlainCommand() {
+        super(false, "plain-wire strings", "wound strings are planned with plan-wound", "plain-wire plan");
+    }
 
     @Override
     void checkOwnOptions() {
-        OptionChecks.named("--change-cost", () -> PlanChecks.changeCost(changeCost));
         wires = OptionChecks.named("--sizes",
                 () -> WireLists.plainWire(sizes, BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire()));
     }
 
     @Override
-    TargetQuantity quantity() {
-        return TargetQuantity.TENSION;
-    }
-
-    @Override
-    List<NoteResult> plannedKeys(ScaleAnalysis present) {
-        return PlainPlanner.plannedKeys(present, keys);
-    }
-
-    @Override
-    TargetCurve target(ScaleAnalysis present, TargetSpec recipe, boolean perSection) {
-        return PlainPlanner.target(present, keys, recipe, perSection);
-    }
-
-    @Override
     Proposal plan(ScaleAnalysis present, TargetCurve target, double maxBreakPct) {
-        return PlainPlanner.plan(present, keys, target, new PlainPlanOptions(wires, maxBreakPct, changeCost, stepCost));
-    }
-
-    @Override
-    String kindWords() {
-        return "plain-wire strings";
-    }
-
-    @Override
-    String otherKindAdvice() {
-        return "wound strings are planned with plan-wound";
-    }
-
-    @Override
-    String planWords() {
-        return "plain-wire plan";
+        return PlainPlanner.plan(present, keys(), target, new PlainPlanOptions(wires, maxBreakPct, changeCost, stepCost));
     }
 
     @Override

@@ -9,7 +9,6 @@ import org.scalewright.design.rescale.PlanChecks;
 import org.scalewright.design.rescale.Proposal;
 import org.scalewright.design.rescale.TargetCurve;
 import org.scalewright.design.rescale.TargetQuantity;
-import org.scalewright.design.rescale.TargetSpec;
 import org.scalewright.design.rescale.WireLists;
 import org.scalewright.design.rescale.WoundPlanOptions;
 import org.scalewright.design.rescale.WoundPlanner;
@@ -63,20 +62,18 @@ public final class PlanWoundCommand extends PlanCommand {
                     + "toward the treble, B kept smooth), e.g. 1.0,1.05,1.1 (default: ${DEFAULT-VALUE})")
     String cores;
 
-    @Option(names = "--change-cost", paramLabel = "X", defaultValue = "0.002",
-            description = "cost of each change of core when cores are chosen, in squared log-B units (default: "
-                    + "${DEFAULT-VALUE})")
-    double changeCost;
-
     @Option(names = "--join-break", paramLabel = "N", defaultValue = "0",
             description = "join the break: the target runs on continuously through each change of section, and the "
                     + "cores of the N keys either side are chosen (0.025 mm steps, or --cores) for a smooth B "
                     + "(default: ${DEFAULT-VALUE} = off, at most " + PlanChecks.MAX_JOIN_KEYS + ")")
     int joinBreak;
 
-    private TargetQuantity quantity;
     private WrapWires wraps;
     private List<Double> coreList;
+
+    public PlanWoundCommand() {
+        super(true, "wound strings", "plain wire is planned with plan-plain", "wound-string design");
+    }
 
     @Override
     void checkOwnOptions() {
@@ -96,51 +93,20 @@ public final class PlanWoundCommand extends PlanCommand {
             OptionChecks.named("--double-above", () -> PlanChecks.doubleAbove(doubleAbove * 1e-3));
         }
         OptionChecks.named("--double-ratio", () -> PlanChecks.doubleRatio(doubleRatio));
-        OptionChecks.named("--change-cost", () -> PlanChecks.changeCost(changeCost));
         OptionChecks.named("--join-break", () -> PlanChecks.joinBreakKeys(joinBreak));
         coreList = cores.trim().equalsIgnoreCase("keep") ? List.of()
                 : OptionChecks.named("--cores", () -> WireLists.diameters(WireLists.CORES, cores));
     }
 
     @Override
-    TargetQuantity quantity() {
-        return quantity;
-    }
-
-    @Override
-    List<NoteResult> plannedKeys(ScaleAnalysis present) {
-        return WoundPlanner.plannedKeys(present, keys);
-    }
-
-    @Override
-    TargetCurve target(ScaleAnalysis present, TargetSpec recipe, boolean perSection) {
-        return WoundPlanner.target(present, keys, recipe, quantity, perSection);
-    }
-
-    @Override
     Proposal plan(ScaleAnalysis present, TargetCurve target, double maxBreakPct) {
-        return WoundPlanner.plan(present, keys, target, options(maxBreakPct));
+        return WoundPlanner.plan(present, keys(), target, options(maxBreakPct));
     }
 
     private WoundPlanOptions options(double maxBreakPct) {
         return new WoundPlanOptions(quantity, wraps,
                 doubleAbove == null ? OptionalDouble.empty() : OptionalDouble.of(doubleAbove * 1e-3), doubleRatio,
                 coreList, maxBreakPct, changeCost, stepCost, joinBreak);
-    }
-
-    @Override
-    String kindWords() {
-        return "wound strings";
-    }
-
-    @Override
-    String otherKindAdvice() {
-        return "plain wire is planned with plan-plain";
-    }
-
-    @Override
-    String planWords() {
-        return "wound-string design";
     }
 
     @Override
