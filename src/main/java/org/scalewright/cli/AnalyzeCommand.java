@@ -1,7 +1,6 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.scalewright.io.AnalysisCsv;
@@ -16,9 +15,6 @@ import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.physics.SectionTotal;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code analyze}: every string's tension, stress, percent of breaking strength and inharmonicity. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
@@ -28,21 +24,14 @@ public final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
 
-    @Option(names = "--out", paramLabel = "FILE.csv", description = "write the per-note results as CSV (SI units)")
-    Path out;
-
-    @Spec
-    CommandSpec spec;
+    @Mixin
+    CsvOutput out;
 
     @Override
     public Integer call() throws Exception {
         Scale scale = inputs.scale();
         ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
-        PrintWriter w = spec.commandLine().getOut();
-        String closing = Outputs.csvIfAsked(out, AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a));
-        print(a, w);
-        Outputs.printClosing(w, closing);
-        return ExitStatus.OK;
+        return out.writeThenPrint(AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a), w -> print(a, w));
     }
 
     static void print(ScaleAnalysis a, PrintWriter w) {

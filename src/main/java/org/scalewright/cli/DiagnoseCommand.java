@@ -16,16 +16,13 @@ import org.scalewright.design.wirecheck.MakerTables;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.DiagnosisCsv;
 import org.scalewright.io.StrengthTableReader;
-import org.scalewright.model.KeyRange;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.NoteResult;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code diagnose}: why strings break in one section, and what change would bring it under the caution band. */
 @Command(name = "diagnose", mixinStandardHelpOptions = true, sortOptions = false,
@@ -42,9 +39,8 @@ public final class DiagnoseCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
 
-    @Option(names = "--keys", required = true, paramLabel = "A-B", converter = KeyRangeConverter.class,
-            description = "the keys to diagnose: key numbers or note names (64-71, C6-G6)")
-    KeyRange keys;
+    @Mixin
+    KeysOption range;
 
     @Option(names = "--compare", paramLabel = "MAKER.csv",
             description = "another wire maker's strength table to try as a stronger wire (may be repeated)")
@@ -55,11 +51,8 @@ public final class DiagnoseCommand implements Callable<Integer> {
                     + "(default: ${DEFAULT-VALUE}, common practice, no source)")
     double margin;
 
-    @Option(names = "--out", paramLabel = "FILE.csv", description = "write the per-note results as CSV (SI units)")
-    Path out;
-
-    @Spec
-    CommandSpec spec;
+    @Mixin
+    CsvOutput out;
 
     @Override
     public Integer call() throws Exception {
@@ -68,22 +61,19 @@ public final class DiagnoseCommand implements Callable<Integer> {
         }
         Scale scale = inputs.scale();
         AnalysisSettings settings = inputs.settings();
-        if (scale.notesIn(keys).isEmpty()) {
-            throw new UserError("--keys " + keys + ": the scale has no note in that range (it has keys "
+        if (scale.notesIn(range.keys).isEmpty()) {
+            throw new UserError("--keys " + range.keys + ": the scale has no note in that range (it has keys "
                     + scale.notes().get(0).key() + "-" + scale.notes().get(scale.notes().size() - 1).key() + ")");
         }
         MakerTables tables = MakerTables.empty();
         for (Path p : compare) {
             tables = tables.with(StrengthTableReader.read(p));
         }
-        DiagnosisRequest request = new DiagnosisRequest(scale, keys, settings, tables.tables(), margin,
+        DiagnosisRequest request = new DiagnosisRequest(scale, range.keys, settings, tables.tables(), margin,
                 BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire());
         DiagnosisReport report = SectionDiagnosis.diagnose(request);
-        PrintWriter w = spec.commandLine().getOut();
-        String closing = Outputs.csvIfAsked(out, DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report));
-        print(report, w);
-        Outputs.printClosing(w, closing);
-        return ExitStatus.OK;
+        return out.writeThenPrint(DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report),
+                w -> print(report, w));
     }
 
     static void print(DiagnosisReport r, PrintWriter w) {

@@ -1,39 +1,95 @@
 package org.scalewright.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.time.OffsetDateTime;
+import org.scalewright.design.rescale.PlanNotPossible;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.model.InvalidInput;
 import picocli.CommandLine;
 
-/** Turns exceptions from a command into messages and exit statuses, without stack traces. */
+/**
+ * Turns exceptions from a command into messages and exit statuses (DESIGN §5), never a stack
+ * trace on the terminal. Bad input — a bad sheet ({@link BadInputException}), a refused value
+ * ({@link InvalidInput}, {@link UserError}), a plan the constraints do not allow
+ * ({@link PlanNotPossible}), a bad argument — exits 2 with one line per problem. Anything else,
+ * an {@link IllegalArgumentException} from an engine precondition included, is a program error:
+ * exit 1, one line on standard error, and the stack trace appended to the error log.
+ */
 final class Failures implements CommandLine.IExecutionExceptionHandler {
+    /** File name of the error log, in the temporary folder ({@code java.io.tmpdir}). */
+    static final String LOG_NAME = "scalewright-errors.log";
+
     private final PrintWriter err;
+    private final Path log;
 
     Failures(PrintWriter err) {
+        this(err, defaultLog());
+    }
+
+    /** @param log the file the stack trace of an internal error is appended to */
+    Failures(PrintWriter err, Path log) {
         this.err = err;
+        this.log = log;
+    }
+
+    /** @return {@code scalewright-errors.log} in the temporary folder */
+    static Path defaultLog() {
+        return Path.of(System.getProperty("java.io.tmpdir"), LOG_NAME);
     }
 
     @Override
     public int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parsed) {
-        Throwable e = ex;
+        int status = handle(ex, cl == null ? "scalewright" : cl.getCommandSpec().qualifiedName());
+        err.flush();
+        return status;
+    }
+
+    private int handle(Exception e, String command) {
         if (e instanceof BadInputException bad) {
             for (SheetProblem p : bad.problems()) {
                 err.println("error: " + p);
             }
-            err.flush();
             return ExitStatus.BAD_INPUT;
         }
-        if (e instanceof UserError || e instanceof InvalidInput || e instanceof IllegalArgumentException) {
-            for (String line : e.getMessage().split("\n")) {
+        if (e instanceof PlanNotPossible p) {
+            p.reasons().forEach(r -> err.println("error: " + r));
+            return ExitStatus.BAD_INPUT;
+        }
+        if (e instanceof UserError || e instanceof InvalidInput || e instanceof CommandLine.ParameterException) {
+            for (String line : String.valueOf(e.getMessage()).split("\n")) {
                 err.println("error: " + line);
             }
-            err.flush();
             return ExitStatus.BAD_INPUT;
         }
-        err.println("internal error: " + e + (e.getStackTrace().length > 0 ? " at " + e.getStackTrace()[0] : ""));
-        err.println("please report this with the input that caused it");
-        err.flush();
+        String what = e.getClass().getSimpleName() + (e.getMessage() == null ? ""
+                : ": " + e.getMessage().replace('\n', ' '));
+        String where = writeLog(e, command) ? "details in " + log : "no log written (" + log + " could not be written)";
+        err.println("internal error in " + command + ": " + what + " (please report it with the input that caused it); "
+                + where);
         return ExitStatus.INTERNAL;
+    }
+
+    /** Appends the time, the command and the stack trace to the log; false when it cannot be written. */
+    private boolean writeLog(Exception e, String command) {
+        StringWriter trace = new StringWriter();
+        try (PrintWriter t = new PrintWriter(trace)) {
+            t.println(OffsetDateTime.now() + " internal error in " + command);
+            e.printStackTrace(t);
+            t.println();
+        }
+        try {
+            Files.writeString(log, trace.toString(), StandardCharsets.UTF_8, StandardOpenOption.CREATE,
+                    StandardOpenOption.APPEND);
+            return true;
+        } catch (IOException | SecurityException io) {
+            return false;
+        }
     }
 }

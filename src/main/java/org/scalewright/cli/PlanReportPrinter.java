@@ -1,14 +1,17 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
-import java.util.List;
-import org.scalewright.design.rescale.KeyChange;
+import java.nio.file.Path;
 import org.scalewright.design.rescale.Proposal;
+import org.scalewright.design.rescale.ProposalText;
 import org.scalewright.design.rescale.StepCheck;
 import org.scalewright.io.BuiltInData;
-import org.scalewright.physics.NoteResult;
+import org.scalewright.model.CoreWire;
 
-/** Prints the summary shared by {@code plan-plain} and {@code plan-wound}: steps, maximum, limits, notes. */
+/**
+ * Lays out the summary shared by {@code plan-plain} and {@code plan-wound} on the terminal:
+ * the steps table, then the proposal's sentences from {@link ProposalText}, then the cautions.
+ */
 final class PlanReportPrinter {
     private PlanReportPrinter() {
     }
@@ -19,7 +22,7 @@ final class PlanReportPrinter {
     }
 
     /** @return a plain wire or core as a rebuilder writes it: {@code #14.5} or {@code 0.825 mm} */
-    static String wireName(org.scalewright.model.CoreWire w) {
+    static String wireName(CoreWire w) {
         return w.musicWireSize().isPresent() ? "#" + Formats.trim(w.musicWireSize().getAsDouble())
                 : Formats.f(w.diameter() * 1e3, 3) + " mm";
     }
@@ -30,57 +33,31 @@ final class PlanReportPrinter {
 
     static void summary(Proposal p, PrintWriter w) {
         w.println();
-        w.println("Largest neighbour step in per-string tension, before → after (limit "
-                + Formats.trim(p.before().settings().neighbourStepPct()) + " %):");
+        w.println(ProposalText.stepTableHeading(p));
         TextTable t = new TextTable("where", "keys", ">before", "at", ">after", "at", "");
         for (StepCheck s : p.steps()) {
-            String where = switch (s.kind()) {
-                case INSIDE_SECTION -> "inside " + s.label();
-                case ACROSS_BOUNDARY -> "across " + s.label();
-                case AT_EDGE -> "edge " + s.label();
-            };
-            t.row(where, s.firstKey() + "-" + s.lastKey(), Formats.f(s.beforePct(), 1) + " %", s.beforeKey(),
-                    Formats.f(s.afterPct(), 1) + " %", s.afterKey(), s.withinLimit() ? "ok" : "over");
+            t.row(ProposalText.where(s), s.firstKey() + "-" + s.lastKey(), Formats.f(s.beforePct(), 1) + " %",
+                    s.beforeKey(), Formats.f(s.afterPct(), 1) + " %", s.afterKey(), s.withinLimit() ? "ok" : "over");
         }
         t.print(w);
         w.println();
-        NoteResult top = p.highestAfter().orElseThrow();
-        w.println("All planned strings at or under " + Formats.trim(p.maxBreakPct()) + " % of breaking strength: "
-                + (p.allUnderMax() ? "yes" : "NO") + " (highest " + Formats.f(top.breakPct(), 1) + " % at key "
-                + top.key() + " " + top.noteName() + ")");
-        w.println("Keys changed: " + p.changedCount() + " of " + p.changes().size() + "; wire changes along the "
-                + "planned keys: " + changesAlong(p.changes(), true) + " before, " + changesAlong(p.changes(), false)
-                + " after");
-        if (!p.limits().isEmpty()) {
+        w.println(ProposalText.maximum(p));
+        w.println(ProposalText.changed(p));
+        list(ProposalText.limitsHeading(), p.limits(), w);
+        list(ProposalText.notesHeading(), p.notes(), w);
+    }
+
+    private static void list(String heading, java.util.List<String> items, PrintWriter w) {
+        if (!items.isEmpty()) {
             w.println();
-            w.println("Steps over the limit that remain, and why:");
-            for (String l : p.limits()) {
-                w.println("  - " + l);
-            }
-        }
-        if (!p.notes().isEmpty()) {
-            w.println();
-            w.println("Notes:");
-            for (String n : p.notes()) {
-                w.println("  - " + n);
+            w.println(heading);
+            for (String item : items) {
+                w.println("  - " + item);
             }
         }
     }
 
-    /** @return how often the wire (plain size, or core) changes from one planned key to the next */
-    private static int changesAlong(List<KeyChange> changes, boolean before) {
-        int count = 0;
-        for (int i = 1; i < changes.size(); i++) {
-            double a = (before ? changes.get(i - 1).before() : changes.get(i - 1).after()).wire().diameter();
-            double b = (before ? changes.get(i).before() : changes.get(i).after()).wire().diameter();
-            if (Math.abs(a - b) > 1e-9) {
-                count++;
-            }
-        }
-        return count;
-    }
-
-    static void footer(Proposal p, java.nio.file.Path out, Inputs inputs, PrintWriter w) {
+    static void footer(Proposal p, Path out, PrintWriter w) {
         w.println();
         w.println("wrote " + out + " (a complete scale sheet in the input's units; 'analyze " + out.getFileName()
                 + "' with the same strength table shows the figures above; strength table: "

@@ -31,7 +31,8 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "report", mixinStandardHelpOptions = true,
         description = {"Write a report of a scale into a directory.",
                 "Writes report.pdf; the curves as PNG and SVG (tension, break-percent, inharmonicity, "
-                        + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv. "
+                        + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv "
+                        + "(stretch_cents for the --octave type; the PDF gives all three). "
                         + "Nothing is written if any input is bad."})
 public final class ReportCommand implements Callable<Integer> {
     @Mixin
@@ -49,10 +50,9 @@ public final class ReportCommand implements Callable<Integer> {
             description = "units of the tables and orders (default: those of the sheet's speaking lengths)")
     String units;
 
-    @Option(names = "--octave", paramLabel = "2:1|4:2|6:3", defaultValue = "2:1",
-            description = "octave type of stretch_cents in stretch.csv (all three are in the PDF; "
-                    + "default: ${DEFAULT-VALUE})")
-    String octave;
+    /** The octave type of stretch_cents in stretch.csv; the PDF gives all three. */
+    @Mixin
+    OctaveOption octave;
 
     @Option(names = "--pin-allowance", paramLabel = "MM",
             description = "plain wire per string for the tuning-pin coil and hitch, mm (default: 150)")
@@ -76,7 +76,7 @@ public final class ReportCommand implements Callable<Integer> {
         if (dirProblem != null) {
             throw new UserError("--out: " + dirProblem);
         }
-        OctaveType type = StretchCommand.octaveType(octave);
+        OctaveType type = octave.type();
         WireAllowances allowances = allowances();
         Scale scale = inputs.scale();
         AnalysisSettings settings = inputs.settings();

@@ -31,10 +31,19 @@ public final class ScalewrightCommand implements Runnable {
 
     /**
      * Runs the command line and returns the exit status: 0 success, 2 bad input or arguments
-     * (one line per problem on stderr), 1 internal error. Never prints a stack trace.
+     * (one line per problem on stderr), 1 internal error (one line on stderr; the stack trace is
+     * appended to {@code scalewright-errors.log} in the temporary folder). Never prints a stack trace.
      */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new ScalewrightCommand());
+        return run(new CommandLine(new ScalewrightCommand()), args, out, err, Failures.defaultLog());
+    }
+
+    /**
+     * Runs a command line built on {@link ScalewrightCommand} (tests add commands to it).
+     *
+     * @param log the file an internal error's stack trace is appended to
+     */
+    static int run(CommandLine cl, String[] args, PrintWriter out, PrintWriter err, java.nio.file.Path log) {
         cl.setOut(out);
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
@@ -43,7 +52,7 @@ public final class ScalewrightCommand implements Runnable {
             err.flush();
             return ExitStatus.BAD_INPUT;
         });
-        cl.setExecutionExceptionHandler(new Failures(err));
+        cl.setExecutionExceptionHandler(new Failures(err, log));
         if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
             err.println("error: unknown command '" + args[0] + "'; commands: "
                     + String.join(", ", cl.getSubcommands().keySet()));

@@ -1,7 +1,6 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.scalewright.design.stretch.OctaveType;
@@ -16,9 +15,6 @@ import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code stretch}: the tuning stretch a scale's inharmonicity asks for. */
 @Command(name = "stretch", mixinStandardHelpOptions = true,
@@ -30,37 +26,20 @@ public final class StretchCommand implements Callable<Integer> {
     @Mixin
     Inputs inputs;
 
-    @Option(names = "--octave", paramLabel = "2:1|4:2|6:3", defaultValue = "2:1",
-            description = "octave type tuned beatless (default: ${DEFAULT-VALUE})")
-    String octave;
+    @Mixin
+    OctaveOption octave;
 
-    @Option(names = "--out", paramLabel = "FILE.csv",
-            description = "write key, note, stretch_cents (and pitches, B) as CSV")
-    Path out;
-
-    @Spec
-    CommandSpec spec;
+    @Mixin
+    CsvOutput out;
 
     @Override
     public Integer call() throws Exception {
-        OctaveType type = octaveType(octave);
+        OctaveType type = octave.type();
         Scale scale = inputs.scale();
         ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
         StretchCurve curve = TuningStretch.of(a, type);
         CsvSheet sheet = StretchCsv.sheet(curve, List.of(), header(scale));
-        PrintWriter w = spec.commandLine().getOut();
-        String closing = Outputs.csvIfAsked(out, sheet.comments(), sheet.header(), sheet.rows());
-        print(scale, curve, w);
-        Outputs.printClosing(w, closing);
-        return ExitStatus.OK;
-    }
-
-    static OctaveType octaveType(String text) {
-        try {
-            return OctaveType.parse(text);
-        } catch (IllegalArgumentException e) {
-            throw new UserError("--octave: " + e.getMessage());
-        }
+        return out.writeThenPrint(sheet.comments(), sheet.header(), sheet.rows(), w -> print(scale, curve, w));
     }
 
     private static List<String> header(Scale s) {

@@ -158,4 +158,28 @@ class PlanPlainCommandTest {
         assertEquals(0, r.status(), r.err());
         assertEquals(29, PlanCommandRunner.checkRowsMatchReanalysis(r, out));
     }
+
+    /** The window shows the same sentences (app RescaleViewModelTest); here with the option in front. */
+    @Test
+    void aRefusedValueIsTheEnginesOneMessageWithTheOptionNamed() throws Exception {
+        Path in = sheet(3);
+        Path out = dir.resolve("never.csv");
+        String[][] cases = {
+            {"--sizes", "0.8mm,0.8mm", "error: --sizes: plain wire list: diameter 0.800 mm is listed twice"},
+            {"--max-break", "150", "error: --max-break: maximum percent of breaking strength must be more than 0 and "
+                    + "at most 100 %, was 150"},
+            {"--change-cost", "-1", "error: --change-cost: change cost must be 0 or more, was -1"},
+            {"--target", "akima", "--points", "40=700,50=650,60=600",
+                "error: an Akima spline needs at least 5 control points, had 3"},
+        };
+        for (String[] c : cases) {
+            List<String> args = new java.util.ArrayList<>(List.of("plan-plain", in.toString(), "--keys", "40-60",
+                    "--out", out.toString()));
+            args.addAll(List.of(c).subList(0, c.length - 1));
+            PlanCommandRunner.Run r = PlanCommandRunner.run(args.toArray(String[]::new));
+            assertEquals(2, r.status(), r.err());
+            assertEquals(List.of(c[c.length - 1]), r.errLines());
+            assertFalse(Files.exists(out));
+        }
+    }
 }

@@ -2,7 +2,6 @@ package org.scalewright.app.rescale;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
@@ -25,15 +24,17 @@ import org.scalewright.design.SmoothTrend;
 import org.scalewright.design.rescale.ControlPoint;
 import org.scalewright.design.rescale.PlainPlanOptions;
 import org.scalewright.design.rescale.PlainPlanner;
+import org.scalewright.design.rescale.PlanChecks;
 import org.scalewright.design.rescale.PlanNotPossible;
 import org.scalewright.design.rescale.Proposal;
-import org.scalewright.design.rescale.StepCheck;
+import org.scalewright.design.rescale.ProposalText;
 import org.scalewright.design.rescale.TargetCurve;
 import org.scalewright.design.rescale.TargetQuantity;
 import org.scalewright.design.rescale.TargetSpec;
 import org.scalewright.design.rescale.WoundPlanOptions;
 import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.design.rescale.WrapWires;
+import org.scalewright.io.BuiltInData;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
@@ -282,7 +283,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         KeyRange r;
         try {
             r = range();
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput e) {
             return;
         }
         long wound = session.analysis().notes().stream().filter(n -> r.contains(n.key()) && n.wound()).count();
@@ -319,7 +320,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
             return true;
         } catch (PlanNotPossible e) {
             fail(e.reasons());
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput e) {
             fail(List.of(e.getMessage()));
         }
         return false;
@@ -327,19 +328,16 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
 
     private WoundPlanOptions woundOptions(double max) {
         double step = number(wrapStep.get(), "wrap step (mm)");
-        if (step > 1) {
-            throw new IllegalArgumentException("wrap step must be at most 1 mm, was " + wrapStep.get().trim());
-        }
         OptionalDouble dbl = doubleAbove.get() == null || doubleAbove.get().isBlank() ? OptionalDouble.empty()
                 : OptionalDouble.of(number(doubleAbove.get(), "double-wind above (mm)") * 1e-3);
         int join = 0;
         if (joinBreak.get()) {
             double j = number(joinKeys.get(), "keys joined either side of the break");
-            if (j != Math.rint(j) || j < 1 || j > 20) {
-                throw new IllegalArgumentException("keys joined either side of the break must be a whole number "
-                        + "from 1 to 20, was " + joinKeys.get().trim());
+            if (j != Math.rint(j)) {
+                throw new InvalidInput("keys joined either side of a break must be a whole number, was "
+                        + joinKeys.get().trim());
             }
-            join = (int) j;
+            join = PlanChecks.joinBreakKeys((int) Math.min(j, Integer.MAX_VALUE));
         }
         return WoundPlanOptions.defaults(max).withWraps(WrapWires.steps(step * 1e-3)).withDoubleAbove(dbl)
                 .withJoinBreak(join);
@@ -360,14 +358,11 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         return switch (targetKind.get()) {
             case SMOOTH -> {
                 double bw = number(bandwidth.get(), "bandwidth");
-                if (bw > 1) {
-                    throw new IllegalArgumentException("bandwidth must be > 0 and at most 1, was " + bandwidth.get().trim());
-                }
                 yield new TargetSpec.Loess(bw, SmoothTrend.DEFAULT_ROBUSTNESS_ITERATIONS);
             }
             case LINE, LOG_LINE -> {
                 if (planned.size() < 2) {
-                    throw new IllegalArgumentException("a line needs at least two planned keys");
+                    throw new InvalidInput("a line needs at least two planned keys, had " + planned.size());
                 }
                 yield TargetSpec.Line.throughPresent(planned.get(0).key(), planned.get(planned.size() - 1).key(),
                         targetKind.get() == TargetKind.LOG_LINE);
@@ -403,7 +398,9 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
             seedPoints(session.analysis(), range());
             targetKind.set(TargetKind.SPLINE);
             previewPoints();
-        } catch (IllegalArgumentException e) {
+        } catch (PlanNotPossible e) {
+            fail(e.reasons());
+        } catch (InvalidInput e) {
             fail(List.of(e.getMessage()));
         }
     }
@@ -458,7 +455,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
                     new TargetSpec.Spline(new ArrayList<>(points), false), false);
             target.set(t);
             curves.targetProperty().set(new TargetMarks(t, points));
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput | PlanNotPossible e) {
             curves.targetProperty().set(new TargetMarks(null, points));
         }
     }
@@ -484,7 +481,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private void fail(List<String> reasons) {
         clear();
         problems.setAll(reasons);
-        summary.set("No proposal: " + String.join(" ", reasons));
+        summary.set(ProposalText.noProposal(reasons));
         session.complain("no rescaling proposal: " + reasons.get(0));
     }
 
@@ -534,7 +531,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         String a = from.get() == null ? "" : from.get().trim();
         String b = to.get() == null ? "" : to.get().trim();
         if (a.isEmpty() || b.isEmpty()) {
-            throw new IllegalArgumentException("give the range: from and to keys (numbers or note names such as "
+            throw new InvalidInput("give the range: from and to keys (numbers or note names such as "
                     + "A0 or C#3), or select a note and use its section");
         }
         int x = key(a, "from");
@@ -546,7 +543,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         try {
             return KeyNames.parse(text);
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException(field + " key: '" + text + "' is not a key number or note name");
+            throw new InvalidInput(field + " key: '" + text + "' is not a key number or note name");
         }
     }
 
@@ -560,38 +557,13 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         } catch (InvalidInput e) {
             // said below, with the range
         }
-        throw new IllegalArgumentException(what + ": expected a number > 0, was '" + t + "'");
+        throw new InvalidInput(what + ": expected a number > 0, was '" + t + "'");
     }
 
-    private String summaryOf(Proposal p) {
-        StringBuilder b = new StringBuilder();
-        b.append(p.action()).append(", keys ").append(p.range()).append(": ").append(p.changedCount()).append(" of ")
-                .append(p.changes().size()).append(" keys change. Target: ").append(p.target().description())
-                .append(".\n");
-        StepCheck worst = null;
-        for (StepCheck s : p.steps()) {
-            if (worst == null || Math.abs(s.beforePct()) > Math.abs(worst.beforePct())) {
-                worst = s;
-            }
-        }
-        if (worst != null) {
-            double after = p.steps().stream().mapToDouble(s -> Math.abs(s.afterPct())).max().orElse(0);
-            b.append(String.format(Locale.ROOT, "Largest neighbour step in tension: %.1f %% → %.1f %% (limit %s %%)%s.%n",
-                    Math.abs(worst.beforePct()), after, DisplayFormat.decimals(worst.limitPct(), 0, 1),
-                    p.stepsWithinLimit() ? ", all steps within it" : ", some steps remain over it"));
-        }
-        NoteResult top = p.highestAfter().orElseThrow();
-        b.append(String.format(Locale.ROOT, "All planned strings at or under %s %% of breaking strength: %s "
-                        + "(highest %.1f %% at key %d %s).", DisplayFormat.decimals(p.maxBreakPct(), 0, 1),
-                p.allUnderMax() ? "yes" : "NO", top.breakPct(), top.key(), top.noteName()));
-        for (String l : p.limits()) {
-            b.append("\nLimit: ").append(l);
-        }
-        for (String n : p.notes()) {
-            b.append("\nNote: ").append(n);
-        }
-        b.append("\nCaution: these figures are estimates from nominal data. New strings store energy as they come "
-                + "up to pitch: wear eye protection, and raise an old instrument in stages.");
-        return b.toString();
+    /** Lays out the proposal's sentences (composed by {@link ProposalText}) and the cautions, one a line. */
+    private static String summaryOf(Proposal p) {
+        List<String> lines = new ArrayList<>(ProposalText.summary(p));
+        lines.add("Caution: " + String.join(" ", BuiltInData.cautions()));
+        return String.join("\n", lines);
     }
 }

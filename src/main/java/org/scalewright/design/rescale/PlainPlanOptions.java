@@ -27,28 +27,21 @@ public record PlainPlanOptions(List<CoreWire> sizes, double maxBreakPct, double 
     /** Default cost of neighbour steps beyond the limit. */
     public static final double DEFAULT_STEP_COST = 1.0;
 
+    /**
+     * @throws org.scalewright.model.InvalidInput when a setting is out of its range or a
+     *         diameter is listed twice (the message names the setting, the range and the value)
+     */
     public PlainPlanOptions {
         if (sizes == null || sizes.isEmpty()) {
-            throw new IllegalArgumentException("the plain-wire planner needs at least one wire size");
+            throw new org.scalewright.model.InvalidInput(WireLists.PLAIN + " is empty: the plain-wire planner needs "
+                    + "at least one wire size");
         }
-        if (!(maxBreakPct > 0 && maxBreakPct <= 100)) {
-            throw new IllegalArgumentException("maximum percent of breaking strength must be in (0, 100] %, was "
-                    + maxBreakPct);
-        }
-        if (!(changeCost >= 0) || Double.isInfinite(changeCost)) {
-            throw new IllegalArgumentException("change cost must be >= 0, was " + changeCost);
-        }
-        if (!(stepCost >= 0) || Double.isInfinite(stepCost)) {
-            throw new IllegalArgumentException("step cost must be >= 0, was " + stepCost);
-        }
+        PlanChecks.maxBreakPct(maxBreakPct);
+        PlanChecks.changeCost(changeCost);
+        PlanChecks.stepCost(stepCost);
+        WireLists.distinct(WireLists.PLAIN, sizes.stream().map(CoreWire::diameter).toList());
         List<CoreWire> sorted = new ArrayList<>(sizes);
         sorted.sort(Comparator.comparingDouble(CoreWire::diameter).reversed());
-        for (int i = 1; i < sorted.size(); i++) {
-            if (Math.abs(sorted.get(i).diameter() - sorted.get(i - 1).diameter()) < 1e-9) {
-                throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
-                        "wire diameter %.4f mm is listed twice", sorted.get(i).diameter() * 1e3));
-            }
-        }
         sizes = List.copyOf(sorted);
     }
 

@@ -33,7 +33,7 @@ public final class PlainPlanner {
 
     /** @return the present results of the plain-wire keys in the range, bass to treble */
     public static List<NoteResult> plannedKeys(ScaleAnalysis present, KeyRange range) {
-        return present.notes().stream().filter(r -> range.contains(r.key()) && !r.wound()).toList();
+        return PlannedKeys.results(present, range, false);
     }
 
     /**
@@ -43,12 +43,7 @@ public final class PlainPlanner {
      * @throws PlanNotPossible when the range holds no plain keys
      */
     public static TargetCurve target(ScaleAnalysis present, KeyRange range, TargetSpec spec, boolean perSection) {
-        List<NoteResult> planned = plannedKeys(present, range);
-        if (planned.isEmpty()) {
-            throw noPlainKeys(range);
-        }
-        return perSection ? Targets.buildPerSection(planned, TargetQuantity.TENSION, spec, Targets.DEFAULT_BLEND_KEYS)
-                : Targets.build(planned, TargetQuantity.TENSION, spec);
+        return PlannedKeys.target(present, range, spec, TargetQuantity.TENSION, perSection, false);
     }
 
     /**
@@ -64,28 +59,9 @@ public final class PlainPlanner {
         AnalysisSettings settings = present.settings();
         List<Note> notes = scale.notes();
         List<NoteResult> results = present.notes();
-        List<Integer> idx = new ArrayList<>();
-        List<Integer> skipped = new ArrayList<>();
-        for (int i = 0; i < notes.size(); i++) {
-            Note n = notes.get(i);
-            if (range.contains(n.key())) {
-                if (n.isWound()) {
-                    skipped.add(n.key());
-                } else {
-                    idx.add(i);
-                }
-            }
-        }
-        if (idx.isEmpty()) {
-            throw noPlainKeys(range);
-        }
-        for (int i : idx) {
-            if (!target.covers(notes.get(i).key())) {
-                throw new IllegalArgumentException("the target (" + target.description() + ") covers keys "
-                        + target.firstKey() + "-" + target.lastKey() + " but plain key " + notes.get(i).key()
-                        + " is to be planned");
-            }
-        }
+        PlannedKeys planned = PlannedKeys.select(notes, range, false, target);
+        List<Integer> idx = planned.index();
+        List<Integer> skipped = planned.skipped();
         List<CoreWire> sizes = options.sizes();
         int n = idx.size();
         int m = sizes.size();
@@ -185,10 +161,6 @@ public final class PlainPlanner {
     static double excessCost(double lower, double upper, double limit, double stepCost) {
         double excess = Math.abs(upper / lower - 1.0) - limit;
         return excess > 0 ? stepCost * excess : 0;
-    }
-
-    private static PlanNotPossible noPlainKeys(KeyRange range) {
-        return new PlanNotPossible(List.of("keys " + range + " hold no plain-wire strings to plan"));
     }
 
     /** The wire of the unplanned plain neighbours just outside the planned keys, which the plan must fit. */

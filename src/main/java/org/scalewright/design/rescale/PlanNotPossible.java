@@ -5,9 +5,12 @@ import java.util.List;
 /**
  * No plan meets the constraints asked for (every string under the maximum percent of breaking
  * strength, wire that never grows toward the treble, wire that exists in the list given). Each
- * reason says what limits the plan, in plain words with the figures.
+ * reason says what limits the plan, in plain words with the figures. Its own exception, not an
+ * {@link IllegalArgumentException} (a broken engine precondition, a program error) nor an
+ * {@link org.scalewright.model.InvalidInput} (each value given was acceptable; together they
+ * allow no plan): the command line answers it with exit status 2, the window with its reasons.
  */
-public final class PlanNotPossible extends IllegalArgumentException {
+public final class PlanNotPossible extends RuntimeException {
     private static final long serialVersionUID = 1L;
     private final List<String> reasons;
 

@@ -7,12 +7,16 @@ import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.interpolation.AkimaSplineInterpolator;
 import org.apache.commons.math3.analysis.interpolation.SplineInterpolator;
 import org.scalewright.design.SmoothTrend;
+import org.scalewright.model.InvalidInput;
 
 /**
  * How to make a target curve over the keys being planned, from the present values at those
  * keys. The ways: a robust smooth trend of the present values ({@link Loess}), a straight or
  * log-linear line between two anchor notes ({@link Line}), a smooth spline through control
  * points ({@link Spline}), or a curve given outright ({@link Given}, e.g. read from a file).
+ * A recipe is the user's: what it cannot do (a bandwidth out of range, too few points, points
+ * that do not span the planned keys) is refused with {@link InvalidInput}, one message for the
+ * command line and the window.
  */
 public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, TargetSpec.Spline, TargetSpec.Given {
 
@@ -20,7 +24,8 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
      * @param keys    the keys being planned, strictly increasing, at least one
      * @param present the present value at each of those keys (N or %), &gt; 0
      * @return a curve covering {@code keys[0]} to the last key
-     * @throws IllegalArgumentException when the recipe cannot cover those keys
+     * @throws InvalidInput when the user's recipe cannot cover those keys (points or anchors outside
+     *         them, a curve that runs to zero); the message says what to change
      */
     TargetCurve build(int[] keys, double[] present);
 
@@ -41,7 +46,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
     record Loess(double bandwidth, int iterations) implements TargetSpec {
         public Loess {
             if (!(bandwidth > 0 && bandwidth <= 1)) {
-                throw new IllegalArgumentException("bandwidth must be in (0, 1], was " + bandwidth);
+                throw new InvalidInput("bandwidth must be more than 0 and at most 1, was " + trim(bandwidth));
             }
             if (iterations < 0) {
                 throw new IllegalArgumentException("robustness iterations must be >= 0, was " + iterations);
@@ -85,7 +90,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
     record Line(int keyA, double valueA, int keyB, double valueB, boolean logLinear) implements TargetSpec {
         public Line {
             if (keyA == keyB) {
-                throw new IllegalArgumentException("a line needs two different anchor keys, both were " + keyA);
+                throw new InvalidInput("a line needs two different anchor keys, both were " + keyA);
             }
             checkAnchor(keyA, valueA);
             checkAnchor(keyB, valueB);
@@ -98,7 +103,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
 
         private static void checkAnchor(int key, double v) {
             if (!Double.isNaN(v) && (!(v > 0) || Double.isInfinite(v))) {
-                throw new IllegalArgumentException("anchor value at key " + key + " must be > 0, was " + v);
+                throw new InvalidInput("anchor value at key " + key + " must be > 0, was " + v);
             }
         }
 
@@ -113,7 +118,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
                 double t = (double) (first + i - keyA) / (keyB - keyA);
                 v[i] = logLinear ? Math.exp(Math.log(a) + t * (Math.log(b) - Math.log(a))) : a + t * (b - a);
                 if (!(v[i] > 0)) {
-                    throw new IllegalArgumentException(String.format(Locale.ROOT, "the line from key %d (%.1f) to key %d "
+                    throw new InvalidInput(String.format(Locale.ROOT, "the line from key %d (%.1f) to key %d "
                             + "(%.1f) runs to zero or below at key %d; choose anchors nearer the planned keys or a "
                             + "log-linear line", keyA, a, keyB, b, first + i));
                 }
@@ -128,7 +133,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
                     return present[i];
                 }
             }
-            throw new IllegalArgumentException("anchor key " + key + " is not one of the planned keys ("
+            throw new InvalidInput("anchor key " + key + " is not one of the planned keys ("
                     + keys[0] + "-" + keys[keys.length - 1] + "); give its value or choose a planned key");
         }
     }
@@ -146,15 +151,15 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
             List<ControlPoint> sorted = new ArrayList<>(points);
             sorted.sort((p, q) -> Integer.compare(p.key(), q.key()));
             if (sorted.size() < 2) {
-                throw new IllegalArgumentException("a spline target needs at least 2 control points, had " + sorted.size());
+                throw new InvalidInput("a spline target needs at least 2 control points, had " + sorted.size());
             }
             for (int i = 1; i < sorted.size(); i++) {
                 if (sorted.get(i).key() == sorted.get(i - 1).key()) {
-                    throw new IllegalArgumentException("control point key " + sorted.get(i).key() + " is given twice");
+                    throw new InvalidInput("control point key " + sorted.get(i).key() + " is given twice");
                 }
             }
             if (akima && sorted.size() < 5) {
-                throw new IllegalArgumentException("an Akima spline needs at least 5 control points, had " + sorted.size());
+                throw new InvalidInput("an Akima spline needs at least 5 control points, had " + sorted.size());
             }
             points = List.copyOf(sorted);
         }
@@ -165,7 +170,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
             int lo = points.get(0).key();
             int hi = points.get(points.size() - 1).key();
             if (keys[0] < lo || keys[keys.length - 1] > hi) {
-                throw new IllegalArgumentException("the control points span keys " + lo + "-" + hi
+                throw new InvalidInput("the control points span keys " + lo + "-" + hi
                         + " but the planned keys run " + keys[0] + "-" + keys[keys.length - 1]
                         + "; add points at the ends");
             }
@@ -184,7 +189,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
             for (int i = 0; i < v.length; i++) {
                 v[i] = f.value(first + i);
                 if (!(v[i] > 0)) {
-                    throw new IllegalArgumentException("the spline through the control points runs to zero or below at key "
+                    throw new InvalidInput("the spline through the control points runs to zero or below at key "
                             + (first + i) + "; move the points or use an Akima spline");
                 }
             }
@@ -211,7 +216,7 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
             int first = keys[0];
             int last = keys[keys.length - 1];
             if (!curve.covers(first) || !curve.covers(last)) {
-                throw new IllegalArgumentException("the target (" + curve.description() + ") covers keys "
+                throw new InvalidInput("the target (" + curve.description() + ") covers keys "
                         + curve.firstKey() + "-" + curve.lastKey() + " but the planned keys run " + first + "-" + last);
             }
             return curve.part(first, last);

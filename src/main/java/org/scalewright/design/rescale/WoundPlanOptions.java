@@ -1,7 +1,6 @@
 package org.scalewright.design.rescale;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.OptionalDouble;
 
 /**
@@ -43,40 +42,36 @@ public record WoundPlanOptions(TargetQuantity quantity, WrapWires wraps, Optiona
      */
     public static final double JOIN_CORE_STEP = 0.025e-3;
 
+    /**
+     * @throws org.scalewright.model.InvalidInput when a setting is out of its range (the message
+     *         names the setting, the range and the value); the checks shared with the plain-wire
+     *         planner are those of {@link PlanChecks}
+     */
     public WoundPlanOptions {
         if (quantity == null || wraps == null) {
             throw new IllegalArgumentException("the wound-string designer needs a target quantity and wrap wire");
         }
         doubleAbove = doubleAbove == null ? OptionalDouble.empty() : doubleAbove;
-        doubleAbove.ifPresent(d -> {
-            if (!(d > 0)) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT,
-                        "double-winding threshold must be > 0 mm, was %s", d * 1e3));
-            }
-        });
-        if (!(doubleRatio > 0) || Double.isInfinite(doubleRatio)) {
-            throw new IllegalArgumentException("outer/inner wrap ratio must be > 0, was " + doubleRatio);
-        }
+        doubleAbove.ifPresent(PlanChecks::doubleAbove);
+        PlanChecks.doubleRatio(doubleRatio);
         cores = cores == null ? List.of() : List.copyOf(cores);
+        if (!cores.isEmpty()) {
+            checkCores(cores);
+        }
+        PlanChecks.maxBreakPct(maxBreakPct);
+        PlanChecks.changeCost(changeCost);
+        PlanChecks.stepCost(stepCost);
+        PlanChecks.joinBreakKeys(joinBreakKeys);
+    }
+
+    private static void checkCores(List<Double> cores) {
         for (double c : cores) {
-            if (!(c > 0)) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT, "core diameter must be > 0 mm, was %s",
-                        c * 1e3));
+            if (!(c > 0) || Double.isInfinite(c)) {
+                throw new org.scalewright.model.InvalidInput(WireLists.CORES + ": a diameter must be more than 0, was "
+                        + PlanChecks.trim(c * 1e3) + " mm");
             }
         }
-        if (!(maxBreakPct > 0 && maxBreakPct <= 100)) {
-            throw new IllegalArgumentException("maximum percent of breaking strength must be in (0, 100] %, was "
-                    + maxBreakPct);
-        }
-        if (!(changeCost >= 0) || Double.isInfinite(changeCost)) {
-            throw new IllegalArgumentException("change cost must be >= 0, was " + changeCost);
-        }
-        if (!(stepCost >= 0) || Double.isInfinite(stepCost)) {
-            throw new IllegalArgumentException("step cost must be >= 0, was " + stepCost);
-        }
-        if (joinBreakKeys < 0) {
-            throw new IllegalArgumentException("keys joined either side of a break must be >= 0, was " + joinBreakKeys);
-        }
+        WireLists.distinct(WireLists.CORES, cores);
     }
 
     /** @return tension target, wrap wire in 0.05 mm steps, present winding and cores kept, no join */

@@ -54,7 +54,7 @@ public final class WoundPlanner {
 
     /** @return the present results of the wound keys in the range, bass to treble */
     public static List<NoteResult> plannedKeys(ScaleAnalysis present, KeyRange range) {
-        return present.notes().stream().filter(r -> range.contains(r.key()) && r.wound()).toList();
+        return PlannedKeys.results(present, range, true);
     }
 
     /**
@@ -66,12 +66,7 @@ public final class WoundPlanner {
      */
     public static TargetCurve target(ScaleAnalysis present, KeyRange range, TargetSpec spec, TargetQuantity quantity,
                                      boolean perSection) {
-        List<NoteResult> planned = plannedKeys(present, range);
-        if (planned.isEmpty()) {
-            throw noWoundKeys(range);
-        }
-        return perSection ? Targets.buildPerSection(planned, quantity, spec, Targets.DEFAULT_BLEND_KEYS)
-                : Targets.build(planned, quantity, spec);
+        return PlannedKeys.target(present, range, spec, quantity, perSection, true);
     }
 
     /**
@@ -84,26 +79,9 @@ public final class WoundPlanner {
      */
     public static Proposal plan(ScaleAnalysis present, KeyRange range, TargetCurve target, WoundPlanOptions options) {
         List<Note> notes = present.scale().notes();
-        List<Integer> idx = new ArrayList<>();
-        List<Integer> skipped = new ArrayList<>();
-        for (int i = 0; i < notes.size(); i++) {
-            Note n = notes.get(i);
-            if (range.contains(n.key()) && n.isWound()) {
-                idx.add(i);
-            } else if (range.contains(n.key())) {
-                skipped.add(n.key());
-            }
-        }
-        if (idx.isEmpty()) {
-            throw noWoundKeys(range);
-        }
-        for (int i : idx) {
-            if (!target.covers(notes.get(i).key())) {
-                throw new IllegalArgumentException("the target (" + target.description() + ") covers keys "
-                        + target.firstKey() + "-" + target.lastKey() + " but wound key " + notes.get(i).key()
-                        + " is to be planned");
-            }
-        }
+        PlannedKeys planned = PlannedKeys.select(notes, range, true, target);
+        List<Integer> idx = planned.index();
+        List<Integer> skipped = planned.skipped();
         List<Integer> breaks = breaks(notes, idx);
         TargetCurve aim = target;
         if (options.joinBreakKeys() > 0) {
@@ -151,10 +129,6 @@ public final class WoundPlanner {
         }
         return new Proposal("wound strings", range, present, after, options.quantity(), aim, changes, steps,
                 options.maxBreakPct(), remarks, limits);
-    }
-
-    private static PlanNotPossible noWoundKeys(KeyRange range) {
-        return new PlanNotPossible(List.of("keys " + range + " hold no wound strings to plan"));
     }
 
     /** @return positions p in the planned list where planned p − 1 and p are scale neighbours of different sections */

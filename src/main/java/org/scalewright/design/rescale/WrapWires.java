@@ -3,6 +3,7 @@ package org.scalewright.design.rescale;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import org.scalewright.model.InvalidInput;
 
 /** The wrap wire diameters available to the wound-string designer, thinnest first. Immutable. */
 public final class WrapWires {
@@ -24,10 +25,7 @@ public final class WrapWires {
      * @return wrap wire in equal steps
      */
     public static WrapWires steps(double step) {
-        if (!(step > 0 && step <= 1e-3)) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "wrap wire step must be > 0 and <= 1 mm, was %s mm", step * 1e3));
-        }
+        PlanChecks.wrapStep(step);
         int n = (int) Math.floor(MAX_STEPPED / step + 1e-9);
         double[] d = new double[n];
         for (int i = 0; i < n; i++) {
@@ -40,17 +38,14 @@ public final class WrapWires {
     /** @param metres the diameters offered, m, each &gt; 0, at least one @return that list */
     public static WrapWires of(List<Double> metres) {
         if (metres.isEmpty()) {
-            throw new IllegalArgumentException("the wrap wire list needs at least one diameter");
+            throw new InvalidInput(WireLists.WRAPS + " is empty: give diameters in mm (0.2, 0.25), separated by commas");
         }
+        WireLists.distinct(WireLists.WRAPS, metres);
         double[] d = metres.stream().mapToDouble(Double::doubleValue).sorted().toArray();
         for (int i = 0; i < d.length; i++) {
             if (!(d[i] > 0) || Double.isInfinite(d[i])) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT, "wrap wire diameter must be > 0 mm, was %s",
-                        d[i] * 1e3));
-            }
-            if (i > 0 && d[i] - d[i - 1] < 1e-9) {
-                throw new IllegalArgumentException(String.format(Locale.ROOT, "wrap wire %.3f mm is listed twice",
-                        d[i] * 1e3));
+                throw new InvalidInput(WireLists.WRAPS + ": a diameter must be more than 0, was "
+                        + trim(d[i] * 1e3) + " mm");
             }
         }
         return new WrapWires(d, "wrap wire " + Arrays.stream(d).mapToObj(v -> trim(v * 1e3))

@@ -12,6 +12,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.scalewright.design.rescale.ControlPoint;
 import org.scalewright.design.rescale.Proposal;
+import org.scalewright.design.rescale.ProposalText;
 import org.scalewright.design.rescale.StepCheck;
 import org.scalewright.design.rescale.TargetCurve;
 import org.scalewright.model.Scale;
@@ -151,5 +152,33 @@ class RescaleViewModelTest {
         session.selectedKeyProperty().set(70);
         vm.toSelected();
         assertEquals("70", vm.toProperty().get());
+    }
+
+    /** The same words as the command line (cli PlanPlainCommandTest checks that side): composed in design/rescale. */
+    @Test
+    void theSummaryAndTheRefusalsAreTheSentencesOfDesignRescale() {
+        vm.setRange(40, 60);
+        vm.kindProperty().set(RescaleViewModel.Kind.PLAIN);
+        assertTrue(vm.propose(), () -> String.join("\n", vm.problems()));
+        String summary = vm.summaryProperty().get();
+        for (String line : ProposalText.summary(vm.proposal())) {
+            assertTrue(summary.contains(line), line + " in " + summary);
+        }
+        assertTrue(summary.contains("Caution: "), "the cautions stay: " + summary);
+        assertTrue(summary.contains("eye protection"), summary);
+
+        vm.wireListProperty().set(RescaleWireList.CUSTOM);
+        vm.customWiresProperty().set("0.8mm 0.8mm");
+        assertFalse(vm.propose());
+        assertEquals("plain wire list: diameter 0.800 mm is listed twice", vm.problems().get(0));
+        vm.customWiresProperty().set("0.8mm; 13 99");
+        assertFalse(vm.propose());
+        assertTrue(vm.problems().get(0).startsWith("plain wire list: size 99 is not in the music-wire size table"),
+                vm.problems().get(0));
+        vm.wireListProperty().set(RescaleWireList.MUSIC);
+        vm.maxBreakProperty().set("150");
+        assertFalse(vm.propose());
+        assertEquals("maximum percent of breaking strength must be more than 0 and at most 100 %, was 150",
+                vm.problems().get(0));
     }
 }

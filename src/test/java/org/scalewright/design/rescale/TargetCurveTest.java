@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.scalewright.model.InvalidInput;
 import org.junit.jupiter.api.Test;
 
 /** Target curves: the ways of making them and the join between sections. */
@@ -42,7 +43,7 @@ class TargetCurveTest {
         assertEquals(720, c.at(32), 1e-12);
         assertEquals(780, c.at(38), 1e-12);
         assertEquals(700, c.at(30), 1e-12, "extended beyond the anchors");
-        assertThrows(IllegalArgumentException.class, () -> TargetSpec.Line.throughPresent(20, 38, false)
+        assertThrows(InvalidInput.class, () -> TargetSpec.Line.throughPresent(20, 38, false)
                 .build(KEYS, line(700, 10)));
     }
 
@@ -59,9 +60,9 @@ class TargetCurveTest {
         TargetCurve two = new TargetSpec.Spline(List.of(new ControlPoint(30, 700), new ControlPoint(40, 800)), false)
                 .build(KEYS, line(1, 0));
         assertEquals(750, two.at(35), 1e-12);
-        assertThrows(IllegalArgumentException.class, () -> new TargetSpec.Spline(pts.subList(0, 3), false)
+        assertThrows(InvalidInput.class, () -> new TargetSpec.Spline(pts.subList(0, 3), false)
                 .build(KEYS, line(1, 0)), "points must span the planned keys");
-        assertThrows(IllegalArgumentException.class, () -> new TargetSpec.Spline(pts.subList(0, 4), true));
+        assertThrows(InvalidInput.class, () -> new TargetSpec.Spline(pts.subList(0, 4), true));
     }
 
     /** A robust smooth trend is not dragged by one bumped note (the LOESS robustness iterations). */
@@ -97,7 +98,7 @@ class TargetCurveTest {
     void givenCurveMustCoverThePlannedKeys() {
         TargetCurve file = TargetCurve.throughPoints(new int[] {30, 35}, new double[] {700, 750}, "file");
         assertEquals(720, file.at(32), 1e-12, "straight between the keys given");
-        assertThrows(IllegalArgumentException.class, () -> new TargetSpec.Given(file).build(KEYS, line(700, 1)));
+        assertThrows(InvalidInput.class, () -> new TargetSpec.Given(file).build(KEYS, line(700, 1)));
         TargetCurve part = new TargetSpec.Given(file).build(new int[] {31, 34}, new double[] {1, 1});
         assertEquals(31, part.firstKey());
         assertEquals(34, part.lastKey());
@@ -185,7 +186,7 @@ class TargetCurveTest {
     void badCurvesAreRefused() {
         assertThrows(IllegalArgumentException.class, () -> new TargetCurve(1, new double[] {700, -1}, "bad"));
         assertThrows(IllegalArgumentException.class, () -> new TargetCurve(1, new double[0], "bad"));
-        assertThrows(IllegalArgumentException.class, () -> new TargetSpec.Loess(0, 4));
+        assertThrows(InvalidInput.class, () -> new TargetSpec.Loess(0, 4));
         assertThrows(IllegalArgumentException.class, () -> new ControlPoint(3, 0));
         assertThrows(IllegalArgumentException.class, () -> new TargetCurve(1, filled(3, 1), "x").at(5));
     }
