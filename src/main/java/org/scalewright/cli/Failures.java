@@ -1,15 +1,12 @@
 package org.scalewright.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.time.OffsetDateTime;
 import org.scalewright.design.rescale.PlanNotPossible;
 import org.scalewright.io.BadInputException;
+import org.scalewright.io.LogFiles;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.model.InvalidInput;
 import picocli.CommandLine;
@@ -84,12 +81,6 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
             e.printStackTrace(t);
             t.println();
         }
-        try {
-            Files.writeString(log, trace.toString(), StandardCharsets.UTF_8, StandardOpenOption.CREATE,
-                    StandardOpenOption.APPEND);
-            return true;
-        } catch (IOException | SecurityException io) {
-            return false;
-        }
+        return LogFiles.append(log, trace.toString());
     }
 }

@@ -1,16 +1,13 @@
 package org.scalewright.app.session;
 
-import java.io.IOException;
 import java.lang.management.ManagementFactory;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
 import javafx.animation.AnimationTimer;
 import org.jfree.chart.fx.ChartViewer;
+import org.scalewright.io.LogFiles;
 
 /**
  * Measurements of the live window, taken only with {@code -Dscalewright.timingReport=FILE}:
@@ -94,10 +91,6 @@ public final class Timings {
     }
 
     private static void write(Path file, String line) {
-        try {
-            Files.writeString(file, line, StandardCharsets.UTF_8, StandardOpenOption.CREATE, StandardOpenOption.APPEND);
-        } catch (IOException e) {
-            // a measurement that cannot be written is simply not taken
-        }
+        LogFiles.append(file, line); // a measurement that cannot be written is simply not taken
     }
 }
