@@ -15,13 +15,12 @@ final class PlanReportPrinter {
 
     /** @return {@code +1.5} / {@code -0.3} */
     static String signed(double v, int decimals) {
-        return String.format(java.util.Locale.ROOT, "%+." + decimals + "f", v);
+        return org.scalewright.model.NumberText.signed(v, decimals);
     }
 
     /** @return a plain wire or core as a rebuilder writes it: {@code #14.5} or {@code 0.825 mm} */
     static String wireName(org.scalewright.model.CoreWire w) {
-        return w.musicWireSize().isPresent() ? "#" + Formats.trim(w.musicWireSize().getAsDouble())
-                : Formats.f(w.diameter() * 1e3, 3) + " mm";
+        return org.scalewright.model.WireNotation.of(w, org.scalewright.model.LengthUnit.MM);
     }
 
     static String arrow(String before, String after) {

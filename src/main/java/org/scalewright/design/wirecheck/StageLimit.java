@@ -2,6 +2,7 @@ package org.scalewright.design.wirecheck;
 
 import java.util.Locale;
 import org.scalewright.model.Checks;
+import org.scalewright.model.NumberText;
 
 /**
  * How much the total tension on the plate may change in one pass of a pitch raise before the
@@ -44,6 +45,6 @@ public record StageLimit(double amount, boolean percent) {
     }
 
     private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 }
