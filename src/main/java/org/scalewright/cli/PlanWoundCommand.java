@@ -177,7 +177,7 @@ public final class PlanWoundCommand implements Callable<Integer> {
                 : "as now") + "; cores: " + (o.cores().isEmpty() ? "kept" : "chosen from the list")
                 + (o.joinBreakKeys() > 0 ? ", re-chosen for " + o.joinBreakKeys() + " keys either side of a break" : "")
                 + "; maximum " + Formats.trim(p.maxBreakPct()) + " % of breaking strength");
-        w.println("wire: core/wrap[+second wrap] in mm, metal (co copper, ir iron, st steel)");
+        w.println(org.scalewright.model.WireNotation.LEGEND);
         w.println();
         TextTable t = new TextTable(">key", "note", "section", "wire", ">tension N", pct ? ">target %" : ">target N",
                 ">err %", ">core % break", ">B");

@@ -15,6 +15,10 @@ import java.util.OptionalDouble;
  * soft iron, {@code St} steel.
  */
 public final class WireNotation {
+    /** The notation in words, for the legend of a table or a file. */
+    public static final String LEGEND = "wire: #size or diameter; wound: core / wrap1 + wrap2, unit, wrap metal "
+            + "(Cu copper, Fe iron, St steel), (OD outside diameter)";
+
     private WireNotation() {
     }
 

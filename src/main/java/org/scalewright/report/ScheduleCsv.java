@@ -60,7 +60,7 @@ public final class ScheduleCsv {
         }
         List<String> com = new ArrayList<>(comments);
         com.add("string schedule: " + schedule.rows().size() + " keys, " + schedule.totalStrings() + " strings");
-        com.add("wire = music-wire size (#) or diameter; wound: core / wrap1 + wrap2, mm, metal (Cu, Fe, St), (OD outside diameter)");
+        com.add(WireNotation.LEGEND);
         return new CsvSheet(com, h, rows);
     }
 
