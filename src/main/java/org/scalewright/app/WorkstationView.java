@@ -28,7 +28,6 @@ import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
 import org.scalewright.app.curves.CurvesView;
 import org.scalewright.app.export.ExportMenu;
-import org.scalewright.app.export.ExportViewModel;
 import org.scalewright.app.session.FxPrompts;
 import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.table.FlagsView;

@@ -1,43 +1,33 @@
 package org.scalewright.cli;
 
-import java.util.Locale;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
+import org.scalewright.model.WireNotation;
 
-/** Number and wire formatting for the terminal. */
+/** The terminal's short names for the number and wire texts of {@link NumberText} and {@link WireNotation}. */
 final class Formats {
     private Formats() {
     }
 
     static String f(double v, int decimals) {
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return NumberText.fixed(v, decimals);
     }
 
     static String b(double v) {
-        return String.format(Locale.ROOT, "%.2e", v);
+        return NumberText.scientific(v, 2);
     }
 
-    /** @return the wire as a rebuilder writes it: {@code 14.5} or {@code 1.100 mm}; wound: core + wraps */
+    /** @return the wire in the program's one notation ({@link WireNotation}), diameters in mm */
     static String wire(Note n) {
-        String core = n.wire().musicWireSize().isPresent()
-                ? "#" + trim(n.wire().musicWireSize().getAsDouble())
-                : f(n.wire().diameter() * 1e3, 3);
-        if (!n.isWound()) {
-            return core;
-        }
-        String w = core + "/" + f(n.wrap().inner() * 1e3, 2);
-        if (n.wrap().isDouble()) {
-            w += "+" + f(n.wrap().outer() * 1e3, 2);
-        }
-        return w + " " + n.wrap().metal().sheetName().substring(0, 2);
+        return WireNotation.of(n);
     }
 
     static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 
     static String kN(double newtons) {
-        return f(newtons / 1000, 1) + " kN (" + String.format(Locale.ROOT, "%,.0f",
-                UnitConversions.newtonsToLbf(newtons)) + " lbf)";
+        return f(newtons / 1000, 1) + " kN (" + NumberText.grouped(UnitConversions.newtonsToLbf(newtons)) + " lbf)";
     }
 }

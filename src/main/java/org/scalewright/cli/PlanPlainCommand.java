@@ -5,7 +5,6 @@ import java.util.List;
 import org.scalewright.design.rescale.KeyChange;
 import org.scalewright.design.rescale.PlainPlanOptions;
 import org.scalewright.design.rescale.PlainPlanner;
-import org.scalewright.design.rescale.PlanChecks;
 import org.scalewright.design.rescale.Proposal;
 import org.scalewright.design.rescale.TargetCurve;
 import org.scalewright.design.rescale.WireLists;

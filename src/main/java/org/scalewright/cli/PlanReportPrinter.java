@@ -7,6 +7,8 @@ import org.scalewright.design.rescale.ProposalText;
 import org.scalewright.design.rescale.StepCheck;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.model.CoreWire;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.WireNotation;
 
 /**
  * Lays out the summary shared by {@code plan-plain} and {@code plan-wound} on the terminal:
@@ -18,13 +20,12 @@ final class PlanReportPrinter {
 
     /** @return {@code +1.5} / {@code -0.3} */
     static String signed(double v, int decimals) {
-        return String.format(java.util.Locale.ROOT, "%+." + decimals + "f", v);
+        return org.scalewright.model.NumberText.signed(v, decimals);
     }
 
     /** @return a plain wire or core as a rebuilder writes it: {@code #14.5} or {@code 0.825 mm} */
     static String wireName(CoreWire w) {
-        return w.musicWireSize().isPresent() ? "#" + Formats.trim(w.musicWireSize().getAsDouble())
-                : Formats.f(w.diameter() * 1e3, 3) + " mm";
+        return WireNotation.of(w, LengthUnit.MM);
     }
 
     static String arrow(String before, String after) {

@@ -13,6 +13,7 @@ import org.scalewright.design.rescale.WireLists;
 import org.scalewright.design.rescale.WoundPlanOptions;
 import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.design.rescale.WrapWires;
+import org.scalewright.model.WireNotation;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import picocli.CommandLine.ArgGroup;
@@ -117,7 +118,7 @@ public final class PlanWoundCommand extends PlanCommand {
                 : "as now") + "; cores: " + (o.cores().isEmpty() ? "kept" : "chosen from the list")
                 + (o.joinBreakKeys() > 0 ? ", re-chosen for " + o.joinBreakKeys() + " keys either side of a break" : "")
                 + "; maximum " + Formats.trim(p.maxBreakPct()) + " % of breaking strength");
-        w.println("wire: core/wrap[+second wrap] in mm, metal (co copper, ir iron, st steel)");
+        w.println(WireNotation.LEGEND);
     }
 
     @Override

@@ -7,12 +7,12 @@ import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.design.stretch.TuningStretch;
-import org.scalewright.io.CsvCells;
-import org.scalewright.report.CsvSheet;
-import org.scalewright.report.StretchCsv;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
+import org.scalewright.report.CsvSheet;
+import org.scalewright.report.StretchCsv;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
@@ -65,8 +65,8 @@ public final class StretchCommand implements Callable<Integer> {
         StretchPoint high = c.points().get(c.points().size() - 1);
         if (low.stretchCents().isPresent() && high.stretchCents().isPresent()) {
             w.println();
-            w.println("Stretch from " + CsvCells.fixed(low.stretchCents().getAsDouble(), 1) + " cents at "
-                    + low.noteName() + " to " + CsvCells.fixed(high.stretchCents().getAsDouble(), 1) + " cents at "
+            w.println("Stretch from " + NumberText.rounded(low.stretchCents().getAsDouble(), 1) + " cents at "
+                    + low.noteName() + " to " + NumberText.rounded(high.stretchCents().getAsDouble(), 1) + " cents at "
                     + high.noteName() + ".");
         }
     }

@@ -3,6 +3,7 @@ package org.scalewright.io;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.Flag;
 import org.scalewright.physics.NoteResult;
@@ -25,9 +26,9 @@ public final class AnalysisCsv {
         if (!a.scale().title().isEmpty()) {
             c.add("scale: " + a.scale().title());
         }
-        c.add("a4_hz: " + CsvCells.number(a.scale().pitch().a4()));
+        c.add("a4_hz: " + NumberText.number(a.scale().pitch().a4()));
         c.add("strength table: " + a.settings().strength().name());
-        c.add("total tension: " + CsvCells.fixed(a.totalTension(), 0) + " N");
+        c.add("total tension: " + NumberText.rounded(a.totalTension(), 0) + " N");
         return c;
     }
 
@@ -35,15 +36,15 @@ public final class AnalysisCsv {
     public static List<List<String>> rows(ScaleAnalysis a) {
         List<List<String>> rows = new ArrayList<>(a.notes().size());
         for (NoteResult r : a.notes()) {
-            rows.add(List.of(Integer.toString(r.key()), r.noteName(), r.section(), CsvCells.fixed(r.frequency(), 4),
+            rows.add(List.of(Integer.toString(r.key()), r.noteName(), r.section(), NumberText.rounded(r.frequency(), 4),
                     Integer.toString(r.strings()), Boolean.toString(r.wound()),
-                    CsvCells.fixed(r.coreDiameter() * 1e3, 4), CsvCells.fixed(r.massPerLength() * 1e3, 5),
-                    CsvCells.fixed(r.tension(), 2), CsvCells.fixed(UnitConversions.newtonsToLbf(r.tension()), 2),
-                    CsvCells.fixed(r.noteTension(), 2), CsvCells.fixed(r.stress() / 1e6, 2),
-                    CsvCells.fixed(r.breakingStrength() / 1e6, 2), CsvCells.fixed(r.breakPct(), 3),
-                    CsvCells.scientific(r.inharmonicity()), CsvCells.fixed(r.headroomCents(), 1),
-                    CsvCells.fixed(r.breakingFrequency(), 3), CsvCells.fixed(r.impedance(), 4),
-                    CsvCells.fixed(r.elongation() * 1e3, 3), r.band().word(),
+                    NumberText.rounded(r.coreDiameter() * 1e3, 4), NumberText.rounded(r.massPerLength() * 1e3, 5),
+                    NumberText.rounded(r.tension(), 2), NumberText.rounded(UnitConversions.newtonsToLbf(r.tension()), 2),
+                    NumberText.rounded(r.noteTension(), 2), NumberText.rounded(r.stress() / 1e6, 2),
+                    NumberText.rounded(r.breakingStrength() / 1e6, 2), NumberText.rounded(r.breakPct(), 3),
+                    NumberText.scientific(r.inharmonicity(), 4), NumberText.rounded(r.headroomCents(), 1),
+                    NumberText.rounded(r.breakingFrequency(), 3), NumberText.rounded(r.impedance(), 4),
+                    NumberText.rounded(r.elongation() * 1e3, 3), r.band().word(),
                     r.flags().stream().map(Flag::detail).collect(Collectors.joining("; "))));
         }
         return rows;

@@ -1,12 +1,10 @@
 package org.scalewright.io;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
-
-/** Formatting of cells for the CSV files the program writes. */
+/**
+ * Spreadsheet safety of the text cells the program writes; numbers are written by
+ * {@link org.scalewright.model.NumberText}.
+ */
 public final class CsvCells {
-    private static final MathContext DIGITS = new MathContext(10);
-
     private CsvCells() {
     }
 
@@ -33,33 +31,5 @@ public final class CsvCells {
         } catch (NumberFormatException e) {
             return false;
         }
-    }
-
-    /** @return a number with up to 10 significant digits, no exponent, no trailing zeros */
-    public static String number(double v) {
-        if (!Double.isFinite(v)) {
-            return "";
-        }
-        if (v == 0) {
-            return "0";
-        }
-        return new BigDecimal(v).round(DIGITS).stripTrailingZeros().toPlainString();
-    }
-
-    /** @return a number rounded to {@code decimals} places, trailing zeros kept off */
-    public static String fixed(double v, int decimals) {
-        if (!Double.isFinite(v)) {
-            return "";
-        }
-        BigDecimal b = BigDecimal.valueOf(v).setScale(decimals, java.math.RoundingMode.HALF_EVEN).stripTrailingZeros();
-        return b.signum() == 0 ? "0" : b.toPlainString();
-    }
-
-    /** @return a number in scientific notation with 4 significant digits (for B) */
-    public static String scientific(double v) {
-        if (!Double.isFinite(v)) {
-            return "";
-        }
-        return String.format(java.util.Locale.ROOT, "%.4e", v);
     }
 }

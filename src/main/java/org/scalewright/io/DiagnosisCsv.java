@@ -6,6 +6,7 @@ import java.util.OptionalDouble;
 import org.scalewright.design.diagnosis.DiagnosedNote;
 import org.scalewright.design.diagnosis.DiagnosisReport;
 import org.scalewright.design.diagnosis.Remedy;
+import org.scalewright.model.NumberText;
 import org.scalewright.physics.NoteResult;
 
 /** The per-note results of a section diagnosis as CSV rows in SI (DESIGN §5, {@code diagnose --out}). */
@@ -27,9 +28,9 @@ public final class DiagnosisCsv {
             c.add("scale: " + report.request().scale().title());
         }
         c.add("keys: " + report.request().range());
-        c.add("a4_hz: " + CsvCells.number(report.request().scale().pitch().a4()));
+        c.add("a4_hz: " + NumberText.number(report.request().scale().pitch().a4()));
         c.add("strength table: " + report.request().settings().strength().name());
-        c.add("caution margin: " + CsvCells.number(report.request().marginPct()) + " %");
+        c.add("caution margin: " + NumberText.number(report.request().marginPct()) + " %");
         c.add("cause: " + report.finding().cause().words());
         for (String p : report.finding().explanation()) {
             c.add("finding: " + p);
@@ -50,21 +51,21 @@ public final class DiagnosisCsv {
         for (DiagnosedNote d : report.notes()) {
             NoteResult r = d.result();
             rows.add(List.of(Integer.toString(r.key()), r.noteName(), r.section(), Boolean.toString(r.wound()),
-                    CsvCells.fixed(d.speakingLength() * 1e3, 2), CsvCells.fixed(r.coreDiameter() * 1e3, 4),
-                    CsvCells.fixed(r.frequency(), 4), CsvCells.fixed(r.tension(), 2),
-                    CsvCells.fixed(r.stress() / 1e6, 2), CsvCells.fixed(r.breakingStrength() / 1e6, 2),
-                    CsvCells.fixed(r.breakPct(), 3), CsvCells.fixed(r.headroomCents(), 1),
-                    CsvCells.fixed(r.breakingFrequency(), 3), CsvCells.fixed(d.trendPct(), 3),
-                    CsvCells.fixed(d.trendDeviationPct(), 2), Boolean.toString(d.standsOut()),
-                    CsvCells.fixed(d.trendLength() * 1e3, 2), CsvCells.fixed(d.share().lengthPct(), 2),
-                    CsvCells.fixed(d.share().pitchPct(), 2), CsvCells.fixed(d.share().massPct(), 2),
-                    CsvCells.fixed(d.share().strengthPct(), 2), mm(d.lengthForTrend()), mm(d.lengthNeeded()),
+                    NumberText.rounded(d.speakingLength() * 1e3, 2), NumberText.rounded(r.coreDiameter() * 1e3, 4),
+                    NumberText.rounded(r.frequency(), 4), NumberText.rounded(r.tension(), 2),
+                    NumberText.rounded(r.stress() / 1e6, 2), NumberText.rounded(r.breakingStrength() / 1e6, 2),
+                    NumberText.rounded(r.breakPct(), 3), NumberText.rounded(r.headroomCents(), 1),
+                    NumberText.rounded(r.breakingFrequency(), 3), NumberText.rounded(d.trendPct(), 3),
+                    NumberText.rounded(d.trendDeviationPct(), 2), Boolean.toString(d.standsOut()),
+                    NumberText.rounded(d.trendLength() * 1e3, 2), NumberText.rounded(d.share().lengthPct(), 2),
+                    NumberText.rounded(d.share().pitchPct(), 2), NumberText.rounded(d.share().massPct(), 2),
+                    NumberText.rounded(d.share().strengthPct(), 2), mm(d.lengthForTrend()), mm(d.lengthNeeded()),
                     r.band().word()));
         }
         return rows;
     }
 
     private static String mm(OptionalDouble v) {
-        return v.isPresent() ? CsvCells.fixed(v.getAsDouble() * 1e3, 1) : "";
+        return v.isPresent() ? NumberText.rounded(v.getAsDouble() * 1e3, 1) : "";
     }
 }

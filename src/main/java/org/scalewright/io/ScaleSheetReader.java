@@ -2,6 +2,7 @@ package org.scalewright.io;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -76,8 +77,9 @@ public final class ScaleSheetReader {
         }
         List<Note> notes = new ArrayList<>();
         Map<Integer, Integer> keyLines = new HashMap<>();
+        Map<SheetColumn, Integer> decimals = new EnumMap<>(SheetColumn.class);
         for (CsvTable.Row row : table.rows()) {
-            Note n = new RowReader(file, header, row, sizes, problems).note();
+            Note n = new RowReader(file, header, row, sizes, problems, decimals).note();
             if (n != null) {
                 Integer earlier = keyLines.putIfAbsent(n.key(), row.line());
                 if (earlier != null) {
@@ -97,7 +99,8 @@ public final class ScaleSheetReader {
         }
         List<String> freeComments = table.comments().stream()
                 .filter(c -> !isSetting(c, "title") && !isSetting(c, "a4_hz")).toList();
-        return new Scale(title == null ? "" : title, pitch, notes, header.layout().withComments(freeComments));
+        return new Scale(title == null ? "" : title, pitch, notes, header.layout().withComments(freeComments)
+                .withDecimals(decimals));
     }
 
     private static boolean isSetting(String comment, String name) {
@@ -113,8 +116,11 @@ public final class ScaleSheetReader {
         private final WireSizeTable sizes;
         private final List<SheetProblem> problems;
         private final int before;
+        private final Map<SheetColumn, Integer> decimals;
 
-        RowReader(Path file, SheetHeader header, CsvTable.Row row, WireSizeTable sizes, List<SheetProblem> problems) {
+        RowReader(Path file, SheetHeader header, CsvTable.Row row, WireSizeTable sizes, List<SheetProblem> problems,
+                  Map<SheetColumn, Integer> decimals) {
+            this.decimals = decimals;
             this.file = file;
             this.header = header;
             this.row = row;
@@ -264,7 +270,17 @@ public final class ScaleSheetReader {
                 problem(c, "must be greater than 0, was " + t);
                 return null;
             }
+            decimals.merge(c, decimalsTyped(t), Math::min);
             return v;
+        }
+
+        /** @return the decimals of a typed number: {@code 0.30} → 2, {@code 1480} and {@code 1e-3} → 0 */
+        private static int decimalsTyped(String t) {
+            int dot = t.indexOf('.');
+            if (dot < 0 || t.indexOf('e') >= 0 || t.indexOf('E') >= 0) {
+                return 0;
+            }
+            return t.length() - dot - 1;
         }
 
         /** @return the length in metres */

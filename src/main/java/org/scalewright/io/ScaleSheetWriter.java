@@ -4,16 +4,14 @@ import com.opencsv.CSVWriter;
 import com.opencsv.ICSVWriter;
 import java.io.IOException;
 import java.io.StringWriter;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
-import java.util.function.DoubleUnaryOperator;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.model.SheetLayout;
@@ -43,7 +41,7 @@ public final class ScaleSheetWriter {
         if (!scale.title().isEmpty()) {
             out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
         }
-        out.write("# a4_hz: " + exact(scale.pitch().a4(), x -> x) + "\n");
+        out.write("# a4_hz: " + exact(scale.pitch().a4()) + "\n");
         for (String c : layout.comments()) {
             out.write("# " + c.replace('\n', ' ').replace('\r', ' ') + "\n");
         }
@@ -63,7 +61,8 @@ public final class ScaleSheetWriter {
             for (Note n : scale.notes()) {
                 List<String> cells = new ArrayList<>();
                 for (SheetColumn c : layout.columns()) {
-                    cells.add(cell(n, c, layout));
+                    cells.add(c == SheetColumn.SECTION || c == SheetColumn.REMARK || c == SheetColumn.WRAP_METAL
+                            ? cell(n, c, layout) : padded(cell(n, c, layout), layout.decimalsOf(c)));
                 }
                 csv.writeNext(cells.toArray(String[]::new));
             }
@@ -119,20 +118,33 @@ public final class ScaleSheetWriter {
             case KEY -> Integer.toString(n.key());
             case STRINGS -> Integer.toString(n.strings());
             case SPEAKING_LENGTH -> length(n.speakingLength(), c, layout);
-            case WIRE_SIZE -> n.wire().musicWireSize().isPresent() ? CsvCells.number(n.wire().musicWireSize().getAsDouble()) : "";
+            case WIRE_SIZE -> n.wire().musicWireSize().isPresent() ? NumberText.plain(n.wire().musicWireSize().getAsDouble()) : "";
             case WIRE_DIAMETER -> n.wire().musicWireSize().isPresent() && layout.has(SheetColumn.WIRE_SIZE) ? ""
                     : length(n.wire().diameter(), c, layout);
             case WRAP1 -> n.isWound() ? length(n.wrap().inner(), c, layout) : "";
             case WRAP2 -> n.isWound() && n.wrap().isDouble() ? length(n.wrap().outer(), c, layout) : "";
             case WRAP_METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
-            case PITCH_HZ -> n.pitchHz().isPresent() ? exact(n.pitchHz().getAsDouble(), x -> x) : "";
-            case CENTS -> n.cents() == 0 ? "" : exact(n.cents(), x -> x);
+            case PITCH_HZ -> n.pitchHz().isPresent() ? exact(n.pitchHz().getAsDouble()) : "";
+            case CENTS -> n.cents() == 0 ? "" : exact(n.cents());
             case STRIKE -> optionalLength(n.strikePoint(), c, layout);
             case TOTAL_LENGTH -> optionalLength(n.stretchedLength(), c, layout);
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
             case SECTION -> CsvCells.safeText(oneLine(n.section()));
             case REMARK -> CsvCells.safeText(oneLine(n.remark()));
         };
+    }
+
+    /** @return a number with zeros added up to {@code decimals} decimals, as its column was typed ({@code 0.3} → {@code 0.30}) */
+    static String padded(String number, int decimals) {
+        if (number.isEmpty() || decimals == 0 || number.indexOf('E') >= 0 || number.indexOf('e') >= 0) {
+            return number;
+        }
+        int dot = number.indexOf('.');
+        int has = dot < 0 ? 0 : number.length() - dot - 1;
+        if (has >= decimals) {
+            return number;
+        }
+        return (dot < 0 ? number + "." : number) + "0".repeat(decimals - has);
     }
 
     /** A sheet row is one line (the reader reads line by line): line breaks in free text become spaces. */
@@ -142,24 +154,25 @@ public final class ScaleSheetWriter {
 
     private static String length(double metres, SheetColumn c, SheetLayout layout) {
         LengthUnit unit = layout.unitOf(c);
-        return exact(metres, unit::toMetres, unit.fromMetres(metres));
-    }
-
-    private static String exact(double value, DoubleUnaryOperator readBack) {
-        return exact(value, readBack, value);
+        boolean diameter = c == SheetColumn.WIRE_DIAMETER || c == SheetColumn.WRAP1 || c == SheetColumn.WRAP2;
+        return NumberText.sheetCell(metres, unit::toMetres, unit.fromMetres(metres), places(unit, diameter));
     }
 
     /**
-     * @return the shortest decimal for {@code shown} with 10 to 17 significant digits that the reader
-     *         turns back into exactly {@code value} ({@code readBack} of the parsed text), so that
-     *         read → write → read keeps every value as it was, not only the first 10 digits
+     * The precision a computed value is written to (a typed value keeps its digits, {@link NumberText#sheetCell}):
+     * a diameter to 0.001 mm, a length to 0.1 mm; in inches one digit more than 0.0001 in and 0.01 in, so
+     * that a metric diameter or length written on an inch sheet reads back to the same 0.001 mm or 0.1 mm.
      */
-    private static String exact(double value, DoubleUnaryOperator readBack, double shown) {
-        String text = CsvCells.number(shown);
-        for (int digits = 11; digits <= 17 && readBack.applyAsDouble(Double.parseDouble(text)) != value; digits++) {
-            text = new BigDecimal(shown).round(new MathContext(digits)).stripTrailingZeros().toPlainString();
+    static int places(LengthUnit unit, boolean diameter) {
+        if (unit == LengthUnit.MM) {
+            return diameter ? 3 : 1;
         }
-        return text;
+        return diameter ? 5 : 3;
+    }
+
+    /** @return a value with no catalogue precision (Hz, cents): as typed, else without arithmetic noise */
+    private static String exact(double value) {
+        return NumberText.sheetCellExact(value, x -> x, value);
     }
 
     private static String optionalLength(OptionalDouble v, SheetColumn c, SheetLayout layout) {

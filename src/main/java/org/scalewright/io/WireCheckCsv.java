@@ -10,6 +10,7 @@ import org.scalewright.design.wirecheck.WireCheckNote;
 import org.scalewright.design.wirecheck.WireCheckReport;
 import org.scalewright.design.wirecheck.WireCheckRequest;
 import org.scalewright.model.CoreWire;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
 
 /** The per-note results of a wire check as CSV rows in SI (DESIGN §5, {@code check-wire --out}). */
@@ -31,23 +32,23 @@ public final class WireCheckCsv {
         if (!q.scale().title().isEmpty()) {
             c.add("scale: " + q.scale().title());
         }
-        c.add("sheet a4_hz: " + CsvCells.number(q.scale().pitch().a4()));
-        c.add("target a4_hz: " + CsvCells.number(q.target().a4()));
+        c.add("sheet a4_hz: " + NumberText.number(q.scale().pitch().a4()));
+        c.add("target a4_hz: " + NumberText.number(q.target().a4()));
         c.add("present strength table: " + q.settings().strength().name());
         c.add("replacement strength table: " + q.replacement().name());
         c.add("wire: " + q.conversion().describe());
         c.add("present state: " + (q.flat().isPerNote() ? "cents flat per note (interpolated between measured keys)"
-                : CsvCells.number(q.flat().uniformCents()) + " cents flat on every note"));
-        c.add("overpull: " + CsvCells.number(q.overpullPct()) + " % of how flat each note is");
+                : NumberText.number(q.flat().uniformCents()) + " cents flat on every note"));
+        c.add("overpull: " + NumberText.number(q.overpullPct()) + " % of how flat each note is");
         TensionTotals t = report.totals();
-        c.add(String.format(Locale.ROOT, "total tension present: %s N (%s lbf)", CsvCells.fixed(t.present(), 0),
-                CsvCells.fixed(UnitConversions.newtonsToLbf(t.present()), 0)));
+        c.add(String.format(Locale.ROOT, "total tension present: %s N (%s lbf)", NumberText.rounded(t.present(), 0),
+                NumberText.rounded(UnitConversions.newtonsToLbf(t.present()), 0)));
         c.add(String.format(Locale.ROOT, "total tension after, at target: %s N (%s lbf), change %s N (%s lbf)",
-                CsvCells.fixed(t.afterAtTarget(), 0), CsvCells.fixed(UnitConversions.newtonsToLbf(t.afterAtTarget()), 0),
-                CsvCells.fixed(t.changeToTarget(), 0), CsvCells.fixed(UnitConversions.newtonsToLbf(t.changeToTarget()), 0)));
+                NumberText.rounded(t.afterAtTarget(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.afterAtTarget()), 0),
+                NumberText.rounded(t.changeToTarget(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.changeToTarget()), 0)));
         c.add(String.format(Locale.ROOT, "total tension at peak: %s N (%s lbf), change %s N (%s lbf)",
-                CsvCells.fixed(t.peak(), 0), CsvCells.fixed(UnitConversions.newtonsToLbf(t.peak()), 0),
-                CsvCells.fixed(t.changeToPeak(), 0), CsvCells.fixed(UnitConversions.newtonsToLbf(t.changeToPeak()), 0)));
+                NumberText.rounded(t.peak(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.peak()), 0),
+                NumberText.rounded(t.changeToPeak(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.changeToPeak()), 0)));
         StageAdvice s = report.stages();
         c.add("raise in stages: " + (s.advised() ? "yes" : "no"));
         for (String r : s.reasons()) {
@@ -70,15 +71,15 @@ public final class WireCheckCsv {
         for (WireCheckNote w : report.notes()) {
             rows.add(List.of(Integer.toString(w.key()), w.noteName(), w.presentNote().section(),
                     Boolean.toString(w.presentNote().isWound()), Integer.toString(w.presentNote().strings()),
-                    size(w.presentNote().wire()), CsvCells.fixed(w.presentNote().wire().diameter() * 1e3, 4),
-                    size(w.replacementNote().wire()), CsvCells.fixed(w.replacementNote().wire().diameter() * 1e3, 4),
-                    CsvCells.fixed(w.centsFlat(), 2), w.flatSource().name().toLowerCase(Locale.ROOT),
-                    CsvCells.fixed(w.present().frequency(), 4), CsvCells.fixed(w.after().frequency(), 4),
-                    CsvCells.fixed(w.peak().frequency(), 4), CsvCells.fixed(w.before().breakingStrength() / 1e6, 2),
-                    CsvCells.fixed(w.after().breakingStrength() / 1e6, 2), CsvCells.fixed(w.present().tension(), 2),
-                    CsvCells.fixed(w.after().tension(), 2), CsvCells.fixed(w.peak().tension(), 2),
-                    CsvCells.fixed(w.breakPctBefore(), 3), CsvCells.fixed(w.breakPctAfter(), 3),
-                    CsvCells.fixed(w.breakPctPeak(), 3), CsvCells.fixed(w.headroomCentsAfter(), 1),
+                    size(w.presentNote().wire()), NumberText.rounded(w.presentNote().wire().diameter() * 1e3, 4),
+                    size(w.replacementNote().wire()), NumberText.rounded(w.replacementNote().wire().diameter() * 1e3, 4),
+                    NumberText.rounded(w.centsFlat(), 2), w.flatSource().name().toLowerCase(Locale.ROOT),
+                    NumberText.rounded(w.present().frequency(), 4), NumberText.rounded(w.after().frequency(), 4),
+                    NumberText.rounded(w.peak().frequency(), 4), NumberText.rounded(w.before().breakingStrength() / 1e6, 2),
+                    NumberText.rounded(w.after().breakingStrength() / 1e6, 2), NumberText.rounded(w.present().tension(), 2),
+                    NumberText.rounded(w.after().tension(), 2), NumberText.rounded(w.peak().tension(), 2),
+                    NumberText.rounded(w.breakPctBefore(), 3), NumberText.rounded(w.breakPctAfter(), 3),
+                    NumberText.rounded(w.breakPctPeak(), 3), NumberText.rounded(w.headroomCentsAfter(), 1),
                     w.after().band().word(), w.peak().band().word(), Boolean.toString(w.overDanger()),
                     w.wireChange().remark()));
         }
@@ -91,13 +92,13 @@ public final class WireCheckCsv {
         for (RaiseStage st : s.stages()) {
             lines.add(String.format(Locale.ROOT, "pass %d: to %.0f %% of the raise; total %s -> %s N at the peak; "
                             + "highest %.1f %% of breaking strength (key %d)", st.number(), 100 * st.endFraction(),
-                    CsvCells.fixed(st.totalAtStart(), 0), CsvCells.fixed(st.totalAtPeak(), 0), st.maxPeakPct(),
+                    NumberText.rounded(st.totalAtStart(), 0), NumberText.rounded(st.totalAtPeak(), 0), st.maxPeakPct(),
                     st.maxPeakKey()));
         }
         return lines;
     }
 
     private static String size(CoreWire w) {
-        return w.musicWireSize().isPresent() ? CsvCells.number(w.musicWireSize().getAsDouble()) : "";
+        return w.musicWireSize().isPresent() ? NumberText.number(w.musicWireSize().getAsDouble()) : "";
     }
 }

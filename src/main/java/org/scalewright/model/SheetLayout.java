@@ -13,13 +13,22 @@ import java.util.Map;
  * @param units    the unit of each length column present
  * @param comments the sheet's free comment lines before the header (without the {@code #}),
  *                 other than the {@code title:} and {@code a4_hz:} settings, written back as they were
+ * @param decimals per number column, the fewest decimals any of its cells was typed with
+ *                 ({@code 0.30, 1.25} → 2), so that written back the column keeps its look
  */
-public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments) {
+public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments,
+                          Map<SheetColumn, Integer> decimals) {
 
     public SheetLayout {
         columns = List.copyOf(columns);
         units = Map.copyOf(units);
         comments = comments == null ? List.of() : List.copyOf(comments);
+        decimals = decimals == null ? Map.of() : Map.copyOf(decimals);
+    }
+
+    /** A layout whose number columns have no decimals to keep. */
+    public SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments) {
+        this(columns, units, comments, Map.of());
     }
 
     /** A layout without comment lines. */
@@ -29,7 +38,17 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
 
     /** @return this layout with other comment lines */
     public SheetLayout withComments(List<String> newComments) {
-        return new SheetLayout(columns, units, newComments);
+        return new SheetLayout(columns, units, newComments, decimals);
+    }
+
+    /** @return this layout with the fewest decimals of each number column as read */
+    public SheetLayout withDecimals(Map<SheetColumn, Integer> newDecimals) {
+        return new SheetLayout(columns, units, comments, newDecimals);
+    }
+
+    /** @return the fewest decimals the column's cells were typed with, 0 when not known */
+    public int decimalsOf(SheetColumn column) {
+        return decimals.getOrDefault(column, 0);
     }
 
     /** The layout used for a scale that has none yet: every column, lengths in millimetres. */
@@ -73,6 +92,6 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
         if (column.isLength()) {
             u.put(column, unitOf(column));
         }
-        return new SheetLayout(cols, u, comments);
+        return new SheetLayout(cols, u, comments, decimals);
     }
 }

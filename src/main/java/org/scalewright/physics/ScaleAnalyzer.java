@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 
 /** Analyses a whole scale: every note, neighbour steps, section and instrument totals. */
@@ -41,8 +42,8 @@ public final class ScaleAnalyzer {
             if (Math.abs(step) > limitPct) {
                 List<Flag> flags = new ArrayList<>(here.flags());
                 flags.add(new Flag(here.key(), FlagKind.NEIGHBOUR_STEP,
-                        "tension per string " + Decimals.signed(step, 1) + " % from key " + below.key() + " ("
-                        + KeyNames.name(below.key()) + "), more than " + Decimals.of(limitPct, 0) + " %"));
+                        "tension per string " + NumberText.signed(step, 1) + " % from key " + below.key() + " ("
+                        + KeyNames.name(below.key()) + "), more than " + NumberText.fixed(limitPct, 0) + " %"));
                 results[i] = withFlags(here, flags);
             }
         }

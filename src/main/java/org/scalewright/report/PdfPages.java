@@ -236,16 +236,7 @@ final class PdfPages implements AutoCloseable {
                 cs.addRect(MARGIN, y - h, sum(w), h);
                 cs.fill();
             }
-            float x = MARGIN;
-            for (int c = 0; c < n; c++) {
-                float ty = y - PAD - fs * 0.92f;
-                for (String s : cells.get(c)) {
-                    float tx = t.columns().get(c).right() ? x + w[c] - PAD - text.width(s, fs) : x + PAD;
-                    rawLine(font, s, fs, tx, ty, Color.BLACK);
-                    ty -= lead;
-                }
-                x += w[c];
-            }
+            drawCells(t, w, cells, font, text, fs, lead);
             y -= h;
         }
         cs.setStrokingColor(Color.GRAY);
@@ -261,17 +252,23 @@ final class PdfPages implements AutoCloseable {
         cs.setNonStrokingColor(new Color(0xDCE3EA));
         cs.addRect(MARGIN, y - h, sum(w), h);
         cs.fill();
+        drawCells(t, w, headerLines, bold, boldText, fs, lead);
+        y -= h;
+    }
+
+    /** Draws one table row's cells, each a list of lines, from the current height; numbers right-aligned. */
+    private void drawCells(PdfTable t, float[] w, List<List<String>> cells, PDFont f, PdfText measure, float fs,
+                           float lead) throws IOException {
         float x = MARGIN;
         for (int c = 0; c < w.length; c++) {
             float ty = y - PAD - fs * 0.92f;
-            for (String s : headerLines.get(c)) {
-                float tx = t.columns().get(c).right() ? x + w[c] - PAD - boldText.width(s, fs) : x + PAD;
-                rawLine(bold, s, fs, tx, ty, Color.BLACK);
+            for (String s : cells.get(c)) {
+                float tx = t.columns().get(c).right() ? x + w[c] - PAD - measure.width(s, fs) : x + PAD;
+                rawLine(f, s, fs, tx, ty, Color.BLACK);
                 ty -= lead;
             }
             x += w[c];
         }
-        y -= h;
     }
 
     private float[] columnWidths(PdfTable t, float fs) {

@@ -16,15 +16,18 @@ import org.scalewright.design.orders.WoundOrderRow;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.design.stretch.TuningStretch;
-import org.scalewright.report.PdfTable.Column;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.model.UnitConversions;
+import org.scalewright.model.WireNotation;
 import org.scalewright.model.Wrap;
 import org.scalewright.physics.Flag;
 import org.scalewright.physics.FlagKind;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.SectionTotal;
+import org.scalewright.report.PdfTable.Column;
 
 /**
  * The PDF report of one instrument (Apache PDFBox): title page with pitch standard, strength
@@ -88,14 +91,14 @@ public final class PdfReportWriter {
         List<List<String>> rows = new ArrayList<>();
         for (SectionTotal t : a.sections()) {
             rows.add(List.of(t.section().isEmpty() ? "(none)" : t.section(), t.firstKey() + "-" + t.lastKey(),
-                    Integer.toString(t.notes()), Integer.toString(t.strings()), Cells.f(t.tension() / 1000, 1),
-                    String.format(Locale.ROOT, "%,.0f", UnitConversions.newtonsToLbf(t.tension())),
-                    Cells.f(100 * t.tension() / a.totalTension(), 1)));
+                    Integer.toString(t.notes()), Integer.toString(t.strings()), NumberText.fixed(t.tension() / 1000, 1),
+                    NumberText.grouped(UnitConversions.newtonsToLbf(t.tension())),
+                    NumberText.fixed(100 * t.tension() / a.totalTension(), 1)));
         }
         int strings = a.sections().stream().mapToInt(SectionTotal::strings).sum();
         rows.add(List.of("whole instrument", first + "-" + last, Integer.toString(s.notes().size()),
-                Integer.toString(strings), Cells.f(a.totalTension() / 1000, 1),
-                String.format(Locale.ROOT, "%,.0f", UnitConversions.newtonsToLbf(a.totalTension())), "100.0"));
+                Integer.toString(strings), NumberText.fixed(a.totalTension() / 1000, 1),
+                NumberText.grouped(UnitConversions.newtonsToLbf(a.totalTension())), "100.0"));
         p.table(new PdfTable(List.of(Column.text("section"), Column.text("keys"), Column.number("notes"),
                 Column.number("strings"), Column.number("tension kN"), Column.number("tension lbf"),
                 Column.number("share %")), rows, Set.of(rows.size() - 1)));
@@ -157,7 +160,8 @@ public final class PdfReportWriter {
         p.newPage();
         p.heading("String schedule", 80);
         p.paragraph("Per key: strings per note, the plain wire (# = music-wire size) or the wound string (core / "
-                + "first wrap + second wrap, " + lu + ", and the wrap metal), speaking and stretched length, and per "
+                + "first wrap + second wrap, " + lu + ", the wrap metal: Cu copper, Fe iron, St steel, and in brackets "
+                + "the outside diameter), speaking and stretched length, and per "
                 + "string the tension and percent of breaking strength at the working pitch.");
         List<List<String>> rows = new ArrayList<>();
         for (ScheduleRow s : r.schedule().rows()) {
@@ -165,7 +169,7 @@ public final class PdfReportWriter {
             rows.add(List.of(Integer.toString(s.key()), s.noteName(), s.section(), Integer.toString(s.strings()),
                     spec(s.plainSize(), s.coreDiameter(), s.wrap(), imp), length(s.speakingLength(), imp),
                     s.stretchedLength().isPresent() ? length(s.stretchedLength().getAsDouble(), imp) : "",
-                    Cells.f(s.frequency(), 2), force(s.tension(), imp), Cells.f(s.breakPct(), 1),
+                    NumberText.fixed(s.frequency(), 2), force(s.tension(), imp), NumberText.fixed(s.breakPct(), 1),
                     n.flags().stream().map(f -> f.kind().word()).distinct().collect(Collectors.joining(", "))));
         }
         p.table(new PdfTable(List.of(Column.number("key"), Column.text("note"), Column.text("section"),
@@ -189,13 +193,13 @@ public final class PdfReportWriter {
         String du = imp ? "in (mm)" : "mm";
         List<List<String>> rows = new ArrayList<>();
         for (WoundOrderRow w : r.woundOrder().rows()) {
-            rows.add(List.of(Integer.toString(w.key()), w.noteName(), Cells.f(w.frequency(), 2),
+            rows.add(List.of(Integer.toString(w.key()), w.noteName(), NumberText.fixed(w.frequency(), 2),
                     Integer.toString(w.count()), diameter(w.coreDiameter(), imp), diameter(w.wrapInner(), imp),
                     w.doubleWound() ? diameter(w.wrapOuter(), imp) : "", w.metal().sheetName(),
                     w.stretchedLength().isPresent() ? lengthBoth(w.stretchedLength().getAsDouble(), imp) : "",
                     w.woundLength().isPresent() ? lengthBoth(w.woundLength().getAsDouble(), imp) : "",
-                    imp ? Cells.f(UnitConversions.newtonsToLbf(w.tension()), 1) + " (" + Cells.f(w.tension(), 0) + ")"
-                            : Cells.f(w.tension(), 0)));
+                    imp ? NumberText.fixed(UnitConversions.newtonsToLbf(w.tension()), 1) + " (" + NumberText.fixed(w.tension(), 0) + ")"
+                            : NumberText.fixed(w.tension(), 0)));
         }
         rows.add(List.of("", "total", "", Integer.toString(r.woundOrder().totalStrings()), "", "", "", "", "", "",
                 ""));
@@ -277,13 +281,13 @@ public final class PdfReportWriter {
         for (int i = 0; i < chosen.points().size(); i++) {
             StretchPoint pt = chosen.points().get(i);
             List<String> c = new ArrayList<>(List.of(Integer.toString(pt.key()), pt.noteName(),
-                    String.format(Locale.ROOT, "%.2e", pt.inharmonicity()), Cells.f(pt.equalTemperedHz(), 2)));
+                    NumberText.scientific(pt.inharmonicity(), 2), NumberText.fixed(pt.equalTemperedHz(), 2)));
             for (StretchCurve sc : ordered) {
                 StretchPoint q = sc.points().get(i);
-                c.add(q.stretchCents().isPresent() ? String.format(Locale.ROOT, "%+.2f",
-                        q.stretchCents().getAsDouble()) : "");
+                c.add(q.stretchCents().isPresent() ? NumberText.signed(
+                        q.stretchCents().getAsDouble(), 2) : "");
             }
-            c.add(pt.tunedHz().isPresent() ? Cells.f(pt.tunedHz().getAsDouble(), 2) : "");
+            c.add(pt.tunedHz().isPresent() ? NumberText.fixed(pt.tunedHz().getAsDouble(), 2) : "");
             rows.add(c);
         }
         p.table(new PdfTable(cols, rows));
@@ -326,40 +330,29 @@ public final class PdfReportWriter {
     }
 
     private static String kN(double newtons) {
-        return Cells.f(newtons / 1000, 1) + " kN (" + String.format(Locale.ROOT, "%,.0f",
-                UnitConversions.newtonsToLbf(newtons)) + " lbf)";
+        return NumberText.fixed(newtons / 1000, 1) + " kN (" + NumberText.grouped(UnitConversions.newtonsToLbf(newtons))
+                + " lbf)";
     }
 
     private static String spec(java.util.OptionalDouble size, double core, Wrap wrap, boolean imp) {
-        if (!imp) {
-            return Cells.wireSpec(size, core, wrap);
-        }
-        String c = size.isPresent() ? "#" + Cells.size(size.getAsDouble()) : Cells.in(core, 4);
-        if (wrap == null) {
-            return size.isPresent() ? c : c + " in";
-        }
-        String s = c + " / " + Cells.f(wrap.inner() / UnitConversions.METRES_PER_INCH, 4);
-        if (wrap.isDouble()) {
-            s += " + " + Cells.f(wrap.outer() / UnitConversions.METRES_PER_INCH, 4);
-        }
-        return s + " " + Cells.metalShort(wrap.metal());
+        return WireNotation.of(size, core, wrap, imp ? LengthUnit.IN : LengthUnit.MM);
     }
 
     private static String length(double metres, boolean imp) {
-        return imp ? Cells.f(metres / UnitConversions.METRES_PER_INCH, 2) : Cells.f(metres * 1e3, 1);
+        return imp ? NumberText.fixed(metres / UnitConversions.METRES_PER_INCH, 2) : NumberText.fixed(metres * 1e3, 1);
     }
 
     private static String lengthBoth(double metres, boolean imp) {
-        return imp ? Cells.f(metres / UnitConversions.METRES_PER_INCH, 2) + " (" + Cells.f(metres * 1e3, 0) + ")"
-                : Cells.f(metres * 1e3, 1);
+        return imp ? NumberText.fixed(metres / UnitConversions.METRES_PER_INCH, 2) + " (" + NumberText.fixed(metres * 1e3, 0) + ")"
+                : NumberText.fixed(metres * 1e3, 1);
     }
 
     private static String diameter(double metres, boolean imp) {
-        return imp ? Cells.f(metres / UnitConversions.METRES_PER_INCH, 4) + " (" + Cells.f(metres * 1e3, 2) + ")"
-                : Cells.f(metres * 1e3, 2);
+        return imp ? WireNotation.diameter(metres, LengthUnit.IN) + " (" + WireNotation.diameter(metres, LengthUnit.MM) + ")"
+                : WireNotation.diameter(metres, LengthUnit.MM);
     }
 
     private static String force(double newtons, boolean imp) {
-        return imp ? Cells.f(UnitConversions.newtonsToLbf(newtons), 1) : Cells.f(newtons, 0);
+        return imp ? NumberText.fixed(UnitConversions.newtonsToLbf(newtons), 1) : NumberText.fixed(newtons, 0);
     }
 }

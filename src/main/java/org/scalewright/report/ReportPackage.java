@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.BuiltInData;
-import org.scalewright.io.CsvCells;
+import org.scalewright.model.NumberText;
 import org.scalewright.physics.ScaleAnalysis;
 
 /**
@@ -59,7 +59,7 @@ public final class ReportPackage {
         List<String> l = new ArrayList<>();
         l.add("scale: " + c.title());
         l.add("sheet: " + c.sheetName());
-        l.add("a4_hz: " + CsvCells.number(c.analysis().scale().pitch().a4()));
+        l.add("a4_hz: " + NumberText.number(c.analysis().scale().pitch().a4()));
         l.add("strength table: " + c.analysis().settings().strength().name());
         return l;
     }

@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.design.orders.ScheduleRow;
 import org.scalewright.design.orders.StringSchedule;
-import org.scalewright.io.CsvCells;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
+import org.scalewright.model.WireNotation;
 
 /**
  * The string schedule as CSV ({@code schedule.csv}): SI columns, and for imperial units the
@@ -30,7 +32,7 @@ public final class ScheduleCsv {
         for (ScheduleRow r : schedule.rows()) {
             List<String> c = new ArrayList<>(List.of(Integer.toString(r.key()), r.noteName(), r.section(),
                     Integer.toString(r.strings()), Boolean.toString(r.wound()),
-                    Cells.wireSpec(r.plainSize(), r.coreDiameter(), r.wrap()), Cells.size(r.plainSize())));
+                    WireNotation.of(r.plainSize(), r.coreDiameter(), r.wrap(), LengthUnit.MM), Cells.size(r.plainSize())));
             diameter(c, r.coreDiameter(), imp);
             if (r.wound()) {
                 diameter(c, r.wrap().inner(), imp);
@@ -51,14 +53,14 @@ public final class ScheduleCsv {
             } else {
                 blank(c, imp);
             }
-            c.addAll(List.of(CsvCells.fixed(r.frequency(), 4), CsvCells.fixed(r.tension(), 1),
-                    CsvCells.fixed(UnitConversions.newtonsToLbf(r.tension()), 1), CsvCells.fixed(r.breakPct(), 2),
+            c.addAll(List.of(NumberText.rounded(r.frequency(), 4), NumberText.rounded(r.tension(), 1),
+                    NumberText.rounded(UnitConversions.newtonsToLbf(r.tension()), 1), NumberText.rounded(r.breakPct(), 2),
                     Boolean.toString(r.flagged())));
             rows.add(c);
         }
         List<String> com = new ArrayList<>(comments);
         com.add("string schedule: " + schedule.rows().size() + " keys, " + schedule.totalStrings() + " strings");
-        com.add("wire = music-wire size (#) or diameter; wound: core / wrap1 + wrap2 (mm) and metal");
+        com.add(WireNotation.LEGEND);
         return new CsvSheet(com, h, rows);
     }
 

@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
-import org.scalewright.io.CsvCells;
+import org.scalewright.model.NumberText;
 
 /**
  * The tuning stretch as CSV ({@code stretch.csv}): {@code key, note, stretch_cents} for the
@@ -32,9 +32,9 @@ public final class StretchCsv {
         for (int i = 0; i < chosen.points().size(); i++) {
             StretchPoint p = chosen.points().get(i);
             List<String> c = new ArrayList<>(List.of(Integer.toString(p.key()), p.noteName(),
-                    cents(p), octaveCell(chosen), CsvCells.scientific(p.inharmonicity()),
-                    CsvCells.fixed(p.equalTemperedHz(), 4),
-                    p.tunedHz().isPresent() ? CsvCells.fixed(p.tunedHz().getAsDouble(), 4) : ""));
+                    cents(p), octaveCell(chosen), NumberText.scientific(p.inharmonicity(), 4),
+                    NumberText.rounded(p.equalTemperedHz(), 4),
+                    p.tunedHz().isPresent() ? NumberText.rounded(p.tunedHz().getAsDouble(), 4) : ""));
             for (StretchCurve o : others) {
                 c.add(cents(o.points().get(i)));
             }
@@ -43,7 +43,7 @@ public final class StretchCsv {
         List<String> com = new ArrayList<>(comments);
         com.add("tuning stretch for " + chosen.octave().label() + " octaves (lower partial "
                 + chosen.octave().lowerPartial() + " = upper partial " + chosen.octave().upperPartial()
-                + "), keys 37-49 (A3-A4) at equal temperament, A4 = " + CsvCells.number(chosen.a4()) + " Hz");
+                + "), keys 37-49 (A3-A4) at equal temperament, A4 = " + NumberText.number(chosen.a4()) + " Hz");
         com.add("stretch_cents = deviation from equal temperament, sharp positive; B at each note's working pitch");
         for (String p : chosen.problems()) {
             com.add(p);
@@ -57,6 +57,6 @@ public final class StretchCsv {
     }
 
     private static String cents(StretchPoint p) {
-        return p.stretchCents().isPresent() ? CsvCells.fixed(p.stretchCents().getAsDouble(), 3) : "";
+        return p.stretchCents().isPresent() ? NumberText.rounded(p.stretchCents().getAsDouble(), 3) : "";
     }
 }

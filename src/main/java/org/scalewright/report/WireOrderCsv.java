@@ -6,7 +6,7 @@ import java.util.List;
 import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.orders.WireOrderRow;
-import org.scalewright.io.CsvCells;
+import org.scalewright.model.NumberText;
 
 /**
  * The plain-wire order as CSV ({@code wire-order.csv}): one row per wire size and a last row
@@ -52,12 +52,12 @@ public final class WireOrderCsv {
         }
         c.addAll(List.of(r.keys(), Integer.toString(r.notes()), Integer.toString(r.strings()),
                 Integer.toString(r.pieces()), Integer.toString(r.estimatedStrings()),
-                CsvCells.fixed(r.length(), 3)));
+                NumberText.rounded(r.length(), 3)));
         if (imp) {
-            c.add(CsvCells.fixed(r.length() / ReportUnits.METRES_PER_FOOT, 2));
+            c.add(NumberText.rounded(r.length() / ReportUnits.METRES_PER_FOOT, 2));
         }
-        c.add(CsvCells.fixed(r.massPerLength() * 1e3, 4));
-        c.add(CsvCells.fixed(r.mass() * 1e3, 1));
+        c.add(NumberText.rounded(r.massPerLength() * 1e3, 4));
+        c.add(NumberText.rounded(r.mass() * 1e3, 1));
         return c;
     }
 
@@ -86,10 +86,10 @@ public final class WireOrderCsv {
     public static List<String> ruleText(WireAllowances a) {
         List<String> l = new ArrayList<>();
         l.add("length to buy per string = stretched length (hitch pin to tuning pin) + "
-                + CsvCells.fixed(a.pinAllowance() * 1e3, 0) + " mm for the tuning-pin coil and hitch;");
+                + NumberText.rounded(a.pinAllowance() * 1e3, 0) + " mm for the tuning-pin coil and hitch;");
         l.add("where the sheet gives only the speaking length: speaking length + "
-                + CsvCells.fixed(a.lengthAllowance() * 1e3, 0) + " mm front and back length + the same "
-                + CsvCells.fixed(a.pinAllowance() * 1e3, 0) + " mm (counted in estimated_strings)");
+                + NumberText.rounded(a.lengthAllowance() * 1e3, 0) + " mm front and back length + the same "
+                + NumberText.rounded(a.pinAllowance() * 1e3, 0) + " mm (counted in estimated_strings)");
         l.add(a.looped() ? "pieces: two adjacent strings of one note looped round a hitch pin are one piece "
                 + "(bichord = 1 piece, trichord = 1 looped + 1 single); common practice, no source"
                 : "pieces: every string tied singly, one piece per string");

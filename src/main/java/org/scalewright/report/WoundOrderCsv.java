@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.design.orders.WoundOrder;
 import org.scalewright.design.orders.WoundOrderRow;
-import org.scalewright.io.CsvCells;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
 
 /**
@@ -32,7 +32,7 @@ public final class WoundOrderCsv {
         List<List<String>> rows = new ArrayList<>();
         for (WoundOrderRow r : order.rows()) {
             List<String> c = new ArrayList<>(List.of(Integer.toString(r.key()), r.noteName(),
-                    CsvCells.fixed(r.frequency(), 3), Integer.toString(r.count())));
+                    NumberText.rounded(r.frequency(), 3), Integer.toString(r.count())));
             ScheduleCsv.diameter(c, r.coreDiameter(), imp);
             c.add(Cells.size(r.coreSize()));
             ScheduleCsv.diameter(c, r.wrapInner(), imp);
@@ -47,9 +47,9 @@ public final class WoundOrderCsv {
             optional(c, r.woundLength(), imp);
             ScheduleCsv.length(c, r.speakingLength(), imp);
             if (imp) {
-                c.add(CsvCells.fixed(UnitConversions.newtonsToLbf(r.tension()), 1));
+                c.add(NumberText.rounded(UnitConversions.newtonsToLbf(r.tension()), 1));
             }
-            c.add(CsvCells.fixed(r.tension(), 1));
+            c.add(NumberText.rounded(r.tension(), 1));
             c.add(r.section());
             rows.add(c);
         }

@@ -33,6 +33,26 @@ final class PlanCommandRunner {
     private PlanCommandRunner() {
     }
 
+    private static boolean shows(String row, double tension, double pct, boolean slack) {
+        String t = String.format(Locale.ROOT, "→ %.0f ", tension);
+        String p = String.format(Locale.ROOT, "→ %.1f", pct);
+        if (row.contains(t) && row.contains(p)) {
+            return true;
+        }
+        if (!slack) {
+            return false;
+        }
+        for (int d = -1; d <= 1; d++) {
+            for (int e = -1; e <= 1; e++) {
+                if (row.contains(String.format(Locale.ROOT, "→ %.0f ", Math.rint(tension) + d))
+                        && row.contains(String.format(Locale.ROOT, "→ %.1f", Math.rint(pct * 10) / 10 + e / 10.0))) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
     static Run run(String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
@@ -47,6 +67,15 @@ final class PlanCommandRunner {
      * @return the number of rows checked
      */
     static int checkRowsMatchReanalysis(Run r, Path written) throws Exception {
+        return checkRowsMatchReanalysis(r, written, false);
+    }
+
+    /**
+     * As {@link #checkRowsMatchReanalysis(Run, Path)}; with {@code slack} a shown figure may also be the
+     * neighbour in its last digit: a metric diameter written on an inch sheet reads back to 0.00001 in, not
+     * to the exact double the plan computed with (DEVELOPERS.md, "Numbers in files").
+     */
+    static int checkRowsMatchReanalysis(Run r, Path written, boolean slack) throws Exception {
         ScaleAnalysis again = ScaleAnalyzer.analyze(ScaleSheetReader.standard().read(written),
                 BuiltInData.defaultSettings());
         int checked = 0;
@@ -55,10 +84,9 @@ final class PlanCommandRunner {
             if (row == null) {
                 continue;
             }
-            String t = String.format(Locale.ROOT, "→ %.0f ", n.tension());
-            String pct = String.format(Locale.ROOT, "→ %.1f", n.breakPct());
-            if (!row.contains(t) || !row.contains(pct)) {
-                throw new AssertionError("key " + n.key() + ": re-analysed " + t + pct + " not in row: " + row);
+            if (!shows(row, n.tension(), n.breakPct(), slack)) {
+                throw new AssertionError("key " + n.key() + ": re-analysed → " + n.tension() + " → " + n.breakPct()
+                        + " not in row: " + row);
             }
             checked++;
         }

@@ -162,9 +162,9 @@ class ScaleSheetRoundTripTest {
         Scale second = read(ScaleSheetWriter.toText(first));
         assertEquals(first, second, ScaleSheetWriter.toText(first));
         assertTrue(ScaleSheetWriter.toText(first).contains("\n2,1,1234.5678901234,0.05905\n"));
-        // computed values (as a design tool makes them) come back within a unit in the last place, in mm and
-        // in inches (not always exactly: not every double in metres is a decimal in mm or inches divided out),
-        // and a second write → read changes nothing
+        // computed values (as a design tool makes them) are written to the precision of their quantity, not
+        // with every binary digit: lengths to 0.1 mm (0.001 in), diameters to 0.001 mm (0.00001 in); pitch and
+        // cents have no catalogue precision and come back exactly; a second write → read changes nothing
         java.util.Random rnd = new java.util.Random(7);
         List<Note> notes = new ArrayList<>();
         for (int k = 1; k <= 88; k++) {
@@ -186,16 +186,20 @@ class ScaleSheetRoundTripTest {
         }
     }
 
+    /** Half of 0.1 mm and of 0.001 mm, m: the most a computed length or diameter moves when written. */
+    private static final double LENGTH_PRECISION = 0.05e-3;
+    private static final double DIAMETER_PRECISION = 0.0005e-3;
+
     private static void assertClose(Note a, Note b) {
         String what = a.toString();
-        assertEquals(a.speakingLength(), b.speakingLength(), Math.ulp(a.speakingLength()), what);
-        assertEquals(a.wire().diameter(), b.wire().diameter(), Math.ulp(a.wire().diameter()), what);
+        assertEquals(a.speakingLength(), b.speakingLength(), LENGTH_PRECISION, what);
+        assertEquals(a.wire().diameter(), b.wire().diameter(), DIAMETER_PRECISION, what);
         assertEquals(a.pitchHz().getAsDouble(), b.pitchHz().getAsDouble(), 0, what);
         assertEquals(a.cents(), b.cents(), 0, what);
         assertEquals(a.isWound(), b.isWound(), what);
         if (a.isWound()) {
-            assertEquals(a.wrap().inner(), b.wrap().inner(), Math.ulp(a.wrap().inner()), what);
-            assertEquals(a.wrap().outer(), b.wrap().outer(), Math.ulp(a.wrap().outer()), what);
+            assertEquals(a.wrap().inner(), b.wrap().inner(), DIAMETER_PRECISION, what);
+            assertEquals(a.wrap().outer(), b.wrap().outer(), DIAMETER_PRECISION, what);
         }
     }
 
@@ -208,5 +212,22 @@ class ScaleSheetRoundTripTest {
         assertEquals(1, back.notes().size());
         assertEquals("first line second line", back.note(40).orElseThrow().remark());
         assertEquals("ten or", back.note(40).orElseThrow().section());
+    }
+
+    @Test
+    @DisplayName("a column typed with a fixed number of decimals is written back with them")
+    void columnDecimalsKept() throws Exception {
+        String typed = "key,strings,length_mm,wire_mm,wrap1_mm\n1,1,1480.0,1.60,1.30\n2,1,1465.5,1.55,1.25\n";
+        String text = ScaleSheetWriter.toText(read(typed));
+        assertTrue(text.endsWith("key,strings,length_mm,wire_mm,wrap1_mm\n1,1,1480.0,1.60,1.30\n2,1,1465.5,1.55,1.25\n"),
+                text);
+        // a computed value in such a column: its own digits, padded to the column's
+        Scale s = read(typed);
+        Note planned = s.note(2).orElseThrow().withWrap(new Wrap(104 * 0.01e-3, 0, WrapMetal.COPPER));
+        String written = ScaleSheetWriter.toText(s.withNotes(List.of(s.note(1).orElseThrow(), planned)));
+        assertTrue(written.contains("\n2,1,1465.5,1.55,1.04\n"), written);
+        Note finer = planned.withWrap(new Wrap(43 * 0.025e-3, 0, WrapMetal.COPPER));
+        written = ScaleSheetWriter.toText(s.withNotes(List.of(s.note(1).orElseThrow(), finer)));
+        assertTrue(written.contains("\n2,1,1465.5,1.55,1.075\n"), written);
     }
 }

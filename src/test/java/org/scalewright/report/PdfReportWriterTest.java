@@ -76,8 +76,8 @@ class PdfReportWriterTest {
         try (PDDocument doc = Loader.loadPDF(pdf(ReportFixtures.content(ReportUnits.IMPERIAL)))) {
             assertEquals(PDRectangle.LETTER.getHeight(), doc.getPage(0).getMediaBox().getHeight(), 0.01);
             String all = new PDFTextStripper().getText(doc);
-            // key 1's core of 1.50 mm is 0.0591 in: the wound order in inches with mm beside
-            assertTrue(all.contains("0.0591 (1.50)"), "wound order in inches with mm beside");
+            // key 1's core of 1.500 mm is 0.0591 in: the wound order in inches with mm beside (to 0.001 mm)
+            assertTrue(all.contains("0.0591 (1.500)"), "wound order in inches with mm beside");
             assertTrue(all.replaceAll("\\s+", " ").contains("length to buy ft"));
         }
     }

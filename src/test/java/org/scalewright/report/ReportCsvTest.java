@@ -114,7 +114,8 @@ class ReportCsvTest {
         List<String[]> rows = ReportFixtures.rows(ScheduleCsv.sheet(c.schedule(), c.units(), List.of()).toText());
         List<String> h = Arrays.asList(rows.get(0));
         assertEquals(89, rows.size());
-        assertEquals("1.50 / 1.20 + 1.00 Cu", rows.get(1)[h.indexOf("wire")]);
+        // the one wire notation (model.WireNotation): 1.50 + 2 · 1.20 + 2 · 1.00 = 5.90 mm outside (hand-worked)
+        assertEquals("1.500 / 1.200 + 1.000 mm Cu (OD 5.900)", rows.get(1)[h.indexOf("wire")]);
         assertEquals("1.2", rows.get(1)[h.indexOf("wrap1_mm")]);
         assertEquals("", rows.get(88)[h.indexOf("stretched_length_mm")]);
         assertEquals("", rows.get(88)[h.indexOf("wrap1_mm")]);

@@ -33,8 +33,8 @@ import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.AtomicFiles;
-import org.scalewright.io.CsvCells;
 import org.scalewright.io.CsvReportWriter;
+import org.scalewright.model.NumberText;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.report.CsvSheet;
 import org.scalewright.report.ReportContent;
@@ -345,7 +345,7 @@ public final class ExportViewModel {
         List<String> l = new ArrayList<>();
         l.add("scale: " + c.title());
         l.add("sheet: " + c.sheetName());
-        l.add("a4_hz: " + CsvCells.number(c.analysis().scale().pitch().a4()));
+        l.add("a4_hz: " + NumberText.number(c.analysis().scale().pitch().a4()));
         l.add("strength table: " + c.analysis().settings().strength().name());
         c.reference().ifPresent(r -> l.add("reference: " + r.sheetName()));
         l.add("units: " + c.units().word());

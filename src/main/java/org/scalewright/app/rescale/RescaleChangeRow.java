@@ -1,10 +1,11 @@
 package org.scalewright.app.rescale;
 
-import java.util.Locale;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.design.rescale.KeyChange;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
+import org.scalewright.model.WireNotation;
 
 /**
  * One line of the rescaling panel's change table, as text in the display units.
@@ -27,20 +28,11 @@ record RescaleChangeRow(int key, String note, String wire, String tension, Strin
                 before.equals(after) ? before : before + " → " + after,
                 DisplayFormat.force(c.beforeResult().tension(), u) + " → " + DisplayFormat.force(c.afterResult().tension(), u),
                 DisplayFormat.fixed(c.beforeResult().breakPct(), 1) + " → " + DisplayFormat.fixed(c.afterResult().breakPct(), 1),
-                String.format(Locale.ROOT, "%+.1f", c.deviationPct()), c.changed());
+                NumberText.signed(c.deviationPct(), 1), c.changed());
     }
 
-    /** @return a plain wire as {@code #14.5} or a diameter; a wound string as core/wrap[+wrap] */
+    /** @return the wire in the program's one notation ({@link WireNotation}), in the display length unit */
     static String wire(Note n, DisplayUnits u) {
-        String core = n.wire().musicWireSize().isPresent() ? "#" + DisplayFormat.size(n.wire().musicWireSize().getAsDouble())
-                : DisplayFormat.diameter(n.wire().diameter(), u);
-        if (!n.isWound()) {
-            return core;
-        }
-        String w = core + "/" + DisplayFormat.diameter(n.wrap().inner(), u);
-        if (n.wrap().isDouble()) {
-            w += "+" + DisplayFormat.diameter(n.wrap().outer(), u);
-        }
-        return w;
+        return WireNotation.of(n, u.length());
     }
 }

@@ -1,35 +1,23 @@
 package org.scalewright.app.session;
 
-import java.util.Locale;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.ForceUnit;
 import org.scalewright.model.LengthUnit;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
 
-/** How numbers are written in the window, in the chosen display units. */
+/** The window's numbers in the chosen display units; the digits come from {@link NumberText}. */
 public final class DisplayFormat {
     private DisplayFormat() {
     }
 
     public static String fixed(double v, int decimals) {
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return NumberText.fixed(v, decimals);
     }
 
     /** @return {@code v} with at least {@code min} and at most {@code max} decimals, trailing zeros beyond min dropped */
     public static String decimals(double v, int min, int max) {
-        String s = fixed(v, max);
-        int dot = s.indexOf('.');
-        if (dot < 0) {
-            return s;
-        }
-        int end = s.length();
-        while (end > dot + 1 + min && s.charAt(end - 1) == '0') {
-            end--;
-        }
-        if (end == dot + 1) {
-            end = dot;
-        }
-        return s.substring(0, end);
+        return NumberText.upTo(v, min, max);
     }
 
     /** @return a speaking length (m) in the display length unit: {@code 1480.0} mm or {@code 58.27} in */
@@ -46,7 +34,7 @@ public final class DisplayFormat {
 
     /** @return a music-wire size number: {@code 17} or {@code 14.5} */
     public static String size(double size) {
-        return decimals(size, 0, 2);
+        return NumberText.plain(size);
     }
 
     /** @return a force (N) in the display force unit: {@code 1446} N, {@code 325.0} lbf */
@@ -58,19 +46,19 @@ public final class DisplayFormat {
     /** @return a signed force difference (N) in the display force unit */
     public static String forceDifference(double newtons, DisplayUnits u) {
         double v = u.force().fromNewtons(newtons);
-        return String.format(Locale.ROOT, u.force() == ForceUnit.N ? "%+.0f" : "%+.1f", v);
+        return NumberText.signed(v, u.force() == ForceUnit.N ? 0 : 1);
     }
 
     /** @return a whole-instrument or section total (N) as {@code 182.3 kN} or {@code 40,990 lbf} */
     public static String total(double newtons, DisplayUnits u) {
         return switch (u.force()) {
             case N -> fixed(newtons / 1000, 1) + " kN";
-            case LBF -> String.format(Locale.ROOT, "%,.0f lbf", UnitConversions.newtonsToLbf(newtons));
-            case KGF -> String.format(Locale.ROOT, "%,.0f kgf", UnitConversions.newtonsToKgf(newtons));
+            case LBF -> NumberText.grouped(UnitConversions.newtonsToLbf(newtons)) + " lbf";
+            case KGF -> NumberText.grouped(UnitConversions.newtonsToKgf(newtons)) + " kgf";
         };
     }
 
     public static String scientific(double v) {
-        return String.format(Locale.ROOT, "%.2e", v);
+        return NumberText.scientific(v, 2);
     }
 }

@@ -2,22 +2,19 @@ package org.scalewright.app.wirecheck;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.design.wirecheck.StageWords;
 import org.scalewright.design.wirecheck.WireCheckReport;
 import org.scalewright.model.Note;
+import org.scalewright.model.WireNotation;
 
 /** The words of a wire check shown in the panel: the wire of a note and the advice on stages. */
 final class WireCheckText {
     private WireCheckText() {
     }
 
-    /** @return the core wire as a size number ({@code #18}) or a diameter in mm */
+    /** @return the wire in the program's one notation ({@link WireNotation}), diameters in mm */
     static String wire(Note n) {
-        String core = n.wire().musicWireSize().isPresent()
-                ? "#" + DisplayFormat.size(n.wire().musicWireSize().getAsDouble())
-                : DisplayFormat.fixed(n.wire().diameter() * 1e3, 3) + " mm";
-        return core;
+        return WireNotation.of(n);
     }
 
     /** @return the advice on raising in stages laid out one item a line: reasons as bullets, passes indented */

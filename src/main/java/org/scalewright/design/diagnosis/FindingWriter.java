@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.function.ToDoubleFunction;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
+import org.scalewright.model.NumberText;
 import org.scalewright.physics.StressBands;
 
 /** Puts a diagnosis into plain words: the range, the notes standing out, the cause, the remedies. */
@@ -192,6 +193,6 @@ final class FindingWriter {
     }
 
     private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 }

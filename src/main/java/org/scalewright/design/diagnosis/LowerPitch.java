@@ -1,6 +1,7 @@
 package org.scalewright.design.diagnosis;
 
 import java.util.Locale;
+import org.scalewright.physics.Pitch;
 
 /**
  * Tune the whole piano to a lower pitch standard.
@@ -19,7 +20,7 @@ public record LowerPitch(double presentA4, double newA4, double maxPctAfter, boo
 
     /** @return how many cents lower the whole piano goes */
     public double lowerByCents() {
-        return 1200.0 * Math.log(presentA4 / newA4) / Math.log(2.0);
+        return Pitch.cents(newA4, presentA4);
     }
 
     @Override

@@ -3,6 +3,8 @@ package org.scalewright.design.diagnosis;
 import java.util.List;
 import java.util.Locale;
 import org.scalewright.model.CoreWire;
+import org.scalewright.model.LengthUnit;
+import org.scalewright.model.WireNotation;
 
 /**
  * Restring the plain notes that run high with a thinner size, whose breaking strength is higher.
@@ -60,10 +62,6 @@ public record ThinnerWire(List<SizeOption> options, List<Integer> woundKeys, dou
     }
 
     static String wire(CoreWire w) {
-        if (w.musicWireSize().isPresent()) {
-            double s = w.musicWireSize().getAsDouble();
-            return "size " + (s == Math.rint(s) ? Long.toString((long) s) : Double.toString(s));
-        }
-        return String.format(Locale.ROOT, "%.3f mm", w.diameter() * 1e3);
+        return WireNotation.of(w, LengthUnit.MM);
     }
 }

@@ -8,6 +8,7 @@ import org.apache.commons.math3.analysis.interpolation.AkimaSplineInterpolator;
 import org.apache.commons.math3.analysis.interpolation.SplineInterpolator;
 import org.scalewright.design.SmoothTrend;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.NumberText;
 
 /**
  * How to make a target curve over the keys being planned, from the present values at those
@@ -231,6 +232,6 @@ public sealed interface TargetSpec permits TargetSpec.Loess, TargetSpec.Line, Ta
     }
 
     private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 }

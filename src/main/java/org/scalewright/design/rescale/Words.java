@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.KeyNames;
+import org.scalewright.model.NumberText;
 
 /** Wording shared by the planners' notes and reasons. */
 final class Words {
@@ -35,7 +36,7 @@ final class Words {
     }
 
     static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 
     /** @return where a step check was taken: {@code inside capo, keys 53-88} */

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.NumberText;
 
 /** The wrap wire diameters available to the wound-string designer, thinnest first. Immutable. */
 public final class WrapWires {
@@ -94,8 +95,7 @@ public final class WrapWires {
     }
 
     private static String trim(double v) {
-        String s = String.format(Locale.ROOT, "%.4f", v);
-        return s.replaceAll("0+$", "").replaceAll("\\.$", "");
+        return NumberText.plain(v);
     }
 
     @Override

@@ -6,6 +6,7 @@ import java.util.regex.Pattern;
 import org.scalewright.model.Checks;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.UnitConversions;
+import org.scalewright.model.NumberText;
 
 /**
  * How much the total tension on the plate may change in one pass of a pitch raise before the
@@ -86,6 +87,6 @@ public record StageLimit(double amount, boolean percent) {
     }
 
     private static String trim(double v) {
-        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
+        return NumberText.plain(v);
     }
 }

@@ -2,6 +2,7 @@ package org.scalewright.design.wirecheck;
 
 import org.scalewright.model.Note;
 import org.scalewright.physics.NoteResult;
+import org.scalewright.physics.Pitch;
 
 /**
  * One note of a wire check. Percent of breaking strength {@code before} is the present wire and
@@ -55,6 +56,6 @@ public record WireCheckNote(Note presentNote, Note replacementNote, WireChange w
 
     /** @return the overpull peak above the target pitch, cents (0 when the note is not raised) */
     public double peakCentsAboveTarget() {
-        return Math.max(0, 1200.0 * Math.log(peak.frequency() / after.frequency()) / Math.log(2.0));
+        return Math.max(0, Pitch.cents(after.frequency(), peak.frequency()));
     }
 }

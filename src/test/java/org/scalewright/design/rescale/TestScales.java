@@ -40,7 +40,7 @@ public final class TestScales {
             String section = key <= breakAfter ? "bass" : key <= 40 ? "tenor" : key <= 60 ? "treble" : "top";
             double jitter = 1 + 0.03 * rnd.nextGaussian();
             if (key > lastWound) {
-                double length = 0.05 * Math.pow(2, (88 - key) * 0.9 / 12) * jitter;
+                double length = measured(0.05 * Math.pow(2, (88 - key) * 0.9 / 12) * jitter);
                 double tension = 700 * (1 + 0.05 * rnd.nextGaussian());
                 double sigma = 4 * length * length * f * f * m.steelDensity();
                 double d = Math.sqrt(tension / sigma / (Math.PI / 4));
@@ -52,7 +52,7 @@ public final class TestScales {
                 }
                 notes.add(note(key, strings, length, CoreWire.ofSize(best.size(), best.diameter()), null, section));
             } else {
-                double length = Math.min(1.6, l29 * (1 + 0.012 * (lastWound + 1 - key)) * jitter);
+                double length = measured(Math.min(1.6, l29 * (1 + 0.012 * (lastWound + 1 - key)) * jitter));
                 double core = key <= breakAfter ? 1.55e-3 - 0.012e-3 * key : 1.15e-3 - 0.02e-3 * (key - breakAfter);
                 core = Math.round(core * 1e5) / 1e5;
                 double tension = (key <= breakAfter ? 1300 : 950) * (1 + 0.06 * rnd.nextGaussian());
@@ -65,6 +65,11 @@ public final class TestScales {
             }
         }
         return new Scale("random test scale " + seed, PitchStandard.ISO_16, notes, null);
+    }
+
+    /** @return a length as a sheet holds it, measured to 0.1 mm (a sheet writes a computed length to 0.1 mm) */
+    private static double measured(double metres) {
+        return Math.round(metres * 1e4) / 1e4;
     }
 
     private static double round(double w) {
