@@ -202,22 +202,7 @@ public final class DiagnosisViewModel {
     boolean exportCsv() {
         DiagnosisReport r = result.get();
         return result.exportCsv(r == null ? "" : "diagnosis-" + r.request().range().toString().replace(' ', '_')
-                + ".csv", new ToolResult.CsvForm<>() {
-                    @Override
-                    public List<String> comments(DiagnosisReport d) {
-                        return DiagnosisCsv.comments(d);
-                    }
-
-                    @Override
-                    public List<String> header() {
-                        return DiagnosisCsv.HEADER;
-                    }
-
-                    @Override
-                    public List<List<String>> rows(DiagnosisReport d) {
-                        return DiagnosisCsv.rows(d);
-                    }
-                });
+                + ".csv", new ToolResult.CsvForm<>(DiagnosisCsv::comments, DiagnosisCsv.HEADER, DiagnosisCsv::rows));
     }
 
     /** Takes the results away, and their overlays off the curves. */

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Function;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -27,13 +28,15 @@ import org.scalewright.io.CsvReportWriter;
  * @param <R> the tool's report record
  */
 public final class ToolResult<R> {
-    /** The CSV form of a report: header comments, column names and rows. */
-    public interface CsvForm<R> {
-        List<String> comments(R report);
-
-        List<String> header();
-
-        List<List<String>> rows(R report);
+    /**
+     * The CSV form of a report.
+     *
+     * @param comments the header comment lines of a report
+     * @param header   the column names
+     * @param rows     the rows of a report
+     */
+    public record CsvForm<R>(Function<R, List<String>> comments, List<String> header,
+                             Function<R, List<List<String>>> rows) {
     }
 
     private final ScaleSession session;
@@ -128,7 +131,7 @@ public final class ToolResult<R> {
         }
         Path file = CsvFileNames.withCsvExtension(chosen.get());
         try {
-            CsvReportWriter.write(file, form.comments(r), form.header(), form.rows(r));
+            CsvReportWriter.write(file, form.comments().apply(r), form.header(), form.rows().apply(r));
             session.inform("wrote the " + toolName + " to " + file);
             return true;
         } catch (IOException | RuntimeException e) {

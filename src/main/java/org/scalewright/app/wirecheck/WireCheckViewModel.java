@@ -1,6 +1,5 @@
 package org.scalewright.app.wirecheck;
 
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -11,7 +10,6 @@ import java.util.function.Supplier;
 import java.util.stream.Collectors;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
-import javafx.beans.property.ReadOnlyBooleanWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
@@ -22,11 +20,11 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
-import org.scalewright.app.session.CsvFileNames;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
-import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.session.TypedEntry;
+import org.scalewright.app.session.UserPrompts;
+import org.scalewright.app.tool.ToolResult;
 import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.wirecheck.PitchState;
 import org.scalewright.design.wirecheck.SizeRounding;
@@ -39,7 +37,6 @@ import org.scalewright.design.wirecheck.WireCheckRequest;
 import org.scalewright.design.wirecheck.WireConversion;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
-import org.scalewright.io.CsvReportWriter;
 import org.scalewright.io.PitchStateReader;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
@@ -59,7 +56,6 @@ public final class WireCheckViewModel {
     /** The overlay names on the percent chart. */
     public static final String AFTER = "after: replacement at target";
     public static final String PEAK = "peak of the overpull";
-    private static final String OVERLAY_OWNER = "wire check";
 
     /** How plain wire sizes are converted. */
     enum Conversion {
@@ -102,7 +98,6 @@ public final class WireCheckViewModel {
 
     private final ScaleSession session;
     private final UserPrompts prompts;
-    private final CurvesViewModel curves;
     private final ReadOnlyObjectWrapper<StrengthTable> replacement = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper replacementName = new ReadOnlyStringWrapper();
     private final ObjectProperty<Conversion> conversion = new SimpleObjectProperty<>(Conversion.KEEP);
@@ -113,18 +108,16 @@ public final class WireCheckViewModel {
     private final StringProperty overpull = new SimpleStringProperty("0");
     private final StringProperty stageLimit = new SimpleStringProperty("5 %");
     private final ObservableList<Row> rows = FXCollections.observableArrayList();
-    private final ReadOnlyObjectWrapper<WireCheckReport> report = new ReadOnlyObjectWrapper<>();
+    private final ToolResult<WireCheckReport> result;
     private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper totals = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper stages = new ReadOnlyStringWrapper("");
     private final ObservableList<String> cautions = FXCollections.observableArrayList();
-    private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
-    private final ReadOnlyBooleanWrapper stale = new ReadOnlyBooleanWrapper();
 
     public WireCheckViewModel(ScaleSession session, UserPrompts prompts, CurvesViewModel curves) {
         this.session = session;
         this.prompts = prompts;
-        this.curves = curves;
+        this.result = new ToolResult<>(session, prompts, curves, "wire check");
         replacementName.set(presentTableWords());
         targetA4.set(a4Text(session.scale().pitch().a4()));
         session.scaleProperty().addListener((o, a, b) -> {
@@ -133,7 +126,6 @@ public final class WireCheckViewModel {
                 targetA4.set(a4Text(b.pitch().a4()));
             }
         });
-        session.analysisProperty().addListener((o, a, b) -> markStale());
         session.strengthProperty().addListener((o, a, b) -> {
             if (replacement.get() == null) {
                 replacementName.set(presentTableWords());
@@ -251,9 +243,7 @@ public final class WireCheckViewModel {
         Double pull = typedPull == null ? null : refused(bad, () -> WireCheckRequest.overpull(typedPull));
         StageLimit limit = refused(bad, () -> StageLimit.parse(stageLimit.get()));
         if (!bad.isEmpty()) {
-            problem.set(String.join("; ", bad));
-            session.complain("wire check: " + String.join("; ", bad));
-            return false;
+            return result.refuse(bad);
         }
         var settings = session.settingsProperty().get();
         WireCheckRequest request = WireCheckRequest.of(session.scale(), settings)
@@ -267,11 +257,8 @@ public final class WireCheckViewModel {
         try {
             r = WireCheck.run(request);
         } catch (IllegalArgumentException e) {
-            problem.set(e.getMessage());
-            session.complain("wire check: " + e.getMessage());
-            return false;
+            return result.refuse(List.of(e.getMessage()));
         }
-        problem.set("");
         show(r);
         session.inform("wire check: " + r.atRisk().size() + " of " + r.notes().size()
                 + " notes at or above the danger band at the peak");
@@ -279,8 +266,6 @@ public final class WireCheckViewModel {
     }
 
     private void show(WireCheckReport r) {
-        report.set(r);
-        stale.set(false);
         double caution = r.request().settings().bands().caution();
         List<Row> next = new ArrayList<>(r.notes().size());
         for (WireCheckNote n : r.notes()) {
@@ -293,7 +278,7 @@ public final class WireCheckViewModel {
         totals.set(r.totals().states().stream().map(TensionTotals.State::words).collect(Collectors.joining("\n")));
         stages.set(WireCheckText.stages(r));
         cautions.setAll(r.request().isPitchRaise() ? BuiltInData.cautions() : List.of());
-        curves.overlays().put(OVERLAY_OWNER, overlays(r));
+        result.show(r, overlays(r));
     }
 
     /** @return after (and the peak, where it differs) as overlays of the percent chart */
@@ -316,44 +301,24 @@ public final class WireCheckViewModel {
 
     /** Writes the per-note results as CSV (DESIGN §5 columns) to a file the user chooses. */
     boolean exportCsv() {
-        WireCheckReport r = report.get();
-        if (r == null) {
-            session.complain("run the wire check before exporting it");
-            return false;
-        }
-        Optional<Path> chosen = prompts.chooseExportFile("Save the wire check as CSV", "wire-check.csv", "csv");
-        if (chosen.isEmpty()) {
-            return false;
-        }
-        Path file = CsvFileNames.withCsvExtension(chosen.get());
-        try {
-            CsvReportWriter.write(file, WireCheckCsv.comments(r), WireCheckCsv.HEADER, WireCheckCsv.rows(r));
-            session.inform("wrote the wire check to " + file);
-            return true;
-        } catch (IOException | RuntimeException e) {
-            String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-            prompts.showError("Wire check not saved", "Could not write " + file + ": " + why);
-            session.complain("wire check not saved: " + why);
-            return false;
-        }
+        return result.exportCsv("wire-check.csv",
+                new ToolResult.CsvForm<>(WireCheckCsv::comments, WireCheckCsv.HEADER, WireCheckCsv::rows));
     }
 
     /** Takes the results away, and their overlays off the curves. */
     void clear() {
-        report.set(null);
-        stale.set(false);
+        result.clear();
         rows.clear();
         totals.set("");
         stages.set("");
         cautions.clear();
         summary.set("");
-        curves.overlays().remove(OVERLAY_OWNER);
     }
 
     /** Selects the key of a result row (the table and curves follow). */
     void select(Row row) {
         if (row != null) {
-            session.selectedKeyProperty().set(row.key());
+            result.select(row.key());
         }
     }
 
@@ -364,7 +329,7 @@ public final class WireCheckViewModel {
     }
 
     ReadOnlyObjectProperty<WireCheckReport> reportProperty() {
-        return report.getReadOnlyProperty();
+        return result.reportProperty();
     }
 
     ReadOnlyStringProperty summaryProperty() {
@@ -385,23 +350,16 @@ public final class WireCheckViewModel {
     }
 
     ReadOnlyStringProperty problemProperty() {
-        return problem.getReadOnlyProperty();
+        return result.problemProperty();
     }
 
     /** @return true when the scale or settings changed after the check (its overlays are taken down) */
     ReadOnlyBooleanProperty staleProperty() {
-        return stale.getReadOnlyProperty();
+        return result.staleProperty();
     }
 
     double dangerPct() {
         return session.settingsProperty().get().bands().danger();
-    }
-
-    private void markStale() {
-        if (report.get() != null && !stale.get()) {
-            stale.set(true);
-            curves.overlays().remove(OVERLAY_OWNER);
-        }
     }
 
     private String presentTableWords() {
