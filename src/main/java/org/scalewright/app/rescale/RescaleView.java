@@ -20,6 +20,7 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.scalewright.app.tool.Tool;
+import org.scalewright.app.tool.ToolLayout;
 
 /**
  * The rescaling panel: on the left the range, kind, target and planner settings with the
@@ -235,12 +236,10 @@ public final class RescaleView implements Tool {
         return h;
     }
 
+    /** @return an entry field with its tip; Enter does nothing here (Propose is a button of its own) */
     private static TextField field(String id, javafx.beans.property.StringProperty p, int columns, String tip) {
-        TextField f = new TextField();
-        f.setId(id);
-        f.setPrefColumnCount(columns);
+        TextField f = ToolLayout.entry(id, p, columns, () -> { });
         f.setMinWidth(Region.USE_PREF_SIZE);
-        f.textProperty().bindBidirectional(p);
         f.setTooltip(new Tooltip(tip));
         return f;
     }

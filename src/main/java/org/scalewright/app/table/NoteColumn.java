@@ -13,38 +13,39 @@ import org.scalewright.physics.NoteResult;
  * edited. Entries are parsed by {@link NoteEdits}.
  */
 public enum NoteColumn {
-    KEY("key", false, Group.SPEC),
-    NOTE("note", false, Group.SPEC),
-    SECTION("section", true, Group.SPEC),
-    STRINGS("strings", true, Group.SPEC),
-    LENGTH("length", true, Group.SPEC),
-    WIRE("wire", true, Group.SPEC),
-    WRAP1("wrap 1", true, Group.SPEC),
-    WRAP2("wrap 2", true, Group.SPEC),
-    METAL("wrap metal", true, Group.SPEC),
-    PITCH("pitch", false, Group.COMPUTED),
-    TENSION("T/string", false, Group.COMPUTED),
-    NOTE_TENSION("T/note", false, Group.COMPUTED),
-    STRESS("stress", false, Group.COMPUTED),
-    BREAK_PCT("% break", false, Group.COMPUTED),
-    INHARMONICITY("B", false, Group.COMPUTED),
-    HEADROOM("headroom", false, Group.COMPUTED),
-    FLAGS("flags", false, Group.COMPUTED),
-    DIFF_TENSION("ΔT/string", false, Group.DIFFERENCE),
-    DIFF_BREAK("Δ % break", false, Group.DIFFERENCE),
-    DIFF_B("ΔB %", false, Group.DIFFERENCE),
-    REMARK("remark", true, Group.SPEC);
+    KEY("key", Group.IDENTITY),
+    NOTE("note", Group.IDENTITY),
+    SECTION("section", Group.SPEC),
+    STRINGS("strings", Group.SPEC),
+    LENGTH("length", Group.SPEC),
+    WIRE("wire", Group.SPEC),
+    WRAP1("wrap 1", Group.SPEC),
+    WRAP2("wrap 2", Group.SPEC),
+    METAL("wrap metal", Group.SPEC),
+    PITCH("pitch", Group.COMPUTED),
+    TENSION("T/string", Group.COMPUTED),
+    NOTE_TENSION("T/note", Group.COMPUTED),
+    STRESS("stress", Group.COMPUTED),
+    BREAK_PCT("% break", Group.COMPUTED),
+    INHARMONICITY("B", Group.COMPUTED),
+    HEADROOM("headroom", Group.COMPUTED),
+    FLAGS("flags", Group.COMPUTED),
+    DIFF_TENSION("ΔT/string", Group.DIFFERENCE),
+    DIFF_BREAK("Δ % break", Group.DIFFERENCE),
+    DIFF_B("ΔB %", Group.DIFFERENCE),
+    REMARK("remark", Group.SPEC);
 
-    /** Which part of the table a column belongs to. */
-    enum Group { SPEC, COMPUTED, DIFFERENCE }
+    /**
+     * Which part of the table a column belongs to: what names the note (read only), its string
+     * specification (edited), what the engine computes, and the differences to the reference.
+     */
+    enum Group { IDENTITY, SPEC, COMPUTED, DIFFERENCE }
 
     private final String name;
-    private final boolean editable;
     private final Group group;
 
-    NoteColumn(String name, boolean editable, Group group) {
+    NoteColumn(String name, Group group) {
         this.name = name;
-        this.editable = editable;
         this.group = group;
     }
 
@@ -53,8 +54,9 @@ public enum NoteColumn {
         return this == LENGTH ? "speaking length" : name;
     }
 
+    /** @return true for the string specification, which the user edits */
     boolean editable() {
-        return editable;
+        return group == Group.SPEC;
     }
 
     Group group() {

@@ -85,7 +85,8 @@ public final class NoteTableView {
         col.setCellFactory(x -> {
             SheetCell cell = new SheetCell();
             cell.getStyleClass().add(c.editable() ? "editable-cell" : "computed-cell");
-            if (c.group() != NoteColumn.Group.SPEC || c == NoteColumn.STRINGS || c == NoteColumn.KEY) {
+            if (c.group() == NoteColumn.Group.COMPUTED || c.group() == NoteColumn.Group.DIFFERENCE
+                    || c == NoteColumn.STRINGS || c == NoteColumn.KEY) {
                 cell.getStyleClass().add("number-cell");
             }
             return cell;
