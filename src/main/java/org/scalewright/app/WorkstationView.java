@@ -28,11 +28,13 @@ import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
 import org.scalewright.app.curves.CurvesView;
 import org.scalewright.app.export.ExportMenu;
+import org.scalewright.app.session.Choice;
 import org.scalewright.app.session.FxPrompts;
 import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.table.FlagsView;
 import org.scalewright.app.table.NoteColumn;
 import org.scalewright.app.table.NoteTableView;
+import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.Scale;
 
 /**
@@ -163,12 +165,12 @@ final class WorkstationView {
 
         ToggleGroup units = new ToggleGroup();
         Menu unitsMenu = new Menu("Units");
-        for (WorkstationViewModel.UnitChoice c : WorkstationViewModel.UnitChoice.values()) {
+        for (Choice<DisplayUnits> c : WorkstationViewModel.UnitChoice.values()) {
             RadioMenuItem r = new RadioMenuItem(c.toString());
             r.setToggleGroup(units);
-            r.setSelected(model.unitsProperty().get().equals(c.units()));
+            r.setSelected(model.unitsProperty().get().equals(c.value()));
             r.setOnAction(e -> model.setUnits(c));
-            model.unitsProperty().addListener((o, a, b) -> r.setSelected(b.equals(c.units())));
+            model.unitsProperty().addListener((o, a, b) -> r.setSelected(b.equals(c.value())));
             unitsMenu.getItems().add(r);
         }
         CheckMenuItem sections = new CheckMenuItem("Section totals in the status line");
@@ -224,14 +226,14 @@ final class WorkstationView {
     }
 
     private ToolBar toolBar() {
-        ChoiceBox<WorkstationViewModel.UnitChoice> units = new ChoiceBox<>();
+        ChoiceBox<Choice<DisplayUnits>> units = new ChoiceBox<>();
         units.setId("units-choice");
         units.getItems().setAll(WorkstationViewModel.UnitChoice.values());
         units.setValue(WorkstationViewModel.UnitChoice.METRIC);
         units.setOnAction(e -> model.setUnits(units.getValue()));
         model.unitsProperty().addListener((o, a, b) -> {
             for (var c : WorkstationViewModel.UnitChoice.values()) {
-                if (c.units().equals(b)) {
+                if (c.value().equals(b)) {
                     units.setValue(c);
                 }
             }

@@ -2,6 +2,7 @@ package org.scalewright.app;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Optional;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
@@ -12,14 +13,15 @@ import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 import org.scalewright.app.curves.CurvesViewModel;
 import org.scalewright.app.export.ExportViewModel;
+import org.scalewright.app.session.Choice;
 import org.scalewright.app.session.CsvFileNames;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.StrengthChoice;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.table.FlagsViewModel;
 import org.scalewright.app.table.NoteTableViewModel;
-import org.scalewright.app.session.TypedEntry;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.SheetProblem;
@@ -37,26 +39,17 @@ import org.scalewright.physics.StrengthTable;
  */
 public final class WorkstationViewModel {
     /** The display-unit choices offered. */
-    enum UnitChoice {
-        METRIC("mm and N", DisplayUnits.METRIC),
-        IMPERIAL("in and lbf", DisplayUnits.IMPERIAL),
-        METRIC_KGF("mm and kgf", new DisplayUnits(LengthUnit.MM, ForceUnit.KGF));
+    static final class UnitChoice {
+        static final Choice<DisplayUnits> METRIC = new Choice<>("mm and N", DisplayUnits.METRIC);
+        static final Choice<DisplayUnits> IMPERIAL = new Choice<>("in and lbf", DisplayUnits.IMPERIAL);
+        static final Choice<DisplayUnits> METRIC_KGF = new Choice<>("mm and kgf",
+                new DisplayUnits(LengthUnit.MM, ForceUnit.KGF));
 
-        private final String label;
-        private final DisplayUnits units;
-
-        UnitChoice(String label, DisplayUnits units) {
-            this.label = label;
-            this.units = units;
+        private UnitChoice() {
         }
 
-        DisplayUnits units() {
-            return units;
-        }
-
-        @Override
-        public String toString() {
-            return label;
+        static List<Choice<DisplayUnits>> values() {
+            return List.of(METRIC, IMPERIAL, METRIC_KGF);
         }
     }
 
@@ -300,8 +293,8 @@ public final class WorkstationViewModel {
         }
     }
 
-    void setUnits(UnitChoice choice) {
-        session.unitsProperty().set(choice.units());
+    void setUnits(Choice<DisplayUnits> choice) {
+        session.unitsProperty().set(choice.value());
     }
 
     /**

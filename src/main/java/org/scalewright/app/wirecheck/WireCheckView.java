@@ -14,8 +14,10 @@ import javafx.scene.control.Tooltip;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.VBox;
+import org.scalewright.app.session.Choice;
 import org.scalewright.app.tool.Tool;
 import org.scalewright.app.tool.ToolLayout;
+import org.scalewright.design.wirecheck.WireConversion;
 
 /**
  * The wire check panel: the replacement, the size conversion, the target pitch, the pitch
@@ -43,7 +45,7 @@ public final class WireCheckView implements Tool {
         none.setOnAction(e -> model.clearReplacement());
         none.disableProperty().bind(model.replacementProperty().isNull());
 
-        ChoiceBox<WireCheckViewModel.Conversion> sizes = new ChoiceBox<>();
+        ChoiceBox<Choice<WireConversion>> sizes = new ChoiceBox<>();
         sizes.setId("wire-check-sizes");
         sizes.getItems().setAll(WireCheckViewModel.Conversion.values());
         sizes.valueProperty().bindBidirectional(model.conversionProperty());

@@ -20,6 +20,7 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
+import org.scalewright.app.session.Choice;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.TypedEntry;
@@ -58,36 +59,28 @@ public final class WireCheckViewModel {
     public static final String PEAK = "peak of the overpull";
 
     /** How plain wire sizes are converted. */
-    enum Conversion {
-        KEEP("keep the sizes", null, null),
-        METRIC_NEAREST("to metric, nearest", true, SizeRounding.NEAREST),
-        METRIC_UP("to metric, next larger", true, SizeRounding.UP),
-        METRIC_DOWN("to metric, next smaller", true, SizeRounding.DOWN),
-        INCH_NEAREST("to inch sizes, nearest", false, SizeRounding.NEAREST),
-        INCH_UP("to inch sizes, next larger", false, SizeRounding.UP),
-        INCH_DOWN("to inch sizes, next smaller", false, SizeRounding.DOWN);
+    static final class Conversion {
+        static final Choice<WireConversion> KEEP = new Choice<>("keep the sizes", WireConversion.keep());
+        static final Choice<WireConversion> METRIC_NEAREST = metric("to metric, nearest", SizeRounding.NEAREST);
+        static final Choice<WireConversion> METRIC_UP = metric("to metric, next larger", SizeRounding.UP);
+        static final Choice<WireConversion> METRIC_DOWN = metric("to metric, next smaller", SizeRounding.DOWN);
+        static final Choice<WireConversion> INCH_NEAREST = inch("to inch sizes, nearest", SizeRounding.NEAREST);
+        static final Choice<WireConversion> INCH_UP = inch("to inch sizes, next larger", SizeRounding.UP);
+        static final Choice<WireConversion> INCH_DOWN = inch("to inch sizes, next smaller", SizeRounding.DOWN);
 
-        private final String label;
-        private final Boolean metric;
-        private final SizeRounding rounding;
-
-        Conversion(String label, Boolean metric, SizeRounding rounding) {
-            this.label = label;
-            this.metric = metric;
-            this.rounding = rounding;
+        private Conversion() {
         }
 
-        WireConversion conversion() {
-            if (metric == null) {
-                return WireConversion.keep();
-            }
-            return metric ? WireConversion.toMetric(rounding, BuiltInData.metricPlainWire())
-                    : WireConversion.toInch(rounding, BuiltInData.musicWireSizes());
+        static List<Choice<WireConversion>> values() {
+            return List.of(KEEP, METRIC_NEAREST, METRIC_UP, METRIC_DOWN, INCH_NEAREST, INCH_UP, INCH_DOWN);
         }
 
-        @Override
-        public String toString() {
-            return label;
+        private static Choice<WireConversion> metric(String label, SizeRounding r) {
+            return new Choice<>(label, WireConversion.toMetric(r, BuiltInData.metricPlainWire()));
+        }
+
+        private static Choice<WireConversion> inch(String label, SizeRounding r) {
+            return new Choice<>(label, WireConversion.toInch(r, BuiltInData.musicWireSizes()));
         }
     }
 
@@ -100,7 +93,7 @@ public final class WireCheckViewModel {
     private final UserPrompts prompts;
     private final ReadOnlyObjectWrapper<StrengthTable> replacement = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper replacementName = new ReadOnlyStringWrapper();
-    private final ObjectProperty<Conversion> conversion = new SimpleObjectProperty<>(Conversion.KEEP);
+    private final ObjectProperty<Choice<WireConversion>> conversion = new SimpleObjectProperty<>(Conversion.KEEP);
     private final StringProperty targetA4 = new SimpleStringProperty("");
     private final StringProperty centsFlat = new SimpleStringProperty("0");
     private final ReadOnlyObjectWrapper<PitchState> measuredFlat = new ReadOnlyObjectWrapper<>();
@@ -170,7 +163,7 @@ public final class WireCheckViewModel {
         replacementName.set(presentTableWords());
     }
 
-    ObjectProperty<Conversion> conversionProperty() {
+    ObjectProperty<Choice<WireConversion>> conversionProperty() {
         return conversion;
     }
 
@@ -248,7 +241,7 @@ public final class WireCheckViewModel {
         var settings = session.settingsProperty().get();
         WireCheckRequest request = WireCheckRequest.of(session.scale(), settings)
                 .withReplacement(replacement.get() == null ? settings.strength() : replacement.get())
-                .withConversion(conversion.get().conversion())
+                .withConversion(conversion.get().value())
                 .withTarget(target)
                 .withFlat(state)
                 .withOverpull(pull)
