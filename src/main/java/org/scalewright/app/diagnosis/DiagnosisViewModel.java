@@ -165,9 +165,14 @@ public final class DiagnosisViewModel {
         if (!bad.isEmpty()) {
             return result.refuse(bad);
         }
-        DiagnosisReport r = SectionDiagnosis.diagnose(DiagnosisRequest.of(scale, keys, session.settingsProperty().get(),
-                        BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire())
-                .withCandidates(candidates.get().tables()).withMargin(m));
+        DiagnosisReport r;
+        try {
+            r = SectionDiagnosis.diagnose(DiagnosisRequest.of(scale, keys, session.settingsProperty().get(),
+                            BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire())
+                    .withCandidates(candidates.get().tables()).withMargin(m));
+        } catch (InvalidInput e) {
+            return result.refuse(List.of(e.getMessage().split("\n")));
+        }
         show(r);
         session.inform("diagnosis of keys " + keys + ": " + r.standingOut().size() + " notes stand out; "
                 + r.finding().cause().words());
