@@ -179,7 +179,9 @@ public final class WorkstationViewModel {
 
     /**
      * Opens {@code sheet} without asking about unsaved changes (at start, or after they were
-     * settled). A sheet that fails to load shows its problems and opens nothing.
+     * settled). A sheet that fails to load shows its problems and opens nothing; the window keeps
+     * what it showed (at start: an empty scale). Whatever the file holds, the window stays open:
+     * a fault of the program while opening is shown as such, not passed on.
      *
      * @return true when it was opened
      */
@@ -192,6 +194,12 @@ public final class WorkstationViewModel {
                     e.problems().stream().map(SheetProblem::toString).toList());
             session.complain("could not open " + sheet.getFileName() + ": " + e.problems().size() + " problem"
                     + (e.problems().size() == 1 ? "" : "s"));
+            return false;
+        } catch (RuntimeException e) {
+            String why = e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage());
+            prompts.showProblems("Sheet not opened", sheet + " could not be opened because of an error in the program "
+                    + "(please report it with the file); nothing was opened or changed.", List.of(why));
+            session.complain("could not open " + sheet.getFileName() + ": an error in the program (" + why + ")");
             return false;
         }
     }

@@ -1,5 +1,6 @@
 package org.scalewright.cli;
 
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyRange;
 import picocli.CommandLine;
 
@@ -9,7 +10,7 @@ public final class KeyRangeConverter implements CommandLine.ITypeConverter<KeyRa
     public KeyRange convert(String value) {
         try {
             return KeyRange.parse(value);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput e) {
             throw new CommandLine.TypeConversionException(e.getMessage());
         }
     }

@@ -1,6 +1,7 @@
 package org.scalewright.cli;
 
 import org.scalewright.design.stretch.OctaveType;
+import org.scalewright.model.InvalidInput;
 import picocli.CommandLine.Option;
 
 /** The {@code --octave 2:1|4:2|6:3} of the commands that compute a tuning stretch. */
@@ -13,7 +14,7 @@ public final class OctaveOption {
     OctaveType type() {
         try {
             return OctaveType.parse(octave);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput e) {
             throw new UserError("--octave: " + e.getMessage());
         }
     }

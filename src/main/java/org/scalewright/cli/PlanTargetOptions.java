@@ -10,6 +10,7 @@ import org.scalewright.design.rescale.TargetQuantity;
 import org.scalewright.design.rescale.TargetSpec;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.TargetCurveReader;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import picocli.CommandLine.Option;
 
@@ -117,8 +118,8 @@ public final class PlanTargetOptions {
         int key;
         try {
             key = KeyNames.parse(kv[0]);
-        } catch (IllegalArgumentException e) {
-            throw new UserError("--points: '" + kv[0].trim() + "' is not a key number or note name");
+        } catch (InvalidInput e) {
+            throw new UserError("--points: " + e.getMessage());
         }
         if (kv.length == 1 || kv[1].isBlank()) {
             return new double[] {key, Double.NaN};

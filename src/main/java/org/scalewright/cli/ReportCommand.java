@@ -12,20 +12,21 @@ import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.io.ScaleSheetReader;
-import org.scalewright.report.ReportContent;
-import org.scalewright.report.ReportFiles;
-import org.scalewright.report.Reports;
-import org.scalewright.report.ReportUnits;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
+import org.scalewright.report.ReportContent;
+import org.scalewright.report.ReportFiles;
+import org.scalewright.report.ReportUnits;
+import org.scalewright.report.Reports;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code report}: the PDF report, charts and order sheets of an instrument, into one directory. */
 @Command(name = "report", mixinStandardHelpOptions = true,
@@ -114,7 +115,7 @@ public final class ReportCommand implements Callable<Integer> {
         }
         try {
             return ReportUnits.parse(units);
-        } catch (IllegalArgumentException e) {
+        } catch (InvalidInput e) {
             throw new UserError("--units: " + e.getMessage());
         }
     }
@@ -123,13 +124,17 @@ public final class ReportCommand implements Callable<Integer> {
         WireAllowances a = WireAllowances.DEFAULT.withLooped(!singleTied);
         try {
             if (pinAllowanceMm != null) {
-                a = a.withPinAllowance(pinAllowanceMm / 1e3);
+                a = a.withPinAllowance(WireAllowances.pinAllowanceOf(pinAllowanceMm));
             }
+        } catch (InvalidInput e) {
+            throw new UserError("--pin-allowance: " + e.getMessage());
+        }
+        try {
             if (lengthAllowanceMm != null) {
-                a = a.withLengthAllowance(lengthAllowanceMm / 1e3);
+                a = a.withLengthAllowance(WireAllowances.lengthAllowanceOf(lengthAllowanceMm));
             }
-        } catch (IllegalArgumentException e) {
-            throw new UserError("allowance: " + e.getMessage());
+        } catch (InvalidInput e) {
+            throw new UserError("--length-allowance: " + e.getMessage());
         }
         return a;
     }

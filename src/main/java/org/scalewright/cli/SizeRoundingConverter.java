@@ -1,6 +1,7 @@
 package org.scalewright.cli;
 
 import org.scalewright.design.wirecheck.SizeRounding;
+import org.scalewright.model.InvalidInput;
 import picocli.CommandLine;
 
 /** Reads {@code nearest}, {@code up} or {@code down} for {@code --to-metric} and {@code --to-inch}. */
@@ -9,8 +10,8 @@ final class SizeRoundingConverter implements CommandLine.ITypeConverter<SizeRoun
     public SizeRounding convert(String value) {
         try {
             return SizeRounding.parse(value);
-        } catch (IllegalArgumentException e) {
-            throw new CommandLine.TypeConversionException("expected nearest, up or down, was '" + value + "'");
+        } catch (InvalidInput e) {
+            throw new CommandLine.TypeConversionException(e.getMessage());
         }
     }
 }

@@ -106,7 +106,8 @@ public final class BuiltInData {
             if (in == null) {
                 throw new IllegalStateException("missing built-in table " + name);
             }
-            return CsvTable.parse(Path.of(name), TextFile.lines(Path.of(name), in.readAllBytes()));
+            return CsvTable.parse(Path.of(name), TextFile.lines(Path.of(name), in.readAllBytes()),
+                    CsvTable.RowLimit.TABLE);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (BadInputException e) {

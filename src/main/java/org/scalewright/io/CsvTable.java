@@ -27,11 +27,25 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
     record Row(int line, List<String> cells) {
     }
 
-    static CsvTable read(Path file) throws BadInputException {
-        return parse(file, TextFile.lines(file));
+    /** The most cells a line may have; no input of the program has more than 16 columns. */
+    static final int MAX_CELLS = 100;
+
+    /**
+     * What a file's rows are, for the message when there are too many.
+     *
+     * @param maxRows the most data rows read
+     * @param what    what one row is, in words ({@code "a scale sheet has one row per key"})
+     */
+    record RowLimit(int maxRows, String what) {
+        static final RowLimit KEYS = new RowLimit(InputLimits.MAX_KEY_ROWS, "one row per key");
+        static final RowLimit TABLE = new RowLimit(InputLimits.MAX_TABLE_ROWS, "one row per diameter");
     }
 
-    static CsvTable parse(Path file, List<String> lines) throws BadInputException {
+    static CsvTable read(Path file, RowLimit limit) throws BadInputException {
+        return parse(file, TextFile.lines(file), limit);
+    }
+
+    static CsvTable parse(Path file, List<String> lines, RowLimit limit) throws BadInputException {
         CSVParser parser = new CSVParserBuilder().withIgnoreLeadingWhiteSpace(true).build();
         List<String> comments = new ArrayList<>();
         List<Integer> commentLines = new ArrayList<>();
@@ -61,6 +75,15 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
             if (parser.isPending()) {
                 throw new BadInputException(List.of(new SheetProblem(file, i + 1, "",
                         "a quoted cell is not closed on this line")));
+            }
+            if (cells.length > MAX_CELLS) {
+                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "", "the line has "
+                        + cells.length + " cells; at most " + MAX_CELLS + " are read")));
+            }
+            if (header != null && rows.size() == limit.maxRows()) {
+                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "", "more than "
+                        + limit.maxRows() + " rows; at most " + limit.maxRows() + " are read (" + limit.what()
+                        + ")")));
             }
             List<String> trimmed = new ArrayList<>(cells.length);
             for (String c : cells) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.scalewright.design.wirecheck.PitchState;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.Scale;
 
@@ -38,7 +39,7 @@ public final class PitchStateReader {
      * @throws BadInputException listing every problem with line and column
      */
     public static PitchState read(Path file, Scale scale) throws BadInputException {
-        CsvTable t = CsvTable.read(file);
+        CsvTable t = CsvTable.read(file, CsvTable.RowLimit.KEYS);
         List<SheetProblem> problems = new ArrayList<>();
         int keyCol = -1;
         int centsCol = -1;
@@ -78,7 +79,7 @@ public final class PitchStateReader {
             } else {
                 try {
                     key = KeyNames.parse(keyText);
-                } catch (IllegalArgumentException e) {
+                } catch (InvalidInput e) {
                     problems.add(new SheetProblem(file, r.line(), "key", e.getMessage()));
                 }
             }

@@ -9,8 +9,10 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.KeyNames;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
@@ -24,7 +26,20 @@ import org.scalewright.model.WrapMetal;
  * when there is any, nothing is returned (no half-loaded scale).
  */
 public final class ScaleSheetReader {
-    private static final int MAX_PROBLEMS = 50;
+    /**
+     * The shortest length or thinnest diameter a sheet may give, m (0.001 mm, the step a
+     * diameter is written in; anything smaller would be written back as 0).
+     */
+    public static final double SMALLEST_LENGTH = 1e-6;
+    /** The longest length or thickest diameter a sheet may give, m (10 m, beyond any piano). */
+    public static final double LARGEST_LENGTH = 10;
+    /** The lowest {@code pitch_hz} a sheet may give, Hz. */
+    public static final double LOWEST_PITCH_HZ = 1;
+    /** The highest {@code pitch_hz} a sheet may give, Hz (the top of hearing). */
+    public static final double HIGHEST_PITCH_HZ = 20_000;
+    /** The most {@code cents} a note may be moved from its equal-tempered pitch, either way (an octave). */
+    public static final double MAX_CENTS = 1200;
+
     private final WireSizeTable sizes;
 
     /** @param sizes the music-wire sizes a {@code wire} cell may name */
@@ -43,12 +58,12 @@ public final class ScaleSheetReader {
      * @throws BadInputException listing every problem (file, line, column, what was expected)
      */
     public Scale read(Path file) throws BadInputException {
-        return parse(file, CsvTable.read(file));
+        return parse(file, CsvTable.read(file, CsvTable.RowLimit.KEYS));
     }
 
     /** Reads a sheet from bytes already in memory; {@code file} names it in messages. */
     public Scale read(Path file, byte[] content) throws BadInputException {
-        return parse(file, CsvTable.parse(file, TextFile.lines(file, content)));
+        return parse(file, CsvTable.parse(file, TextFile.lines(file, content), CsvTable.RowLimit.KEYS));
     }
 
     private Scale parse(Path file, CsvTable table) throws BadInputException {
@@ -88,10 +103,6 @@ public final class ScaleSheetReader {
                 } else {
                     notes.add(n);
                 }
-            }
-            if (problems.size() >= MAX_PROBLEMS) {
-                problems.add(new SheetProblem(file, row.line(), "", "too many problems; stopped reading here"));
-                break;
             }
         }
         if (!problems.isEmpty()) {
@@ -135,7 +146,7 @@ public final class ScaleSheetReader {
                         + " columns");
                 return null;
             }
-            Integer key = integer(SheetColumn.KEY, true);
+            Integer key = key();
             Integer strings = integer(SheetColumn.STRINGS, true);
             if (strings != null && (strings < 1 || strings > 3)) {
                 problem(SheetColumn.STRINGS, "strings per note must be 1, 2 or 3, was " + strings);
@@ -143,8 +154,13 @@ public final class ScaleSheetReader {
             Double length = length(SheetColumn.SPEAKING_LENGTH, true);
             CoreWire wire = wire();
             Wrap wrap = wrap();
-            Double pitchHz = number(SheetColumn.PITCH_HZ, false, true);
-            Double cents = number(SheetColumn.CENTS, false, false);
+            Double pitchHz = within(SheetColumn.PITCH_HZ, LOWEST_PITCH_HZ, HIGHEST_PITCH_HZ, "Hz");
+            Double cents = within(SheetColumn.CENTS, -MAX_CENTS, MAX_CENTS, "cents");
+            if (pitchHz != null && cents != null) {
+                problem(SheetColumn.CENTS, "give either " + header.name(SheetColumn.PITCH_HZ) + " (the pitch as "
+                        + "measured) or " + header.name(SheetColumn.CENTS) + " (an offset from the equal-tempered "
+                        + "pitch) on a row, not both");
+            }
             Double strike = length(SheetColumn.STRIKE, false);
             Double total = length(SheetColumn.TOTAL_LENGTH, false);
             Double winding = length(SheetColumn.WINDING_LENGTH, false);
@@ -206,7 +222,7 @@ public final class ScaleSheetReader {
                 problem(SheetColumn.WRAP2, "a second wrap needs a first wrap (" + header.name(SheetColumn.WRAP1) + ")");
                 return null;
             }
-            if (w1 == null) {
+            if (w1 == null || problems.size() > before) {
                 return null;
             }
             return new Wrap(w1, w2 == null ? 0 : w2, metal);
@@ -231,6 +247,36 @@ public final class ScaleSheetReader {
                 return t.substring(1);
             }
             return t;
+        }
+
+        /** @return the key number, when it is a whole number from {@link KeyNames#LOWEST_KEY} to {@link KeyNames#HIGHEST_KEY} */
+        private Integer key() {
+            String t = cell(SheetColumn.KEY);
+            if (t.isEmpty()) {
+                problem(SheetColumn.KEY, "a value is required here (a whole number)");
+                return null;
+            }
+            if (!t.matches("[+-]?\\d+")) {
+                problem(SheetColumn.KEY, "expected a whole number, was '" + t + "'");
+                return null;
+            }
+            // compared as digits first, so that a number past the int range is told as typed
+            if (t.replaceFirst("^[+-]?0*", "").length() > 4 || !KeyNames.accepted(Integer.parseInt(t))) {
+                problem(SheetColumn.KEY, KeyNames.outOfRange(t));
+                return null;
+            }
+            return Integer.parseInt(t);
+        }
+
+        /** @return an optional number from {@code low} to {@code high}, in {@code unit} */
+        private Double within(SheetColumn c, double low, double high, String unit) {
+            Double v = number(c, false, false);
+            if (v != null && (v < low || v > high)) {
+                problem(c, "must be " + NumberText.plain(low) + " to " + NumberText.plain(high) + " " + unit
+                        + ", was " + cell(c));
+                return null;
+            }
+            return v;
         }
 
         private Integer integer(SheetColumn c, boolean required) {
@@ -290,7 +336,17 @@ public final class ScaleSheetReader {
                 return null;
             }
             LengthUnit u = header.unit(c);
-            return u.toMetres(v);
+            double metres = u.toMetres(v);
+            if (!(metres >= SMALLEST_LENGTH && metres <= LARGEST_LENGTH)) {
+                problem(c, "must be " + lengthText(SMALLEST_LENGTH, u) + " to " + lengthText(LARGEST_LENGTH, u)
+                        + ", was " + cell(c) + " " + u.symbol());
+                return null;
+            }
+            return metres;
+        }
+
+        private static String lengthText(double metres, LengthUnit u) {
+            return NumberText.significant(u.fromMetres(metres), 3) + " " + u.symbol();
         }
 
         private void problem(SheetColumn c, String message) {

@@ -27,7 +27,7 @@ public final class StrengthTableReader {
      * @throws BadInputException listing every problem with line and column
      */
     public static StrengthTable read(Path file) throws BadInputException {
-        return parse(file, CsvTable.read(file));
+        return parse(file, CsvTable.read(file, CsvTable.RowLimit.TABLE));
     }
 
     /** Reads a table bundled as a class-path resource; a broken bundled table is an internal error. */
@@ -37,7 +37,7 @@ public final class StrengthTableReader {
                 throw new IllegalStateException("missing built-in table " + resource);
             }
             Path name = Path.of(resource.substring(resource.lastIndexOf('/') + 1));
-            return parse(name, CsvTable.parse(name, TextFile.lines(name, in.readAllBytes())));
+            return parse(name, CsvTable.parse(name, TextFile.lines(name, in.readAllBytes()), CsvTable.RowLimit.TABLE));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         } catch (BadInputException e) {

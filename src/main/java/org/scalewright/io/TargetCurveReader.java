@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.TreeMap;
 import org.scalewright.design.rescale.TargetCurve;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 
 /**
@@ -26,7 +27,7 @@ public final class TargetCurveReader {
      * @throws BadInputException listing every problem with line and column
      */
     public static TargetCurve read(Path file) throws BadInputException {
-        CsvTable t = CsvTable.read(file);
+        CsvTable t = CsvTable.read(file, CsvTable.RowLimit.KEYS);
         List<SheetProblem> problems = new ArrayList<>();
         int keyCol = t.header().indexOf(KEY);
         int tCol = t.header().indexOf(TENSION);
@@ -85,8 +86,8 @@ public final class TargetCurveReader {
         }
         try {
             return KeyNames.parse(text);
-        } catch (IllegalArgumentException e) {
-            problems.add(new SheetProblem(file, r.line(), KEY, "expected a key number or note name, was '" + text + "'"));
+        } catch (InvalidInput e) {
+            problems.add(new SheetProblem(file, r.line(), KEY, e.getMessage()));
             return null;
         }
     }

@@ -22,7 +22,25 @@ public final class KeyNames {
         }
     }
 
+    /**
+     * The lowest key number the program accepts: 20 keys of extended bass below A0 (key 1),
+     * further than any keyboard extension in use (common practice, no source). DESIGN §4.
+     */
+    public static final int LOWEST_KEY = -20;
+    /** The highest key number the program accepts: 20 keys above C8 (key 88). DESIGN §4. */
+    public static final int HIGHEST_KEY = 108;
+
     private KeyNames() {
+    }
+
+    /** @return true when {@code key} lies in {@value #LOWEST_KEY} … {@value #HIGHEST_KEY} */
+    public static boolean accepted(int key) {
+        return key >= LOWEST_KEY && key <= HIGHEST_KEY;
+    }
+
+    /** @return what a refused key number is told: the accepted range and the value given */
+    public static String outOfRange(String given) {
+        return "key must be " + LOWEST_KEY + " to " + HIGHEST_KEY + " (A0 is 1, C8 is 88), was " + given;
     }
 
     /** @return the note name of a key number, sharps on output (key 49 → {@code A4}, key 2 → {@code A#0}) */
@@ -41,17 +59,23 @@ public final class KeyNames {
 
     /**
      * @param text a key number ({@code 49}) or note name ({@code A4}, {@code C#4}, {@code Bb2})
-     * @return the key number
-     * @throws IllegalArgumentException if the text is neither
+     * @return the key number, {@value #LOWEST_KEY} … {@value #HIGHEST_KEY}
+     * @throws InvalidInput if the text is neither, or names a key outside that range
      */
     public static int parse(String text) {
         String t = text.trim();
-        if (t.matches("-?\\d+")) {
+        if (t.matches("[+-]?\\d+")) {
+            // compared as digits, so a number past the int range is told as typed, not overflowed
+            String digits = t.replaceFirst("^[+-]?0*", "");
+            if (digits.length() > 4 || !accepted(Integer.parseInt(t))) {
+                throw new InvalidInput(outOfRange(t));
+            }
             return Integer.parseInt(t);
         }
         Matcher m = NAME.matcher(t);
-        if (!m.matches()) {
-            throw new IllegalArgumentException("not a key number or note name: '" + text + "'");
+        if (!m.matches() || m.group(3).replaceFirst("^-?0*", "").length() > 3) {
+            throw new InvalidInput(m.matches() ? outOfRange("'" + t + "'")
+                    : "not a key number or note name (such as 49, A4 or C#3): '" + t + "'");
         }
         int letter = "ABCDEFG".indexOf(m.group(1).toUpperCase(Locale.ROOT));
         int semitone = SEMITONE_OF_LETTER[letter];
@@ -71,6 +95,9 @@ public final class KeyNames {
         }
         if (m.group(2).equals("#") && m.group(1).equalsIgnoreCase("B")) {
             key = keyOfC + 12; // B# is C of the next octave
+        }
+        if (!accepted(key)) {
+            throw new InvalidInput(outOfRange("'" + t + "' (key " + key + ")"));
         }
         return key;
     }

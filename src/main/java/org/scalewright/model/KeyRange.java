@@ -24,20 +24,28 @@ public record KeyRange(int first, int last) {
      * Parses {@code A-B}; each end a key number (possibly negative for extended bass: {@code -2-10})
      * or a note name.
      *
-     * @throws IllegalArgumentException with a message saying what was expected
+     * @throws InvalidInput with a message saying what was expected: the form, a key outside
+     *         {@link KeyNames#LOWEST_KEY} … {@link KeyNames#HIGHEST_KEY}, or a range from high to low
      */
     public static KeyRange parse(String text) {
         String t = text.trim();
         // the separator is the first '-' that is not at the start of the text
         int sep = t.indexOf('-', 1);
         if (sep < 0) {
-            throw new IllegalArgumentException("key range must be written A-B (e.g. 33-88 or F3-C8), was '" + text + "'");
+            throw new InvalidInput("key range must be written A-B (e.g. 33-88 or F3-C8), was '" + t + "'");
         }
+        int first;
+        int last;
         try {
-            return new KeyRange(KeyNames.parse(t.substring(0, sep)), KeyNames.parse(t.substring(sep + 1)));
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("key range '" + text + "': " + e.getMessage(), e);
+            first = KeyNames.parse(t.substring(0, sep));
+            last = KeyNames.parse(t.substring(sep + 1));
+        } catch (InvalidInput e) {
+            throw new InvalidInput("key range '" + t + "': " + e.getMessage());
         }
+        if (last < first) {
+            throw new InvalidInput("key range must run from low to high, was " + t);
+        }
+        return new KeyRange(first, last);
     }
 
     @Override

@@ -3,6 +3,7 @@ package org.scalewright.physics;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.Materials;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.PitchStandard;
 
 /**
@@ -12,6 +13,29 @@ import org.scalewright.model.PitchStandard;
  */
 public final class NoteCalculator {
     private NoteCalculator() {
+    }
+
+    /**
+     * @return true when the note's strings have a positive, finite tension at its pitch; false when
+     *         T = 4 L² μ f² − K ≤ 0: the wire is too stiff for its speaking length at that pitch, and
+     *         no figure of the note (stress, B, headroom) describes a string that can exist
+     */
+    public static boolean isPossible(NoteResult r) {
+        return r.tension() > 0 && Double.isFinite(r.tension());
+    }
+
+    /**
+     * @param note the note
+     * @param r    its result
+     * @return the impossibility named for a person: {@code key 1 (A0): no positive tension: a 2.500 mm
+     *         wire is too stiff for a speaking length of 60.0 mm at 27.50 Hz (4 L² μ f² − K = −135.6 N)}
+     */
+    public static String impossibility(Note note, NoteResult r) {
+        return "key " + r.key() + " (" + r.noteName() + "): no positive tension: a "
+                + NumberText.fixed(r.coreDiameter() * 1e3, 3) + " mm " + (r.wound() ? "core" : "wire")
+                + " is too stiff for a speaking length of " + NumberText.fixed(note.speakingLength() * 1e3, 1)
+                + " mm at " + NumberText.fixed(r.frequency(), 2) + " Hz (4 L\u00b2 \u03bc f\u00b2 \u2212 K = "
+                + NumberText.fixed(r.tension(), 1) + " N)";
     }
 
     /**

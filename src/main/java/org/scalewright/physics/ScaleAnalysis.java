@@ -1,7 +1,9 @@
 package org.scalewright.physics;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.scalewright.model.KeyRange;
 import org.scalewright.model.Scale;
 
 /**
@@ -32,6 +34,21 @@ public record ScaleAnalysis(Scale scale, AnalysisSettings settings, List<NoteRes
             }
         }
         return Optional.empty();
+    }
+
+    /**
+     * @param range the keys asked about
+     * @return for each note of the range whose tension is not positive ({@link NoteCalculator#isPossible}),
+     *         bass to treble, the impossibility named ({@link NoteCalculator#impossibility})
+     */
+    public List<String> impossibleIn(KeyRange range) {
+        List<String> out = new ArrayList<>();
+        for (NoteResult r : notes) {
+            if (range.contains(r.key()) && !NoteCalculator.isPossible(r)) {
+                scale.note(r.key()).ifPresent(n -> out.add(NoteCalculator.impossibility(n, r)));
+            }
+        }
+        return out;
     }
 
     /** @return the number of notes with at least one flag */

@@ -1,6 +1,7 @@
 package org.scalewright.report;
 
 import java.util.Locale;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.UnitConversions;
 
@@ -42,7 +43,7 @@ public enum ReportUnits {
         return switch (t) {
             case "metric" -> METRIC;
             case "imperial" -> IMPERIAL;
-            default -> throw new IllegalArgumentException("units must be metric or imperial, was '" + text + "'");
+            default -> throw new InvalidInput("units must be metric or imperial, was '" + text + "'");
         };
     }
 

@@ -49,7 +49,7 @@ class PlanTargetFileTest {
                 write("t2.csv", "key,tension_n\n40,720\nX9,700\n50,-3\n40,710\n60,\n").toString(), "--out",
                 out.toString());
         assertEquals(2, r.status());
-        assertTrue(r.err().contains("t2.csv, line 3, column key: expected a key number or note name, was 'X9'"), r.err());
+        assertTrue(r.err().contains("t2.csv, line 3, column key: not a key number or note name (such as 49, A4 or C#3): 'X9'"), r.err());
         assertTrue(r.err().contains("t2.csv, line 4, column tension_n: must be greater than 0 N, was -3"), r.err());
         assertTrue(r.err().contains("t2.csv, line 5, column key: key 40 appears twice (first on line 2)"), r.err());
         assertTrue(r.err().contains("t2.csv, line 6, column tension_n: a value is required here"), r.err());

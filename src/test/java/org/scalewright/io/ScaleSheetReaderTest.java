@@ -189,7 +189,8 @@ class ScaleSheetReaderTest {
         only(HEADER + "1,1,0,1.5\n", 2, "length_mm", "must be greater than 0, was 0");
         only(HEADER + "1,1,1500,-1.5\n", 2, "wire_mm", "must be greater than 0");
         only("key,strings,length_mm,wire_mm,wrap1_mm\n1,1,1500,1.5,0\n", 2, "wrap1_mm", "greater than 0");
-        only("key,strings,length_mm,wire_mm,pitch_hz\n1,1,1500,1.5,-27.5\n", 2, "pitch_hz", "greater than 0");
+        only("key,strings,length_mm,wire_mm,pitch_hz\n1,1,1500,1.5,-27.5\n", 2, "pitch_hz",
+                "must be 1 to 20000 Hz, was -27.5");
     }
 
     @Test
@@ -306,7 +307,7 @@ class ScaleSheetReaderTest {
     }
 
     @Test
-    @DisplayName("a sheet with very many bad rows stops after 50 problems with a note saying so")
+    @DisplayName("a sheet with very many bad rows tells 50 problems, then how many more there were")
     void manyProblems() throws IOException {
         StringBuilder b = new StringBuilder(HEADER);
         for (int k = 1; k <= 88; k++) {
@@ -314,7 +315,76 @@ class ScaleSheetReaderTest {
         }
         List<SheetProblem> ps = problems(b.toString());
         assertEquals(51, ps.size());
-        assertTrue(ps.get(50).message().contains("too many problems"));
+        assertEquals(51, ps.get(49).line(), "the 50th problem is told with its place");
+        assertEquals("bad.csv: 38 more problems not shown (the first 50 are above)", ps.get(50).toString());
+    }
+
+    // ---- bounds: every value refused at its cell (issue 14, part 4) ----
+
+    @ParameterizedTest
+    @DisplayName("a diameter or length that rounds to nothing is refused at its cell, also in inches")
+    @CsvSource(delimiter = '|', value = {
+        "key,strings,length_mm,wire_mm|40,3,600,4.9e-324|wire_mm|4.9e-324 mm",
+        "key,strings,length_mm,wire_mm|40,3,600,0.0009|wire_mm|0.0009 mm",
+        "key,strings,length_mm,wire_mm|40,3,1e-300,1.0|length_mm|1e-300 mm",
+        "key,strings,length_mm,wire_mm|40,3,20000,1.0|length_mm|20000 mm",
+        "key,strings,length_mm,wire_mm,wrap1_mm|40,3,600,1.0,1e-30|wrap1_mm|1e-30 mm",
+        "key,strings,length_in,wire_in|40,3,24,1e-308|wire_in|1e-308 in"})
+    void lengthThatRoundsToNothing(String header, String row, String column, String given) throws IOException {
+        SheetProblem p = only(header + "\n" + row + "\n", 2, column, "was " + given);
+        assertTrue(p.message().startsWith("must be 0.001 mm to 10000 mm") || p.message().startsWith("must be 0.0000394 in to 394 in"),
+                p.toString());
+    }
+
+    @ParameterizedTest
+    @DisplayName("keys outside -20 … 108 are refused at their cell, a key near 2^31 too, without overflow")
+    @CsvSource({"200", "109", "-21", "2147483647", "2147483648", "99999999999999999999999"})
+    void keyOutsideTheAcceptedRange(String key) throws IOException {
+        SheetProblem p = only(HEADER + "40,3,600,1.0\n" + key + ",1,50,0.8\n", 3, "key",
+                "key must be -20 to 108 (A0 is 1, C8 is 88), was " + key);
+        assertEquals("bad.csv, line 3, column key: key must be -20 to 108 (A0 is 1, C8 is 88), was " + key,
+                p.toString());
+    }
+
+    @Test
+    @DisplayName("the ends of the accepted keys load")
+    void acceptedKeyEnds() throws Exception {
+        Scale s = read(HEADER + "-20,1,2000,1.6\n108,3,40,0.8\n");
+        assertEquals(List.of(-20, 108), s.notes().stream().map(Note::key).toList());
+    }
+
+    @Test
+    @DisplayName("a row with both pitch_hz and cents is refused at the cents cell (not both applied)")
+    void pitchAndCentsOnOneRow() throws IOException {
+        only("key,strings,length_mm,wire_mm,pitch_hz,cents\n40,3,600,1.0,,5\n41,3,590,1.0,262,5\n", 3, "cents",
+                "give either pitch_hz (the pitch as measured) or cents (an offset from the equal-tempered pitch) "
+                        + "on a row, not both");
+    }
+
+    @ParameterizedTest
+    @DisplayName("pitch_hz outside 1 … 20000 Hz and cents outside ±1200 are refused at their cell")
+    @CsvSource({"pitch_hz,0.5,must be 1 to 20000 Hz, was 0.5", "pitch_hz,1e300,must be 1 to 20000 Hz, was 1e300",
+        "cents,1201,must be -1200 to 1200 cents, was 1201", "cents,-5000,must be -1200 to 1200 cents, was -5000"})
+    void pitchAndCentsBounded(String column, String value, String message) throws IOException {
+        only("key,strings,length_mm,wire_mm," + column + "\n40,3,600,1.0," + value + "\n", 2, column, message);
+    }
+
+    @Test
+    @DisplayName("a sheet of more than 400 rows is refused at the 401st, without reading on")
+    void tooManyRows() throws IOException {
+        StringBuilder b = new StringBuilder(HEADER);
+        for (int i = 0; i < 100_000; i++) {
+            b.append("40,3,600,1.0\n");
+        }
+        only(b.toString(), 402, "", "more than 400 rows; at most 400 are read (one row per key)");
+    }
+
+    @Test
+    @DisplayName("a file over 2 MiB is refused before it is read, and a line of very many cells too")
+    void tooLarge() throws IOException {
+        String big = HEADER + "# " + "x".repeat(3 * 1024 * 1024) + "\n40,3,600,1.0\n";
+        only(big, 0, "", "is too large to be a piano's data");
+        only(HEADER + "40,3,600,1.0" + ",".repeat(5000) + "\n", 2, "", "the line has 5004 cells; at most 100 are read");
     }
 
     @Test

@@ -46,8 +46,27 @@ class KeyNamesTest {
     @ParameterizedTest
     @ValueSource(strings = {"", "H4", "C#", "4.5", "C##4", "middle C", "C 4"})
     void notAKey(String text) {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> KeyNames.parse(text));
+        InvalidInput e = assertThrows(InvalidInput.class, () -> KeyNames.parse(text));
         assertTrue(e.getMessage().contains("'" + text + "'"), e.getMessage());
+    }
+
+    @ParameterizedTest
+    @DisplayName("keys outside -20 … 108 are refused as typed, also past the int range, never overflowed")
+    @ValueSource(strings = {"-21", "109", "200", "13000", "2147483647", "2147483648", "-99999999999999999999",
+        "C9999999999", "A10", "G#-2"})
+    void keyOutsideTheAcceptedRange(String text) {
+        InvalidInput e = assertThrows(InvalidInput.class, () -> KeyNames.parse(text));
+        assertTrue(e.getMessage().startsWith("key must be -20 to 108"), e.getMessage());
+        assertTrue(e.getMessage().contains(text), e.getMessage());
+    }
+
+    @Test
+    @DisplayName("the accepted range's ends are accepted, by number and by name")
+    void acceptedEnds() {
+        assertEquals(-20, KeyNames.parse("-20"));
+        assertEquals(108, KeyNames.parse("+108"));
+        assertEquals(108, KeyNames.parse(KeyNames.name(108)));
+        assertEquals(-20, KeyNames.parse(KeyNames.name(-20)));
     }
 
     @Test
@@ -71,7 +90,16 @@ class KeyNamesTest {
     @ParameterizedTest
     @ValueSource(strings = {"40", "C4", "", "88-1", "X-88", "33-", "33-H9", "C8-F3"})
     void badKeyRanges(String text) {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> KeyRange.parse(text));
+        InvalidInput e = assertThrows(InvalidInput.class, () -> KeyRange.parse(text));
         assertTrue(e.getMessage().contains("key range"), e.getMessage());
+    }
+
+    @Test
+    @DisplayName("a key range reaching past 108 or below -20 names the end refused")
+    void keyRangeOutsideTheAcceptedKeys() {
+        InvalidInput e = assertThrows(InvalidInput.class, () -> KeyRange.parse("40-200"));
+        assertEquals("key range '40-200': key must be -20 to 108 (A0 is 1, C8 is 88), was 200", e.getMessage());
+        assertThrows(InvalidInput.class, () -> KeyRange.parse("-21-40"));
+        assertThrows(InvalidInput.class, () -> KeyRange.parse("1-2147483648"));
     }
 }

@@ -19,9 +19,9 @@ import javafx.collections.ObservableList;
 import org.scalewright.app.curves.CurvesViewModel;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.tool.ToolResult;
-import org.scalewright.app.session.TypedEntry;
 import org.scalewright.chart.CurveOverlay;
 import org.scalewright.design.diagnosis.DiagnosedNote;
 import org.scalewright.design.diagnosis.DiagnosisReport;
@@ -35,6 +35,7 @@ import org.scalewright.io.BuiltInData;
 import org.scalewright.io.DiagnosisCsv;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.io.StrengthTableReader;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyRange;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
@@ -153,7 +154,7 @@ public final class DiagnosisViewModel {
                     bad.add("keys " + keys + ": the scale has no note in that range");
                     keys = null;
                 }
-            } catch (IllegalArgumentException e) {
+            } catch (InvalidInput e) {
                 bad.add("keys: " + e.getMessage());
             }
         }
@@ -164,9 +165,14 @@ public final class DiagnosisViewModel {
         if (!bad.isEmpty()) {
             return result.refuse(bad);
         }
-        DiagnosisReport r = SectionDiagnosis.diagnose(DiagnosisRequest.of(scale, keys, session.settingsProperty().get(),
-                        BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire())
-                .withCandidates(candidates.get().tables()).withMargin(m));
+        DiagnosisReport r;
+        try {
+            r = SectionDiagnosis.diagnose(DiagnosisRequest.of(scale, keys, session.settingsProperty().get(),
+                            BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire())
+                    .withCandidates(candidates.get().tables()).withMargin(m));
+        } catch (InvalidInput e) {
+            return result.refuse(List.of(e.getMessage().split("\n")));
+        }
         show(r);
         session.inform("diagnosis of keys " + keys + ": " + r.standingOut().size() + " notes stand out; "
                 + r.finding().cause().words());

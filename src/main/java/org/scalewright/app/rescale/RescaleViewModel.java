@@ -542,8 +542,8 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private static int key(String text, String field) {
         try {
             return KeyNames.parse(text);
-        } catch (IllegalArgumentException e) {
-            throw new InvalidInput(field + " key: '" + text + "' is not a key number or note name");
+        } catch (InvalidInput e) {
+            throw new InvalidInput(field + " key: " + e.getMessage());
         }
     }
 

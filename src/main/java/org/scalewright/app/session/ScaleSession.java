@@ -196,6 +196,8 @@ public final class ScaleSession {
      */
     public void open(Path sheet, boolean saveBack) throws BadInputException {
         Scale loaded = ScaleSheetReader.standard().read(sheet);
+        // analysed once before anything changes, so that a fault leaves the session as it was
+        ScaleAnalyzer.analyze(loaded, settings.get());
         history.reset(loaded);
         file.set(saveBack ? sheet : null);
         documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo)"));

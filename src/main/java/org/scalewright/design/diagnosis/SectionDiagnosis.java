@@ -3,6 +3,7 @@ package org.scalewright.design.diagnosis;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
@@ -32,13 +33,15 @@ public final class SectionDiagnosis {
     /**
      * @param request the scale, range, settings and candidate tables
      * @return the report; the scale is not changed
+     * @throws InvalidInput when the range holds a note whose tension is not positive (DESIGN §3), one
+     *         line per such key; such notes outside the range are left out of their section's trend
      */
     public static DiagnosisReport diagnose(DiagnosisRequest request) {
         Scale scale = request.scale();
         AnalysisSettings settings = request.settings();
         double aim = aim(settings);
         List<DiagnosedNote> out = new ArrayList<>();
-        List<Note> notes = scale.notes();
+        List<Note> notes = possibleNotes(request);
         int start = 0;
         for (int i = 1; i <= notes.size(); i++) {
             if (i == notes.size() || !sameSection(notes.get(i), notes.get(start))) {
@@ -51,6 +54,31 @@ public final class SectionDiagnosis {
         }
         Finding finding = FindingWriter.write(request, out);
         return new DiagnosisReport(request, out, finding);
+    }
+
+    /**
+     * @return the notes of the scale with a positive tension; a note without one has no stress to
+     *         compare, so it is left out of its section's trend
+     * @throws InvalidInput naming each note of the range with no positive tension
+     */
+    private static List<Note> possibleNotes(DiagnosisRequest request) {
+        List<Note> possible = new ArrayList<>();
+        List<String> impossible = new ArrayList<>();
+        for (Note n : request.scale().notes()) {
+            NoteResult r = NoteCalculator.compute(n, request.scale().pitch(), request.settings());
+            if (NoteCalculator.isPossible(r)) {
+                possible.add(n);
+            } else if (request.range().contains(n.key())) {
+                impossible.add(NoteCalculator.impossibility(n, r));
+            }
+        }
+        if (!impossible.isEmpty()) {
+            impossible.add("keys " + request.range() + " are not diagnosed: correct the speaking length or wire of "
+                    + (impossible.size() == 1 ? "that key" : "those keys") + " in the sheet, or diagnose a range "
+                    + "without " + (impossible.size() == 1 ? "it" : "them"));
+            throw new InvalidInput(String.join("\n", impossible));
+        }
+        return possible;
     }
 
     /** @return the percent the remedies aim for: just under the caution band, % */

@@ -1,6 +1,8 @@
 package org.scalewright.design.orders;
 
 import org.scalewright.model.Checks;
+import org.scalewright.model.InvalidInput;
+import org.scalewright.model.NumberText;
 
 /**
  * How much plain wire to allow per string beyond what the scale sheet gives.
@@ -36,6 +38,41 @@ public record WireAllowances(double pinAllowance, double lengthAllowance, boolea
                     "allowances must be at most 2000 mm (pin) and 5000 mm (length), were %.0f mm and %.0f mm",
                     pinAllowance * 1e3, lengthAllowance * 1e3));
         }
+    }
+
+    /** The largest tuning-pin and hitch allowance accepted, mm. */
+    public static final double MAX_PIN_ALLOWANCE_MM = 2000;
+    /** The largest front and back length allowance accepted, mm. */
+    public static final double MAX_LENGTH_ALLOWANCE_MM = 5000;
+
+    /**
+     * Checks a tuning-pin and hitch allowance a user gave.
+     *
+     * @param mm the allowance, mm
+     * @return the allowance in metres
+     * @throws InvalidInput when it is not a number from 0 to {@value #MAX_PIN_ALLOWANCE_MM} mm
+     */
+    public static double pinAllowanceOf(double mm) {
+        return userAllowance("tuning-pin and hitch allowance", mm, MAX_PIN_ALLOWANCE_MM);
+    }
+
+    /**
+     * Checks a front and back length allowance a user gave.
+     *
+     * @param mm the allowance, mm
+     * @return the allowance in metres
+     * @throws InvalidInput when it is not a number from 0 to {@value #MAX_LENGTH_ALLOWANCE_MM} mm
+     */
+    public static double lengthAllowanceOf(double mm) {
+        return userAllowance("front and back length allowance", mm, MAX_LENGTH_ALLOWANCE_MM);
+    }
+
+    private static double userAllowance(String what, double mm, double max) {
+        if (!(mm >= 0 && mm <= max)) {
+            throw new InvalidInput(what + " must be 0 to " + NumberText.plain(max) + " mm, was "
+                    + NumberText.plain(mm));
+        }
+        return mm / 1e3;
     }
 
     public WireAllowances withPinAllowance(double metres) {

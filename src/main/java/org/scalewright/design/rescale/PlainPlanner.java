@@ -59,7 +59,7 @@ public final class PlainPlanner {
         AnalysisSettings settings = present.settings();
         List<Note> notes = scale.notes();
         List<NoteResult> results = present.notes();
-        PlannedKeys planned = PlannedKeys.select(notes, range, false, target);
+        PlannedKeys planned = PlannedKeys.select(present, range, false, target);
         List<Integer> idx = planned.index();
         List<Integer> skipped = planned.skipped();
         List<CoreWire> sizes = options.sizes();

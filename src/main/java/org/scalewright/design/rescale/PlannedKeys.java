@@ -25,10 +25,11 @@ record PlannedKeys(List<Integer> index, List<Integer> skipped) {
      * @param quantity   what the target gives
      * @param perSection one smooth trend per section, joined continuously (needs a {@link TargetSpec.Loess})
      * @return the target over the keys of the range with that kind, from their present values
-     * @throws PlanNotPossible when the range holds no such key
+     * @throws PlanNotPossible when the range holds no such key, or a key whose tension is not positive
      */
     static TargetCurve target(ScaleAnalysis present, KeyRange range, TargetSpec spec, TargetQuantity quantity,
                               boolean perSection, boolean wound) {
+        refuseImpossible(present, range);
         List<NoteResult> planned = results(present, range, wound);
         if (planned.isEmpty()) {
             throw none(range, wound);
@@ -39,11 +40,15 @@ record PlannedKeys(List<Integer> index, List<Integer> skipped) {
 
     /**
      * @return the planned and skipped keys of the range
-     * @throws PlanNotPossible when the range holds no key of that kind
+     * @throws PlanNotPossible when the range holds no key of that kind, or a key whose tension is not
+     *         positive (its figures describe no string that can exist, so it can be neither a start
+     *         nor a neighbour of a plan)
      * @throws IllegalArgumentException when the target does not cover a planned key (a caller's error:
      *         the target is made for the planned keys)
      */
-    static PlannedKeys select(List<Note> notes, KeyRange range, boolean wound, TargetCurve target) {
+    static PlannedKeys select(ScaleAnalysis present, KeyRange range, boolean wound, TargetCurve target) {
+        refuseImpossible(present, range);
+        List<Note> notes = present.scale().notes();
         List<Integer> idx = new ArrayList<>();
         List<Integer> skipped = new ArrayList<>();
         for (int i = 0; i < notes.size(); i++) {
@@ -63,6 +68,22 @@ record PlannedKeys(List<Integer> index, List<Integer> skipped) {
             }
         }
         return new PlannedKeys(List.copyOf(idx), List.copyOf(skipped));
+    }
+
+    /**
+     * Refuses a range holding a note with no positive tension (a short speaking length with a low
+     * pitch, DESIGN §3): one reason per such key, and what to do about it.
+     */
+    private static void refuseImpossible(ScaleAnalysis present, KeyRange range) {
+        List<String> impossible = present.impossibleIn(range);
+        if (impossible.isEmpty()) {
+            return;
+        }
+        List<String> reasons = new ArrayList<>(impossible);
+        reasons.add("keys " + range + " are not planned: correct the speaking length or wire of "
+                + (impossible.size() == 1 ? "that key" : "those keys") + " in the sheet, or plan a range without "
+                + (impossible.size() == 1 ? "it" : "them"));
+        throw new PlanNotPossible(reasons);
     }
 
     private static PlanNotPossible none(KeyRange range, boolean wound) {

@@ -79,7 +79,7 @@ public final class WoundPlanner {
      */
     public static Proposal plan(ScaleAnalysis present, KeyRange range, TargetCurve target, WoundPlanOptions options) {
         List<Note> notes = present.scale().notes();
-        PlannedKeys planned = PlannedKeys.select(notes, range, true, target);
+        PlannedKeys planned = PlannedKeys.select(present, range, true, target);
         List<Integer> idx = planned.index();
         List<Integer> skipped = planned.skipped();
         List<Integer> breaks = breaks(notes, idx);

@@ -1,6 +1,7 @@
 package org.scalewright.design.stretch;
 
 import java.util.Locale;
+import org.scalewright.model.InvalidInput;
 
 /**
  * The octave a tuner makes beatless when stretching: the lower note's partial 2m against the
@@ -53,7 +54,7 @@ public enum OctaveType {
                 return o;
             }
         }
-        throw new IllegalArgumentException("octave type must be 2:1, 4:2 or 6:3, was '" + text + "'");
+        throw new InvalidInput("octave type must be 2:1, 4:2 or 6:3, was '" + text + "'");
     }
 
     @Override

@@ -26,6 +26,6 @@ public enum SizeRounding {
                 return r;
             }
         }
-        throw new IllegalArgumentException("size rounding must be nearest, up or down, was '" + text + "'");
+        throw new org.scalewright.model.InvalidInput("size rounding must be nearest, up or down, was '" + text + "'");
     }
 }

@@ -110,10 +110,14 @@ class DiagnosisViewModelTest {
 
     @Test
     void badEntriesAndABadTableChangeNothing() throws Exception {
-        diagnosis.rangeProperty().set("100-120");
+        diagnosis.rangeProperty().set("100-108");
         assertFalse(diagnosis.diagnose());
         assertTrue(diagnosis.problemProperty().get().contains("no note in that range"),
                 diagnosis.problemProperty().get());
+        diagnosis.rangeProperty().set("100-2147483648");
+        assertFalse(diagnosis.diagnose());
+        assertTrue(diagnosis.problemProperty().get().contains("key must be -20 to 108 (A0 is 1, C8 is 88), was "
+                + "2147483648"), diagnosis.problemProperty().get());
         diagnosis.rangeProperty().set("60-80");
         diagnosis.marginProperty().set("none");
         assertFalse(diagnosis.diagnose());
@@ -132,6 +136,21 @@ class DiagnosisViewModelTest {
         assertTrue(diagnosis.diagnose());
         assertTrue(diagnosis.remedies().stream().anyMatch(m -> m.text().contains("Example Wire Works")),
                 diagnosis.remedies().toString());
+    }
+
+    @Test
+    void aRangeHoldingANoteWithNoTensionIsRefusedNamingIt() throws Exception {
+        Path sheet = Files.writeString(dir.resolve("short.csv"), "key,strings,length_mm,wire_mm\n1,1,60,2.5\n"
+                + "2,1,1500,1.2\n3,1,1490,1.2\n4,1,1480,1.2\n5,1,1470,1.2\n6,1,1460,1.2\n7,1,1450,1.2\n");
+        assertTrue(vm.openSheet(sheet, true));
+        diagnosis.rangeProperty().set("1-7");
+        assertFalse(diagnosis.diagnose());
+        String told = diagnosis.problemProperty().get();
+        assertTrue(told.contains("key 1 (A0): no positive tension"), told);
+        assertTrue(told.contains("keys 1-7 are not diagnosed"), told);
+        assertNull(diagnosis.reportProperty().get());
+        diagnosis.rangeProperty().set("2-7");
+        assertTrue(diagnosis.diagnose(), diagnosis.problemProperty().get());
     }
 
     @Test

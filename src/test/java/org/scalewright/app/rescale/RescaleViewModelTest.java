@@ -114,6 +114,14 @@ class RescaleViewModelTest {
     }
 
     @Test
+    void aTypedKeyOutsideTheAcceptedKeysIsRefusedAsTyped() {
+        vm.fromProperty().set("40");
+        vm.toProperty().set("2147483648");
+        assertFalse(vm.propose());
+        assertEquals("to key: key must be -20 to 108 (A0 is 1, C8 is 88), was 2147483648", vm.problems().get(0));
+    }
+
+    @Test
     void editingAControlPointChangesTheTargetAndTheProposal() {
         vm.setRange(40, 60);
         assertTrue(vm.propose());

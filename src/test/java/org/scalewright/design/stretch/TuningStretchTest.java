@@ -12,6 +12,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.scalewright.design.orders.TestScales;
 import org.scalewright.io.BuiltInData;
+import org.scalewright.model.InvalidInput;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
 
@@ -171,7 +172,7 @@ class TuningStretchTest {
         assertEquals(OctaveType.SIX_THREE, OctaveType.parse("6:3"));
         assertEquals(3, OctaveType.SIX_THREE.upperPartial());
         assertEquals(6, OctaveType.SIX_THREE.lowerPartial());
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> OctaveType.parse("3:1"));
+        InvalidInput e = assertThrows(InvalidInput.class, () -> OctaveType.parse("3:1"));
         assertTrue(e.getMessage().contains("'3:1'"), e.getMessage());
     }
 

@@ -63,7 +63,7 @@ class NeighbourPickTest {
                 () -> NeighbourPick.of(-1 * MM, LIST, SizeRounding.UP));
         assertTrue(e.getMessage().contains("-1"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> NeighbourPick.of(1 * MM, new double[0], SizeRounding.UP));
-        assertThrows(IllegalArgumentException.class, () -> SizeRounding.parse("sideways"));
+        assertThrows(org.scalewright.model.InvalidInput.class, () -> SizeRounding.parse("sideways"));
         assertEquals(SizeRounding.DOWN, SizeRounding.parse(" Down "));
     }
 }
