@@ -53,7 +53,8 @@ public final class AnalyzeCommand implements Callable<Integer> {
         w.println();
         w.println("wire: #size = music-wire size, else diameter in mm; wound: core/wrap[+second wrap] metal (co, ir, st)");
         w.println("flag: ! danger band, over strength or implausible value, ^ caution band, v low stress, "
-                + "s tension step, ? outside the strength table");
+                + "s tension step, w plain size out of order (growing toward the treble, or a single odd size), "
+                + "? outside the strength table");
         w.println();
         if (a.flags().isEmpty()) {
             w.println("No flagged notes.");
@@ -90,6 +91,7 @@ public final class AnalyzeCommand implements Callable<Integer> {
                 case CAUTION -> "^";
                 case LOW_STRESS -> "v";
                 case NEIGHBOUR_STEP -> "s";
+                case SIZE_GROWS, ODD_SIZE -> "w";
                 default -> "?";
             };
             if (m.indexOf(c) < 0) {

@@ -30,7 +30,10 @@ public final class DiagnosisCsv {
         c.add("keys: " + report.request().range());
         c.add("a4_hz: " + NumberText.number(report.request().scale().pitch().a4()));
         c.add("strength table: " + report.request().settings().strength().name());
-        c.add("caution margin: " + NumberText.number(report.request().marginPct()) + " %");
+        c.add("stand-out margin: " + NumberText.number(report.request().marginPct()) + " % from the section's trend");
+        c.add("length_trend_mm: the section's trend of speaking length at the key (the trend length of the finding)");
+        c.add("length_for_trend_mm: the speaking length that would put the note's percent of breaking strength on "
+                + "its section's trend (notes standing out high)");
         c.add("cause: " + report.finding().cause().words());
         for (String p : report.finding().explanation()) {
             c.add("finding: " + p);

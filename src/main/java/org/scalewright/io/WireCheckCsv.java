@@ -3,8 +3,8 @@ package org.scalewright.io;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.scalewright.design.wirecheck.RaiseStage;
 import org.scalewright.design.wirecheck.StageAdvice;
+import org.scalewright.design.wirecheck.StageWords;
 import org.scalewright.design.wirecheck.TensionTotals;
 import org.scalewright.design.wirecheck.WireCheckNote;
 import org.scalewright.design.wirecheck.WireCheckReport;
@@ -49,18 +49,21 @@ public final class WireCheckCsv {
         c.add(String.format(Locale.ROOT, "total tension at peak: %s N (%s lbf), change %s N (%s lbf)",
                 NumberText.rounded(t.peak(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.peak()), 0),
                 NumberText.rounded(t.changeToPeak(), 0), NumberText.rounded(UnitConversions.newtonsToLbf(t.changeToPeak()), 0)));
+        // the stage advice in the tool's one wording (design.wirecheck.StageWords)
         StageAdvice s = report.stages();
+        StageWords w = report.stageWords();
         c.add("raise in stages: " + (s.advised() ? "yes" : "no"));
-        for (String r : s.reasons()) {
+        for (String r : w.reasons()) {
             c.add("  because " + r);
         }
-        if (s.advised() && s.hasPlan()) {
-            c.add("  plan: " + s.stages().size() + " passes");
-            for (String line : planLines(s)) {
-                c.add("  " + line);
-            }
-        } else if (s.advised()) {
-            c.add("  no plan of up to " + StageAdvice.MAX_STAGES + " passes keeps every pass within the limits");
+        if (!w.plan().isEmpty()) {
+            c.add("  " + w.plan());
+        }
+        for (String line : w.passes()) {
+            c.add("  " + line);
+        }
+        if (!w.closing().isEmpty()) {
+            c.add("  " + w.closing());
         }
         return c;
     }
@@ -84,18 +87,6 @@ public final class WireCheckCsv {
                     w.wireChange().remark()));
         }
         return rows;
-    }
-
-    /** @return the stage plan as lines of text (empty when there is none) */
-    public static List<String> planLines(StageAdvice s) {
-        List<String> lines = new ArrayList<>();
-        for (RaiseStage st : s.stages()) {
-            lines.add(String.format(Locale.ROOT, "pass %d: to %.0f %% of the raise; total %s -> %s N at the peak; "
-                            + "highest %.1f %% of breaking strength (key %d)", st.number(), 100 * st.endFraction(),
-                    NumberText.rounded(st.totalAtStart(), 0), NumberText.rounded(st.totalAtPeak(), 0), st.maxPeakPct(),
-                    st.maxPeakKey()));
-        }
-        return lines;
     }
 
     private static String size(CoreWire w) {

@@ -22,7 +22,19 @@ public enum FlagKind {
      */
     IMPLAUSIBLE("implausible value"),
     /** the strength table had to be extrapolated for this diameter */
-    OUTSIDE_STRENGTH_TABLE("outside strength table");
+    OUTSIDE_STRENGTH_TABLE("outside strength table"),
+    /**
+     * a plain wire thicker than its bass-side plain neighbour in the same section: against how
+     * plain sizes run (staying or stepping down toward the treble), and it carries a step in
+     * tension with it; a caution, like the tension step
+     */
+    SIZE_GROWS("size grows toward the treble"),
+    /**
+     * a single plain wire of another size between two neighbours of one size (16, 17, 16): most
+     * often a replacement of a near size; plain-wire stress hardly depends on the diameter, so a
+     * notice, to restore the scale's size at the next restringing
+     */
+    ODD_SIZE("single odd size");
 
     /** How seriously a flag is to be taken, most serious first. */
     public enum Severity {
@@ -49,8 +61,8 @@ public enum FlagKind {
     public Severity severity() {
         return switch (this) {
             case DANGER, OVER_STRENGTH, IMPLAUSIBLE -> Severity.DANGER;
-            case CAUTION, NEIGHBOUR_STEP -> Severity.CAUTION;
-            case LOW_STRESS, OUTSIDE_STRENGTH_TABLE -> Severity.NOTICE;
+            case CAUTION, NEIGHBOUR_STEP, SIZE_GROWS -> Severity.CAUTION;
+            case LOW_STRESS, OUTSIDE_STRENGTH_TABLE, ODD_SIZE -> Severity.NOTICE;
         };
     }
 

@@ -2,10 +2,15 @@ package org.scalewright.physics;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.scalewright.model.KeyNames;
 import org.scalewright.model.Note;
 import org.scalewright.model.NumberText;
+import org.scalewright.model.WireNotation;
 
-/** The flags of a single note: stress bands, implausible values, strength-table range. */
+/**
+ * The flags of a single note (stress bands, implausible values, strength-table range) and the
+ * flags on the order of plain-wire sizes along the sheet.
+ */
 final class NoteFlags {
     private NoteFlags() {
     }
@@ -63,5 +68,64 @@ final class NoteFlags {
                     + NumberText.fixed(s.strength().maxDiameter() * 1e3, 3) + " mm); strength extrapolated"));
         }
         return flags.isEmpty() ? List.of() : flags;
+    }
+
+    /**
+     * Diameters closer than this are one size: a size given by number and the same wire given in
+     * millimetres differ by rounding only (half a music-wire size is 0.0127 mm, a metric step 0.025 mm).
+     */
+    static final double SAME_DIAMETER = 1e-6;
+
+    /**
+     * The flags on the order of plain-wire sizes, notes in sheet order: a plain wire thicker than
+     * its bass-side plain neighbour in the same section ({@link FlagKind#SIZE_GROWS}), and a plain
+     * wire of another diameter than both neighbours, which agree with each other, all three plain
+     * and in one section ({@link FlagKind#ODD_SIZE}). A single odd string is flagged once: it does
+     * not also count as a growth, and the note after it is compared with the note before it.
+     *
+     * @return for each note, by index, its flags of these two kinds (mostly empty)
+     */
+    static List<List<Flag>> wireOrder(List<Note> notes) {
+        int n = notes.size();
+        boolean[] odd = new boolean[n];
+        List<List<Flag>> out = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            out.add(new ArrayList<>(0));
+        }
+        for (int i = 1; i + 1 < n; i++) {
+            Note below = notes.get(i - 1);
+            Note here = notes.get(i);
+            Note above = notes.get(i + 1);
+            if (plainInSection(below, here) && plainInSection(here, above) && same(below, above) && !same(below, here)) {
+                odd[i] = true;
+                out.get(i).add(new Flag(here.key(), FlagKind.ODD_SIZE, "plain wire " + WireNotation.of(here)
+                        + " between " + WireNotation.of(below) + " on both sides (keys " + below.key() + " "
+                        + KeyNames.name(below.key()) + " and " + above.key() + " " + KeyNames.name(above.key())
+                        + "): a single odd string, perhaps a replacement of another size"));
+            }
+        }
+        for (int i = 1; i < n; i++) {
+            int j = odd[i - 1] && i >= 2 ? i - 2 : i - 1;
+            Note below = notes.get(j);
+            Note here = notes.get(i);
+            if (odd[i] || !plainInSection(below, here)
+                    || here.wire().diameter() <= below.wire().diameter() + SAME_DIAMETER) {
+                continue;
+            }
+            out.get(i).add(new Flag(here.key(), FlagKind.SIZE_GROWS, "plain wire " + WireNotation.of(here)
+                    + " is thicker than " + WireNotation.of(below) + " on key " + below.key() + " ("
+                    + KeyNames.name(below.key()) + "), its bass-side neighbour in section '" + here.section()
+                    + "': plain sizes normally stay or step down toward the treble"));
+        }
+        return out;
+    }
+
+    /** @return true when both notes are plain wire in the same section */
+    private static boolean plainInSection(Note a, Note b) {
+        return !a.isWound() && !b.isWound() && a.section().equals(b.section());
+    }
+
+    private static boolean same(Note a, Note b) {
+        return Math.abs(a.wire().diameter() - b.wire().diameter()) <= SAME_DIAMETER;
     }
 }

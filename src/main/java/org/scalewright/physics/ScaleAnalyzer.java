@@ -25,6 +25,7 @@ public final class ScaleAnalyzer {
             results[i] = NoteCalculator.compute(notes.get(i), scale.pitch(), settings);
         }
         addNeighbourSteps(results, settings.neighbourStepPct());
+        addWireOrder(results, notes);
         List<Flag> allFlags = new ArrayList<>();
         double total = 0;
         for (NoteResult r : results) {
@@ -45,6 +46,17 @@ public final class ScaleAnalyzer {
                         "tension per string " + NumberText.signed(step, 1) + " % from key " + below.key() + " ("
                         + KeyNames.name(below.key()) + "), more than " + NumberText.fixed(limitPct, 0) + " %"));
                 results[i] = withFlags(here, flags);
+            }
+        }
+    }
+
+    private static void addWireOrder(NoteResult[] results, List<Note> notes) {
+        List<List<Flag>> order = NoteFlags.wireOrder(notes);
+        for (int i = 0; i < results.length; i++) {
+            if (!order.get(i).isEmpty()) {
+                List<Flag> flags = new ArrayList<>(results[i].flags());
+                flags.addAll(order.get(i));
+                results[i] = withFlags(results[i], flags);
             }
         }
     }

@@ -318,4 +318,27 @@ class AnalyzeCommandTest {
         assertTrue(r.out().contains("Caution: "), r.out());
         assertTrue(r.out().contains("! danger band, over strength or implausible value"), r.out());
     }
+
+    @Test
+    @DisplayName("a plain size growing toward the treble and a single odd size are marked and explained")
+    void wireOrderFlags() throws Exception {
+        Path p = sheet("""
+                key,strings,length_mm,wire,section
+                40,3,620,17,treble
+                41,3,590,17,treble
+                42,3,560,18,treble
+                43,3,530,17,treble
+                44,3,500,17,treble
+                45,3,475,17.5,treble
+                46,3,450,17.5,treble
+                """);
+        Run r = run("analyze", p.toString());
+        assertEquals(0, r.status(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertTrue(lines.stream().anyMatch(l -> l.matches("\\s*42 .*\\s\\S*w")), r.out());
+        assertTrue(lines.stream().anyMatch(l -> l.matches("\\s*45 .*\\s\\S*w")), r.out());
+        assertTrue(r.out().contains("; plain wire #18 between #17 on both sides (keys 41 C#4 and 43 D#4)"), r.out());
+        assertTrue(r.out().contains("45 F4: plain wire #17.5 is thicker than #17 on key 44 (E4)"), r.out());
+        assertTrue(r.out().contains("w plain size out of order"), r.out());
+    }
 }

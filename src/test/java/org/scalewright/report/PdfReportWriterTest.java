@@ -53,6 +53,22 @@ class PdfReportWriterTest {
     }
 
     @Test
+    void theFlagSummaryCountsTheWireOrderFlags() throws Exception {
+        // the demo grand with key 50 given a single odd size, one half size thicker than keys 49 and 51 (#16)
+        Scale s = org.scalewright.io.ScaleSheetReader.standard().read(
+                java.nio.file.Path.of("demo-instruments", "grand-190", "grand-190.csv"));
+        org.scalewright.model.Note n49 = s.note(49).orElseThrow();
+        org.scalewright.model.Note n51 = s.note(51).orElseThrow();
+        assertEquals(n49.wire(), n51.wire(), "the demo's keys 49 and 51 share a size");
+        double thicker = n49.wire().diameter() + 0.0005 * 0.0254;
+        s = s.withNote(s.note(50).orElseThrow().withWire(org.scalewright.model.CoreWire.ofDiameter(thicker)));
+        try (PDDocument doc = Loader.loadPDF(pdf(ReportFixtures.content(s, ReportUnits.METRIC)))) {
+            String all = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(all.contains("1 single odd size"), all);
+        }
+    }
+
+    @Test
     void aTableRunningOverPagesRepeatsItsHeader() throws Exception {
         try (PDDocument doc = Loader.loadPDF(pdf(ReportFixtures.content(ReportUnits.METRIC)))) {
             int schedulePages = 0;

@@ -15,7 +15,7 @@ public final class FlagsView {
         list.getStyleClass().add("flags-list");
         list.setItems(model.items());
         list.setPlaceholder(new Label("No flags: every note is inside the stress bands, with no large "
-                + "tension step and no implausible value."));
+                + "tension step, no plain size out of order and no implausible value."));
         list.setCellFactory(v -> new ListCell<>() {
             private final Tooltip tip = new Tooltip();
 

@@ -11,7 +11,7 @@ import org.scalewright.physics.NoteResult;
  * @param speakingLength     its speaking length, m
  * @param trendPct           the section's trend of percent of breaking strength at this key, %
  * @param trendDeviationPct  100 · (pct − trend) / trend, %
- * @param standsOut          true when |trendDeviationPct| exceeds the caution margin
+ * @param standsOut          true when |trendDeviationPct| exceeds the stand-out margin
  * @param trendLength        the section's trend of speaking length at this key, m
  * @param share              how length, pitch, mass per area and strength each raise the stress
  *                           ratio above (positive) or below the trend

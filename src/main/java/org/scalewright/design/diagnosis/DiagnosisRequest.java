@@ -21,7 +21,7 @@ import org.scalewright.physics.StrengthTable;
  */
 public record DiagnosisRequest(Scale scale, KeyRange range, AnalysisSettings settings, List<StrengthTable> candidates,
                                double marginPct, WireSizeTable sizes, List<Double> metricDiameters) {
-    /** Default caution margin for standing out: 8 % (DESIGN §5; common practice, no source). */
+    /** Default stand-out margin: 8 % (DESIGN §5; common practice, no source). */
     public static final double DEFAULT_MARGIN_PCT = 8.0;
 
     public DiagnosisRequest {
@@ -32,7 +32,7 @@ public record DiagnosisRequest(Scale scale, KeyRange range, AnalysisSettings set
             throw new IllegalArgumentException("key range " + range + " holds no note of the scale");
         }
         if (!(marginPct > 0 && marginPct < 100)) {
-            throw new IllegalArgumentException("caution margin must be between 0 and 100 %, was " + marginPct);
+            throw new IllegalArgumentException("stand-out margin must be between 0 and 100 %, was " + marginPct);
         }
         candidates = candidates == null ? List.of() : List.copyOf(candidates);
         metricDiameters = metricDiameters == null ? List.of()

@@ -8,6 +8,7 @@ import java.util.function.ToDoubleFunction;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
 import org.scalewright.model.NumberText;
+import org.scalewright.physics.StrengthTable;
 import org.scalewright.physics.StressBands;
 
 /** Puts a diagnosis into plain words: the range, the notes standing out, the cause, the remedies. */
@@ -37,11 +38,13 @@ final class FindingWriter {
             StringBuilder b = new StringBuilder(String.format(Locale.ROOT, "The range is under the caution band "
                     + "(highest %.1f %% at %s): no change is needed to bring it under.", top.breakPct(), name(top)));
             if (!high.isEmpty()) {
-                b.append(" To bring the notes standing out back to the trend of their section, their speaking "
-                        + "lengths would be:");
-                appendLengths(b, high, n -> n.lengthForTrend().orElse(Double.NaN));
+                b.append(" The trend of their section gives the notes standing out these speaking lengths:");
+                appendTrendLengths(b, high);
             }
             words.add(b.toString());
+            if (!request.candidates().isEmpty()) {
+                words.add(comparedTables(request, top.breakPct()));
+            }
         } else {
             remedies = Remedies.all(request, all, cause);
             long fixing = remedies.stream().filter(Remedy::fixes).count();
@@ -50,9 +53,9 @@ final class FindingWriter {
                             + "they aim %.1f points under it.", fixing, bands.caution(),
                     SectionDiagnosis.AIM_BELOW_CAUTION));
             if (!high.isEmpty()) {
-                StringBuilder b = new StringBuilder("Back on the trend of their section the notes standing out "
-                        + "would have these speaking lengths:");
-                appendLengths(b, high, n -> n.lengthForTrend().orElse(Double.NaN));
+                StringBuilder b = new StringBuilder("The trend of their section gives the notes standing out these "
+                        + "speaking lengths:");
+                appendTrendLengths(b, high);
                 words.add(b.toString());
             }
         }
@@ -157,9 +160,9 @@ final class FindingWriter {
         DiagnosedNote worst = high.stream().max(Comparator.comparingDouble(DiagnosedNote::trendDeviationPct))
                 .orElseThrow();
         b.append(String.format(Locale.ROOT, " Their speaking lengths differ from the trend of the section by %s "
-                        + "(%s: %.1f mm where the trend gives %.1f mm), which alone changes their stress by %s",
+                        + "(%s: %s mm where the trend gives %s mm), which alone changes their stress by %s",
                 range(high, n -> 100 * (n.speakingLength() / n.trendLength() - 1)), name(worst),
-                worst.speakingLength() * 1e3, worst.trendLength() * 1e3, range(high, n -> n.share().lengthPct())));
+                mm(worst.speakingLength()), mm(worst.trendLength()), range(high, n -> n.share().lengthPct())));
         b.append(String.format(Locale.ROOT, "; the pitch by %s", range(high, n -> n.share().pitchPct())));
         if (!allPlain) {
             b.append(String.format(Locale.ROOT, "; the mass per area of the core by %s",
@@ -169,14 +172,47 @@ final class FindingWriter {
         return b.toString();
     }
 
-    private static void appendLengths(StringBuilder b, List<DiagnosedNote> notes, ToDoubleFunction<DiagnosedNote> f) {
+    /**
+     * Appends each note's trend length: the section's trend of speaking length at that key, the
+     * very figure the table and the CSV show ({@link DiagnosedNote#trendLength()}), rounded by {@link #mm}.
+     */
+    private static void appendTrendLengths(StringBuilder b, List<DiagnosedNote> notes) {
         String sep = " ";
         for (DiagnosedNote n : notes) {
-            b.append(String.format(Locale.ROOT, "%s%s %.1f mm (now %.1f)", sep, name(n), f.applyAsDouble(n) * 1e3,
-                    n.speakingLength() * 1e3));
+            b.append(sep).append(name(n)).append(' ').append(mm(n.trendLength())).append(" mm (now ")
+                    .append(mm(n.speakingLength())).append(')');
             sep = ", ";
         }
         b.append('.');
+    }
+
+    /**
+     * What each table given to compare would do to the range, whether or not anything runs high:
+     * the range's highest percent of breaking strength recomputed with it, beside the present one.
+     */
+    private static String comparedTables(DiagnosisRequest request, double now) {
+        StressBands bands = request.settings().bands();
+        StringBuilder b = new StringBuilder();
+        for (StrengthTable t : request.candidates()) {
+            double with = Remedies.maxPct(request.scale(), request.range(), request.settings().withStrength(t));
+            String band = with >= bands.danger() ? "in the danger band"
+                    : with >= bands.caution() ? "in the caution band" : "under the caution band";
+            b.append(b.length() == 0 ? "" : " ").append("With '").append(t.name())
+                    .append("' the highest note of the range would be at ").append(NumberText.fixed(with, 1))
+                    .append(" % of breaking strength (now ").append(NumberText.fixed(now, 1)).append(" %), ")
+                    .append(band).append('.');
+        }
+        return b.toString();
+    }
+
+    /**
+     * A length in millimetres as the finding writes it, 0.1 mm: the one rounding of a length in the
+     * diagnosis's words, the same as the terminal table's.
+     *
+     * @param metres a length, m
+     */
+    static String mm(double metres) {
+        return NumberText.fixed(metres * 1e3, 1);
     }
 
     private static String range(List<DiagnosedNote> notes, ToDoubleFunction<DiagnosedNote> f) {

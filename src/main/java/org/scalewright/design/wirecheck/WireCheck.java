@@ -93,7 +93,9 @@ public final class WireCheck {
             List<RaiseStage> stages = plan(request, notes, totals.present(), n);
             boolean ok = true;
             for (RaiseStage s : stages) {
-                if (s.change() > limit || s.maxPeakPct() >= danger) {
+                // a pass may not take a note into the danger band that is under it at the target
+                boolean newlyInDanger = s.inDanger().stream().anyMatch(o -> !dangerAtTarget.contains(o.key()));
+                if (s.change() > limit || newlyInDanger) {
                     ok = false;
                     break;
                 }
@@ -107,13 +109,15 @@ public final class WireCheck {
     }
 
     /**
-     * The passes of an n-stage raise. The notes already in the danger band at the target pitch are
-     * left out of each pass's highest percent (no plan helps them).
+     * The passes of an n-stage raise, every note's percent of breaking strength worked out at
+     * every pass's peak: the highest of all of them (notes already in the danger band at the
+     * target pitch included) and every note at or over the danger band are kept per pass.
      */
     static List<RaiseStage> plan(WireCheckRequest request, List<WireCheckNote> notes, double presentTotal, int n) {
         AnalysisSettings repl = request.settings().withStrength(request.replacement());
         double danger = request.settings().bands().danger();
         double overpull = request.overpullPct() / 100.0;
+        List<WireCheckNote> byKey = notes.stream().sorted(Comparator.comparingInt(WireCheckNote::key)).toList();
         List<RaiseStage> stages = new ArrayList<>(n);
         for (int i = 1; i <= n; i++) {
             double startFraction = (i - 1) / (double) n;
@@ -121,8 +125,9 @@ public final class WireCheck {
             double atStart = i == 1 ? presentTotal : 0;
             double atPeak = 0;
             double maxPct = Double.NEGATIVE_INFINITY;
-            int maxKey = notes.isEmpty() ? 0 : notes.get(0).key();
-            for (WireCheckNote w : notes) {
+            int maxKey = byKey.isEmpty() ? 0 : byKey.get(0).key();
+            List<RaiseStage.Over> inDanger = new ArrayList<>();
+            for (WireCheckNote w : byKey) {
                 double c = w.centsFlat();
                 double target = w.after().frequency();
                 if (i > 1) {
@@ -133,13 +138,16 @@ public final class WireCheck {
                 NoteResult r = NoteCalculator.computeAt(w.replacementNote(), Pitch.shiftedByCents(target, peakCents),
                         repl);
                 atPeak += r.noteTension();
-                if (w.breakPctAfter() < danger && r.breakPct() > maxPct) {
+                if (r.breakPct() > maxPct) {
                     maxPct = r.breakPct();
                     maxKey = w.key();
                 }
+                if (r.breakPct() >= danger) {
+                    inDanger.add(new RaiseStage.Over(w.key(), r.breakPct()));
+                }
             }
             stages.add(new RaiseStage(i, endFraction, atStart, atPeak, maxPct == Double.NEGATIVE_INFINITY ? 0 : maxPct,
-                    maxKey));
+                    maxKey, inDanger));
         }
         return stages;
     }

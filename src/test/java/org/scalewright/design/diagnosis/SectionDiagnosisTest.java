@@ -11,6 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.KeyRange;
 import org.scalewright.model.Note;
+import org.scalewright.model.NumberText;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.WireSize;
@@ -70,6 +71,62 @@ class SectionDiagnosisTest {
         for (DiagnosedNote n : r.notes()) {
             assertTrue(n.key() >= 60 && n.key() <= 80);
         }
+    }
+
+    @Test
+    void theTrendLengthIsOneFigureInTheTableAndInTheText() {
+        // the planted hot note of findsAPlantedHotNote: the text names its trend length, which
+        // must be the very figure the table and the CSV show (DiagnosedNote.trendLength), rounded once
+        // a second case where the length that would put the note's percent on the trend is not the
+        // trend of lengths: the hot note also has a thicker wire, weaker on the steep table
+        Scale s = DiagnosisScales.plain(k -> 38 + 8 * (k - 40) / 48.0, k -> k == 70 ? 1.12 : 1.0, 0.9e-3);
+        Scale thick = s.withNote(s.note(70).orElseThrow().withWire(CoreWire.ofDiameter(0.98e-3)));
+        for (boolean steep : new boolean[] {false, true}) {
+            DiagnosisReport r = steep ? diagnose(thick, new KeyRange(60, 80), DiagnosisScales.settings(
+                    DiagnosisScales.STEEP)) : diagnose(s, new KeyRange(60, 80), FLAT);
+            DiagnosedNote hot = r.standingOut().get(0);
+            assertEquals(70, hot.key());
+            if (steep) {
+                assertFalse(FindingWriter.mm(hot.trendLength()).equals(FindingWriter.mm(
+                        hot.lengthForTrend().getAsDouble())), "the two lengths differ here");
+            }
+            String trendMm = FindingWriter.mm(hot.trendLength());
+            assertEquals(NumberText.fixed(hot.trendLength() * 1e3, 1), trendMm);
+            String text = String.join("\n", r.finding().explanation());
+            java.util.regex.Matcher m = java.util.regex.Pattern.compile("70 \\S+ ([0-9.]+) mm \\(now").matcher(text);
+            int seen = 0;
+            while (m.find()) {
+                assertEquals(trendMm, m.group(1), text);
+                seen++;
+            }
+            assertTrue(seen >= 1, text);
+            assertTrue(text.contains("where the trend gives " + trendMm + " mm"), text);
+        }
+    }
+
+    @Test
+    void aComparedTableIsReportedWhenNothingRunsHigh() {
+        Scale s = DiagnosisScales.plain(DiagnosisScales::smoothPct, k -> 1.0, 0.9e-3);
+        KeyRange range = new KeyRange(50, 88);
+        StrengthTable weaker = DiagnosisScales.FLAT_2000.scaled(0.85, "maker W");
+        StrengthTable stronger = DiagnosisScales.FLAT_2000.scaled(1.05, "maker S");
+        DiagnosisReport r = SectionDiagnosis.diagnose(DiagnosisRequest.of(s, range, FLAT, sizes(), metric())
+                .withCandidates(List.of(weaker, stronger)));
+        assertTrue(r.underCaution() && r.standingOut().isEmpty());
+        String text = String.join("\n", r.finding().explanation());
+        double now = maxPct(s, range, FLAT);
+        for (StrengthTable t : List.of(weaker, stronger)) {
+            double with = maxPct(s, range, DiagnosisScales.settings(t));
+            String expected = "With '" + t.name() + "' the highest note of the range would be at "
+                    + NumberText.fixed(with, 1) + " % of breaking strength (now " + NumberText.fixed(now, 1) + " %)";
+            assertTrue(text.contains(expected), text);
+        }
+        // 2000 MPa × 0.85: every percent divided by 0.85, so the highest rises from about 54 % to about 63 %,
+        // into the caution band, which the finding says
+        assertTrue(maxPct(s, range, DiagnosisScales.settings(weaker)) >= 60);
+        assertTrue(text.contains("'maker W' the highest note of the range would be at "
+                + NumberText.fixed(maxPct(s, range, DiagnosisScales.settings(weaker)), 1)
+                + " % of breaking strength (now " + NumberText.fixed(now, 1) + " %), in the caution band"), text);
     }
 
     @Test
