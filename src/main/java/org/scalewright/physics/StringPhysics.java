@@ -37,14 +37,18 @@ public final class StringPhysics {
     }
 
     /**
-     * Mass per length of a wound string: steel core plus close-wound round wrap wire(s), each
-     * turn's centre line π × the diameter it lies on:
-     * μ = ρ_s π d²/4 + ρ_w π² w1 (d + w1)/4 + ρ_w π² w2 (d + 2 w1 + w2)/4.
+     * Mass per length of a wound string: steel core plus close-wound round wrap wire(s). Each
+     * layer's wire centre line is a helix on the diameter D of that layer's turn centre line
+     * (D1 = d + w1, D2 = d + 2 w1 + w2) advancing one wire diameter w per turn, so one turn is
+     * √((π D)² + w²) long (geometry of a close-wound helix: the turn unrolls to a right triangle
+     * with legs π D and w) and carries the mass ρ_w π w²/4 per metre of wire:
+     * μ = ρ_s π d²/4 + ρ_w π² w1 D1 h1/4 + ρ_w π² w2 D2 h2/4, with the helical factor
+     * h = √(1 + (w/(π D))²) (DESIGN §3).
      *
      * @param core core diameter, m, &gt; 0
      * @param wrap the winding (null for plain wire)
      * @param m    material densities
-     * @return μ, kg/m
+     * @return μ of the wound part, kg/m
      */
     public static double massPerLength(double core, Wrap wrap, Materials m) {
         double mu = plainMassPerLength(core, m.steelDensity());
@@ -52,12 +56,39 @@ public final class StringPhysics {
             double rhoW = m.densityOf(wrap.metal());
             double w1 = wrap.inner();
             double w2 = wrap.outer();
-            mu += rhoW * PI * PI * w1 * (core + w1) / 4.0;
+            mu += wrapLayerMassPerLength(core, w1, rhoW);
             if (w2 > 0) {
-                mu += rhoW * PI * PI * w2 * (core + 2 * w1 + w2) / 4.0;
+                mu += wrapLayerMassPerLength(core + 2 * w1, w2, rhoW);
             }
         }
         return mu;
+    }
+
+    /**
+     * Mass per string length of one close-wound layer of round wire {@code w} laid over the
+     * diameter {@code under}: ρ_w π² w D h/4 with D = under + w and h = {@link #helicalFactor}.
+     *
+     * @param under diameter the layer lies on (the core, or core + 2 × inner wrap), m, &gt; 0
+     * @param w     wrap wire diameter, m, &ge; 0
+     * @param rhoW  density of the wrap wire, kg/m³, &gt; 0
+     * @return the layer's mass per length, kg/m (0 for w = 0)
+     */
+    public static double wrapLayerMassPerLength(double under, double w, double rhoW) {
+        double centre = under + w;
+        return rhoW * PI * PI * w * centre * helicalFactor(w, centre) / 4.0;
+    }
+
+    /**
+     * The helical factor of a close-wound layer: the length of one turn, √((π D)² + w²), over
+     * the length π D of a turn without pitch (geometry of a close-wound helix).
+     *
+     * @param w      wrap wire diameter = the helix's advance per turn, m, &ge; 0
+     * @param centre diameter D of the turn's centre line, m, &gt; 0
+     * @return h = √(1 + (w/(π D))²), &ge; 1 (about 1.0005–1.01 for piano wraps)
+     */
+    public static double helicalFactor(double w, double centre) {
+        double x = w / (PI * centre);
+        return Math.sqrt(1.0 + x * x);
     }
 
     /**
