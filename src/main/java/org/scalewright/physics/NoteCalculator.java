@@ -58,7 +58,7 @@ public final class NoteCalculator {
         Materials m = settings.materials();
         double d = note.wire().diameter();
         double length = note.speakingLength();
-        double mu = StringPhysics.massPerLength(d, note.wrap(), m);
+        double mu = massForFundamental(note, m);
         double k = StringPhysics.stiffness(d, length, m.youngsModulus());
         double t = StringPhysics.tension(length, mu, frequency, k);
         double sigma = StringPhysics.stress(t, d);
@@ -74,5 +74,29 @@ public final class NoteCalculator {
         return new NoteResult(note.key(), KeyNames.name(note.key()), note.section(), frequency, note.strings(),
                 note.isWound(), d, mu, k, t, note.strings() * t, sigma, sigmaB, pct, b, headroom, fb, z, dl,
                 band, flags);
+    }
+
+    /**
+     * The mass per length that tunes the note's fundamental: the wound (or plain) string's μ,
+     * or, where the note's wound length is shorter than its speaking length, the effective μ
+     * with bare core at the ends ({@link StringPhysics#effectiveMassPerLength}). With only the
+     * wound length given, the bare core is split equally between the two ends, (L − wound)/2
+     * each (DESIGN §3). A wound length equal to or longer than the speaking length leaves no
+     * bare core inside it.
+     *
+     * @param note the note
+     * @param m    material densities
+     * @return μ for the fundamental, kg/m
+     */
+    public static double massForFundamental(Note note, Materials m) {
+        double d = note.wire().diameter();
+        double mu = StringPhysics.massPerLength(d, note.wrap(), m);
+        double length = note.speakingLength();
+        if (!note.isWound() || note.woundLength().isEmpty() || note.woundLength().getAsDouble() >= length) {
+            return mu;
+        }
+        double bare = (length - note.woundLength().getAsDouble()) / 2.0;
+        return StringPhysics.effectiveMassPerLength(mu, StringPhysics.plainMassPerLength(d, m.steelDensity()),
+                length, bare, bare);
     }
 }

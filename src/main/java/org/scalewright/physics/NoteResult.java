@@ -12,7 +12,8 @@ import java.util.List;
  * @param strings           strings per note
  * @param wound             true for a wound string
  * @param coreDiameter      plain wire or core diameter, m
- * @param massPerLength     μ, kg/m
+ * @param massPerLength     μ for the fundamental, kg/m: a wound string's effective μ where bare
+ *                          core lies inside the speaking length (DESIGN §3), else its μ
  * @param stiffness         K, N
  * @param tension           tension per string, N
  * @param noteTension       strings × tension, N

@@ -1,5 +1,6 @@
 package org.scalewright.physics;
 
+import java.util.Locale;
 import org.scalewright.model.Checks;
 import org.scalewright.model.Materials;
 import org.scalewright.model.Wrap;
@@ -37,14 +38,18 @@ public final class StringPhysics {
     }
 
     /**
-     * Mass per length of a wound string: steel core plus close-wound round wrap wire(s), each
-     * turn's centre line π × the diameter it lies on:
-     * μ = ρ_s π d²/4 + ρ_w π² w1 (d + w1)/4 + ρ_w π² w2 (d + 2 w1 + w2)/4.
+     * Mass per length of a wound string: steel core plus close-wound round wrap wire(s). Each
+     * layer's wire centre line is a helix on the diameter D of that layer's turn centre line
+     * (D1 = d + w1, D2 = d + 2 w1 + w2) advancing one wire diameter w per turn, so one turn is
+     * √((π D)² + w²) long (geometry of a close-wound helix: the turn unrolls to a right triangle
+     * with legs π D and w) and carries the mass ρ_w π w²/4 per metre of wire:
+     * μ = ρ_s π d²/4 + ρ_w π² w1 D1 h1/4 + ρ_w π² w2 D2 h2/4, with the helical factor
+     * h = √(1 + (w/(π D))²) (DESIGN §3).
      *
      * @param core core diameter, m, &gt; 0
      * @param wrap the winding (null for plain wire)
      * @param m    material densities
-     * @return μ, kg/m
+     * @return μ of the wound part, kg/m
      */
     public static double massPerLength(double core, Wrap wrap, Materials m) {
         double mu = plainMassPerLength(core, m.steelDensity());
@@ -52,12 +57,82 @@ public final class StringPhysics {
             double rhoW = m.densityOf(wrap.metal());
             double w1 = wrap.inner();
             double w2 = wrap.outer();
-            mu += rhoW * PI * PI * w1 * (core + w1) / 4.0;
+            mu += wrapLayerMassPerLength(core, w1, rhoW);
             if (w2 > 0) {
-                mu += rhoW * PI * PI * w2 * (core + 2 * w1 + w2) / 4.0;
+                mu += wrapLayerMassPerLength(core + 2 * w1, w2, rhoW);
             }
         }
         return mu;
+    }
+
+    /**
+     * Mass per string length of one close-wound layer of round wire {@code w} laid over the
+     * diameter {@code under}: ρ_w π² w D h/4 with D = under + w and h = {@link #helicalFactor}.
+     *
+     * @param under diameter the layer lies on (the core, or core + 2 × inner wrap), m, &gt; 0
+     * @param w     wrap wire diameter, m, &ge; 0
+     * @param rhoW  density of the wrap wire, kg/m³, &gt; 0
+     * @return the layer's mass per length, kg/m (0 for w = 0)
+     */
+    public static double wrapLayerMassPerLength(double under, double w, double rhoW) {
+        double centre = under + w;
+        return rhoW * PI * PI * w * centre * helicalFactor(w, centre) / 4.0;
+    }
+
+    /**
+     * The helical factor of a close-wound layer: the length of one turn, √((π D)² + w²), over
+     * the length π D of a turn without pitch (geometry of a close-wound helix).
+     *
+     * @param w      wrap wire diameter = the helix's advance per turn, m, &ge; 0
+     * @param centre diameter D of the turn's centre line, m, &gt; 0
+     * @return h = √(1 + (w/(π D))²), &ge; 1 (about 1.0005–1.01 for piano wraps)
+     */
+    public static double helicalFactor(double w, double centre) {
+        double x = w / (PI * centre);
+        return Math.sqrt(1.0 + x * x);
+    }
+
+    /**
+     * Effective mass per length of a wound string whose speaking length has bare core at its
+     * ends, for the fundamental: Rayleigh's principle with the fundamental's mode shape
+     * sin(πx/L) (hinged ends) weighs the mass by sin², μ_eff = (2/L) ∫₀ᴸ μ(x) sin²(πx/L) dx,
+     * which for bare lengths a (front) and b (back) inside the speaking length is
+     * μ_eff = μ_w − (μ_w − μ_core) · (2/L) · Σ_{x∈{a,b}} [x/2 − L/(4π) · sin(2πx/L)]
+     * (DESIGN §3). Bare core near an end, where the string hardly moves, counts little: 40 mm
+     * at each end of a 1.4 m string removes about 0.03 % of the wrap's share, a quarter of
+     * the length at each end about 18 %.
+     *
+     * <p>First order in the mass change: the finite-difference eigen-solution of the
+     * non-uniform string ({@code BareEndsEigenTest}) shows how close it is.
+     *
+     * @param muWound   mass per length of the wound part, kg/m, &gt; 0
+     * @param muCore    mass per length of the bare core, kg/m, &gt; 0
+     * @param length    speaking length L, m, &gt; 0
+     * @param bareFront bare core inside the speaking length at the front end, m, &ge; 0
+     * @param bareBack  bare core inside the speaking length at the back end, m, &ge; 0;
+     *                  bareFront + bareBack &le; L
+     * @return μ_eff, kg/m, between μ_core and μ_w (μ_w when both bare lengths are 0)
+     * @throws IllegalArgumentException naming the parameter and its value when one is out of range
+     */
+    public static double effectiveMassPerLength(double muWound, double muCore, double length,
+                                                double bareFront, double bareBack) {
+        Checks.positive("wound mass per length", muWound, "g/m", 1e3);
+        Checks.positive("core mass per length", muCore, "g/m", 1e3);
+        Checks.positive("speaking length", length, "mm", 1e3);
+        Checks.nonNegative("bare core at the front", bareFront, "mm", 1e3);
+        Checks.nonNegative("bare core at the back", bareBack, "mm", 1e3);
+        if (bareFront + bareBack > length) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "bare core at the front and back together must be <= the speaking length %s mm, was %s mm",
+                    Checks.format(length * 1e3), Checks.format((bareFront + bareBack) * 1e3)));
+        }
+        double weight = (2.0 / length) * (sinSquaredIntegral(bareFront, length) + sinSquaredIntegral(bareBack, length));
+        return muWound - (muWound - muCore) * weight;
+    }
+
+    /** @return ∫₀ˣ sin²(π s/L) ds = x/2 − L/(4π) sin(2πx/L), m */
+    private static double sinSquaredIntegral(double x, double length) {
+        return x / 2.0 - length / (4.0 * PI) * Math.sin(2.0 * PI * x / length);
     }
 
     /**

@@ -49,8 +49,11 @@ class ScaleAnalyzerTest {
         double mu = 7850 * PI * d * d / 4;
         if (w != null) {
             double rho = w.metal() == WrapMetal.COPPER ? 8960 : w.metal() == WrapMetal.IRON ? 7870 : 7850;
-            mu += rho * PI * PI * w.inner() * (d + w.inner()) / 4;
-            mu += rho * PI * PI * w.outer() * (d + 2 * w.inner() + w.outer()) / 4;
+            // each layer's turn is √((π D)² + w²) long, D its centre line's diameter (helix geometry)
+            double d1 = d + w.inner();
+            double d2 = d + 2 * w.inner() + w.outer();
+            mu += rho * PI * w.inner() * Math.hypot(PI * d1, w.inner()) / 4;
+            mu += rho * PI * w.outer() * Math.hypot(PI * d2, w.outer()) / 4;
         }
         return mu;
     }

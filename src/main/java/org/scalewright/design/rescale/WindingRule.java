@@ -12,6 +12,8 @@ import java.util.Locale;
  *   <li>{@link Kind#FIXED_INNER}: the inner wrap is fixed at {@code value} metres and the outer
  *       one carries the rest of the mass: w2² + (d + 2 w1) w2 = 4 (μ − μ_core − μ_inner)/(ρ_w π²).</li>
  * </ul>
+ * These quadratics leave out the helical factor of DESIGN §3; their roots are the upper bound
+ * from which {@link WrapSolver} solves the mass equation with it.
  *
  * @param kind  the rule
  * @param value the outer/inner ratio (OUTER_RATIO, &gt; 0), the inner wrap diameter in m

@@ -3,6 +3,9 @@ package org.scalewright.design.rescale;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.DoubleUnaryOperator;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.scalewright.model.Checks;
 import org.scalewright.model.Materials;
 import org.scalewright.model.Wrap;
@@ -14,8 +17,11 @@ import org.scalewright.physics.StringPhysics;
  *
  * <p>From the stiff-string tension T = 4 L² μ f² − K (DESIGN §3) the mass per length a target
  * tension needs is μ = (T + K)/(4 L² f²), K = π³ E d⁴/(64 L²) of the core. The wrap carries
- * μ − ρ_s π d²/4, and DESIGN §3's wrap mass ρ_w π² w1 (d + w1)/4 + ρ_w π² w2 (d + 2 w1 + w2)/4
- * gives w1 (and w2) as the positive root of a quadratic, see {@link WindingRule}.
+ * μ − ρ_s π d²/4. Without the helical factor, DESIGN §3's wrap mass
+ * ρ_w π² w1 (d + w1)/4 + ρ_w π² w2 (d + 2 w1 + w2)/4 would give w1 (and w2) as the positive root
+ * of a quadratic, see {@link WindingRule}. The helical factor h &ge; 1 makes the real wrap a
+ * little thinner than that root, so the root bounds the wrap from above and the wrap is solved
+ * within [0, root] by Brent's method (Commons Math) on {@link StringPhysics#massPerLength}.
  */
 public final class WrapSolver {
     private WrapSolver() {
@@ -49,17 +55,24 @@ public final class WrapSolver {
     public static Optional<Wrap> exact(double core, double mu, WindingRule rule, WrapMetal metal, Materials m) {
         Checks.positive("core diameter", core, "mm", 1e3);
         double rhoW = m.densityOf(metal);
-        double wrapMass = mu - StringPhysics.plainMassPerLength(core, m.steelDensity());
+        double coreMass = StringPhysics.plainMassPerLength(core, m.steelDensity());
+        double wrapMass = mu - coreMass;
         if (!(wrapMass > 0)) {
             return Optional.empty();
         }
         double c = 4.0 * wrapMass / (rhoW * Math.PI * Math.PI);
         return switch (rule.kind()) {
-            case SINGLE -> Optional.of(Wrap.single(positiveRoot(core, c), metal));
+            case SINGLE -> {
+                double w1 = solve(w -> coreMass + StringPhysics.wrapLayerMassPerLength(core, w, rhoW), mu,
+                        positiveRoot(core, c));
+                yield Optional.of(Wrap.single(w1, metal));
+            }
             case OUTER_RATIO -> {
+                double r = rule.value();
                 double u = positiveRoot(core, c);
-                double w1 = u / (1.0 + rule.value());
-                yield Optional.of(new Wrap(w1, rule.value() * w1, metal));
+                double w1 = solve(w -> coreMass + StringPhysics.wrapLayerMassPerLength(core, w, rhoW)
+                        + StringPhysics.wrapLayerMassPerLength(core + 2 * w, r * w, rhoW), mu, u / (1.0 + r));
+                yield Optional.of(new Wrap(w1, r * w1, metal));
             }
             case FIXED_INNER -> {
                 double w1 = rule.value();
@@ -75,12 +88,30 @@ public final class WrapSolver {
      */
     public static Optional<Double> outerFor(double core, double inner, double mu, WrapMetal metal, Materials m) {
         double rhoW = m.densityOf(metal);
-        double left = mu - StringPhysics.massPerLength(core, Wrap.single(inner, metal), m);
+        double coreAndInner = StringPhysics.massPerLength(core, Wrap.single(inner, metal), m);
+        double left = mu - coreAndInner;
         if (!(left > 0)) {
             return Optional.empty();
         }
         double c = 4.0 * left / (rhoW * Math.PI * Math.PI);
-        return Optional.of(positiveRoot(core + 2 * inner, c));
+        double upper = positiveRoot(core + 2 * inner, c);
+        return Optional.of(solve(w -> coreAndInner + StringPhysics.wrapLayerMassPerLength(core + 2 * inner, w, rhoW),
+                mu, upper));
+    }
+
+    /**
+     * @param massOf the string's mass per length as a function of one wrap diameter, increasing
+     * @param mu     the mass per length wanted, kg/m
+     * @param upper  a wrap diameter at or above the answer (the root without the helical factor), m
+     * @return the wrap diameter in [0, upper] at which {@code massOf} gives {@code mu}, m
+     */
+    private static double solve(DoubleUnaryOperator massOf, double mu, double upper) {
+        double hi = upper * (1 + 1e-9);
+        if (massOf.applyAsDouble(hi) <= mu) {
+            return upper; // within rounding, the pitch-free root is the answer
+        }
+        UnivariateFunction g = w -> massOf.applyAsDouble(w) - mu;
+        return new BrentSolver(1e-15, 1e-17).solve(200, g, 0, hi);
     }
 
     /** The positive root of x² + b x − c = 0 (b, c &gt; 0), in a form without cancellation. */
