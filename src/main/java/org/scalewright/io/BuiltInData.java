@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.scalewright.design.rescale.WrapWires;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Materials;
 import org.scalewright.model.UnitConversions;
@@ -27,6 +28,7 @@ public final class BuiltInData {
     private static volatile StrengthTable maximum;
     private static volatile WireSizeTable sizes;
     private static volatile List<Double> metric;
+    private static volatile WrapWires wraps;
 
     private BuiltInData() {
     }
@@ -81,6 +83,17 @@ public final class BuiltInData {
                     .map(r -> LengthUnit.MM.toMetres(Double.parseDouble(r.cells().get(0)))).sorted().toList();
         }
         return metric;
+    }
+
+    /**
+     * @return the wrap wire the wound-string designer plans with by default: copper and soft iron,
+     *         0.10-2.00 mm in 0.01 mm steps (source and reasons in wrap-wire.csv)
+     */
+    public static WrapWires wrapWire() {
+        if (wraps == null) {
+            wraps = WrapCatalogueReader.readResource(DIR + "wrap-wire.csv");
+        }
+        return wraps;
     }
 
     /** @return the safety cautions shown to the user (DESIGN §8), one paragraph each */

@@ -134,17 +134,17 @@ public final class WrapSolver {
     public static List<Wrap> roundedCandidates(Wrap exact, double core, double mu, WrapWires wires, Materials m) {
         List<Wrap> out = new ArrayList<>();
         if (!exact.isDouble()) {
-            for (double w : wires.around(exact.inner())) {
+            for (double w : wires.around(exact.inner(), exact.metal())) {
                 out.add(Wrap.single(w, exact.metal()));
             }
             return out;
         }
-        for (double w1 : wires.around(exact.inner())) {
+        for (double w1 : wires.around(exact.inner(), exact.metal())) {
             Optional<Double> w2 = outerFor(core, w1, mu, exact.metal(), m);
             if (w2.isEmpty()) {
                 continue;
             }
-            for (double v : wires.around(w2.get())) {
+            for (double v : wires.around(w2.get(), exact.metal())) {
                 out.add(new Wrap(w1, v, exact.metal()));
             }
         }

@@ -1,12 +1,19 @@
 package org.scalewright.design.rescale;
 
 import java.util.Arrays;
+import java.util.EnumMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.NumberText;
+import org.scalewright.model.WrapMetal;
 
-/** The wrap wire diameters available to the wound-string designer, thinnest first. Immutable. */
+/**
+ * The wrap wire diameters available to the wound-string designer, thinnest first: one list for
+ * every metal (a step or a list given), or one list per metal (a catalogue, see
+ * {@link #catalogue}). Immutable.
+ */
 public final class WrapWires {
     /** Default step of the available wrap wire: 0.05 mm (common practice, no source). */
     public static final double DEFAULT_STEP = 0.05e-3;
@@ -15,10 +22,70 @@ public final class WrapWires {
 
     private final double[] diameters;
     private final String description;
+    /** per metal, when the wire differs by metal; empty: {@link #diameters} for every metal */
+    private final Map<WrapMetal, double[]> byMetal;
 
     private WrapWires(double[] diameters, String description) {
+        this(diameters, description, Map.of());
+    }
+
+    private WrapWires(double[] diameters, String description, Map<WrapMetal, double[]> byMetal) {
         this.diameters = diameters;
         this.description = description;
+        this.byMetal = byMetal;
+    }
+
+    /**
+     * @param wires the diameters offered per metal, m, each &gt; 0; at least one metal with at least one wire
+     * @param name  what the catalogue is, in words (its first header line)
+     * @return a catalogue: wrap wire by metal
+     */
+    public static WrapWires catalogue(Map<WrapMetal, List<Double>> wires, String name) {
+        Map<WrapMetal, double[]> m = new EnumMap<>(WrapMetal.class);
+        for (Map.Entry<WrapMetal, List<Double>> e : wires.entrySet()) {
+            if (!e.getValue().isEmpty()) {
+                m.put(e.getKey(), of(e.getValue()).diameters);
+            }
+        }
+        if (m.isEmpty()) {
+            throw new InvalidInput("the wrap wire catalogue lists no wire");
+        }
+        double[] all = m.values().stream().flatMapToDouble(Arrays::stream).sorted().distinct().toArray();
+        return new WrapWires(all, name, Map.copyOf(m));
+    }
+
+    /** @return true when wrap wire of that metal is offered */
+    public boolean offers(WrapMetal metal) {
+        return byMetal.isEmpty() || byMetal.containsKey(metal);
+    }
+
+    /** @return the wire of that metal, m, thinnest first (empty when none is offered) */
+    private double[] of(WrapMetal metal) {
+        if (byMetal.isEmpty()) {
+            return diameters;
+        }
+        return byMetal.getOrDefault(metal, new double[0]);
+    }
+
+    /** @return the thinnest wire of that metal, m (NaN when none is offered) */
+    public double thinnest(WrapMetal metal) {
+        double[] d = of(metal);
+        return d.length == 0 ? Double.NaN : d[0];
+    }
+
+    /** @return the thickest wire of that metal, m (NaN when none is offered) */
+    public double thickest(WrapMetal metal) {
+        double[] d = of(metal);
+        return d.length == 0 ? Double.NaN : d[d.length - 1];
+    }
+
+    /**
+     * @return the listed wires of that metal nearest below and above {@code w}, as {@link #around(double)}
+     *         (none when the metal is not offered)
+     */
+    public double[] around(double w, WrapMetal metal) {
+        double[] d = of(metal);
+        return d.length == 0 ? new double[0] : around(d, w);
     }
 
     /**
@@ -69,6 +136,10 @@ public final class WrapWires {
      *         outside the list), thinnest first
      */
     public double[] around(double w) {
+        return around(diameters, w);
+    }
+
+    private static double[] around(double[] diameters, double w) {
         int pos = Arrays.binarySearch(diameters, w);
         if (pos >= 0) {
             return new double[] {diameters[pos]};
