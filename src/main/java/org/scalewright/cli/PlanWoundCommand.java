@@ -13,7 +13,11 @@ import org.scalewright.design.rescale.WireLists;
 import org.scalewright.design.rescale.WoundPlanOptions;
 import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.design.rescale.WrapWires;
+import org.scalewright.io.BadInputException;
+import org.scalewright.io.BuiltInData;
+import org.scalewright.io.WrapCatalogueReader;
 import org.scalewright.model.WireNotation;
+import org.scalewright.model.WireSize;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import picocli.CommandLine.ArgGroup;
@@ -22,9 +26,12 @@ import picocli.CommandLine.Option;
 
 /** {@code plan-wound}: design the wound strings of a range of keys to a target tension. */
 @Command(name = "plan-wound", mixinStandardHelpOptions = true,
-        description = "Design the wound strings of a range: with each core (kept, or chosen from --cores), the "
-                    + "wrap diameter(s) the target tension needs (closed form, stiffness included), rounded to "
-                    + "the wrap wire available; double-wound where a single wrap would pass --double-above. "
+        description = "Design the wound strings of a range: core and wrap chosen together (cores from the present "
+                    + "ones and the music-wire sizes between them, or --cores), the wrap diameter(s) the target "
+                    + "tension needs (stiffness included), rounded to the wrap wire available (a built-in catalogue "
+                    + "in 0.01 mm steps, --wrap-catalogue, --wraps or --wrap-step); double-wound where a single "
+                    + "wrap would pass --double-above. Never rougher than the present strings: where a designed "
+                    + "string would leave the keys rougher, the present one is kept. "
                     + "--join-break makes the strings either side of the bass/tenor break continuous in tension "
                     + "and as smooth in B as the cores allow. Plain keys in the range are skipped. Prints the "
                     + "changes and writes the new sheet.")
@@ -37,8 +44,14 @@ public final class PlanWoundCommand extends PlanCommand {
     /** Either a step or a list of wrap wire. */
     static final class WrapChoice {
         @Option(names = "--wrap-step", paramLabel = "MM",
-                description = "wrap wire available in steps of MM (default: 0.05)")
+                description = "wrap wire available in steps of MM (default: the built-in catalogue, copper and "
+                        + "iron 0.10-2.00 mm in 0.01 mm steps)")
         Double step;
+
+        @Option(names = "--wrap-catalogue", paramLabel = "FILE.csv",
+                description = "wrap wire available, from a catalogue: columns metal (copper, iron, steel) and "
+                        + "diameter_mm or diameter_in, its source in the comment lines")
+        java.nio.file.Path catalogue;
 
         @Option(names = "--wraps", paramLabel = "LIST",
                 description = "wrap wire available, diameters in mm, e.g. 0.2,0.25,0.3")
@@ -58,9 +71,11 @@ public final class PlanWoundCommand extends PlanCommand {
                     + "present double wrap keeps its own ratio; default: ${DEFAULT-VALUE})")
     double doubleRatio;
 
-    @Option(names = "--cores", paramLabel = "keep|LIST", defaultValue = "keep",
-            description = "keep the present cores, or choose each from this list of diameters in mm (never growing "
-                    + "toward the treble, B kept smooth), e.g. 1.0,1.05,1.1 (default: ${DEFAULT-VALUE})")
+    @Option(names = "--cores", paramLabel = "present|keep|LIST", defaultValue = "present",
+            description = "choose each core with its wrap from the present cores of the range and the music-wire "
+                    + "sizes between them (present), keep every present core (keep), or choose from this list of "
+                    + "diameters in mm, e.g. 1.0,1.05,1.1; chosen cores never grow toward the treble and keep B "
+                    + "smooth (default: ${DEFAULT-VALUE})")
     String cores;
 
     @Option(names = "--join-break", paramLabel = "N", defaultValue = "0",
@@ -71,6 +86,7 @@ public final class PlanWoundCommand extends PlanCommand {
 
     private WrapWires wraps;
     private List<Double> coreList;
+    private boolean presentCores;
 
     public PlanWoundCommand() {
         super(true, "wound strings", "plain wire is planned with plan-plain", "wound-string design");
@@ -86,21 +102,34 @@ public final class PlanWoundCommand extends PlanCommand {
         if (wrapChoice != null && wrapChoice.list != null) {
             wraps = OptionChecks.named("--wraps", () -> WrapWires.of(WireLists.diameters(WireLists.WRAPS,
                     wrapChoice.list)));
+        } else if (wrapChoice != null && wrapChoice.step != null) {
+            wraps = OptionChecks.named("--wrap-step", () -> WrapWires.steps(wrapChoice.step * 1e-3));
+        } else if (wrapChoice != null && wrapChoice.catalogue != null) {
+            try {
+                wraps = WrapCatalogueReader.read(wrapChoice.catalogue);
+            } catch (BadInputException e) {
+                throw new UserError("--wrap-catalogue: " + e.getMessage());
+            }
         } else {
-            double step = wrapChoice == null || wrapChoice.step == null ? 0.05 : wrapChoice.step;
-            wraps = OptionChecks.named("--wrap-step", () -> WrapWires.steps(step * 1e-3));
+            wraps = BuiltInData.wrapWire();
         }
         if (doubleAbove != null) {
             OptionChecks.named("--double-above", () -> PlanChecks.doubleAbove(doubleAbove * 1e-3));
         }
         OptionChecks.named("--double-ratio", () -> PlanChecks.doubleRatio(doubleRatio));
         OptionChecks.named("--join-break", () -> PlanChecks.joinBreakKeys(joinBreak));
-        coreList = cores.trim().equalsIgnoreCase("keep") ? List.of()
+        String c = cores.trim().toLowerCase(Locale.ROOT);
+        presentCores = c.equals("present");
+        coreList = c.equals("keep") || presentCores ? List.of()
                 : OptionChecks.named("--cores", () -> WireLists.diameters(WireLists.CORES, cores));
     }
 
     @Override
     Proposal plan(ScaleAnalysis present, TargetCurve target, double maxBreakPct) {
+        if (presentCores) {
+            coreList = WoundPlanner.presentCores(present, keys(), BuiltInData.musicWireSizes().sizes().stream()
+                    .map(WireSize::diameter).toList());
+        }
         return WoundPlanner.plan(present, keys(), target, options(maxBreakPct));
     }
 
@@ -115,7 +144,8 @@ public final class PlanWoundCommand extends PlanCommand {
         WoundPlanOptions o = options(p.maxBreakPct());
         w.println("wrap: " + o.wraps().description() + "; winding: " + (o.doubleAbove().isPresent()
                 ? "double where a single wrap would pass " + Formats.f(o.doubleAbove().getAsDouble() * 1e3, 2) + " mm"
-                : "as now") + "; cores: " + (o.cores().isEmpty() ? "kept" : "chosen from the list")
+                : "as now") + "; cores: " + (o.cores().isEmpty() ? "kept" : presentCores ? "chosen with the wraps from the present "
+                + "cores and the music-wire sizes between them" : "chosen from the list")
                 + (o.joinBreakKeys() > 0 ? ", re-chosen for " + o.joinBreakKeys() + " keys either side of a break" : "")
                 + "; maximum " + Formats.trim(p.maxBreakPct()) + " % of breaking strength");
         w.println(WireNotation.LEGEND);

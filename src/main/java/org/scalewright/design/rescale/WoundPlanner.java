@@ -48,8 +48,45 @@ public final class WoundPlanner {
      * B as smooth as the cores then allow.
      */
     static final double B_WEIGHT = 0.25;
+    /**
+     * Weight of the squared difference between neighbours' fractions of their targets: a plan whose
+     * strings lie off the target lies off it alike from key to key, so the tension curve keeps the
+     * target's shape (a plain choice, no source).
+     */
+    static final double SMOOTH_WEIGHT = 1.0;
 
     private WoundPlanner() {
+    }
+
+    /**
+     * The cores the designer chooses from by default: every present core of the wound keys in the range
+     * and every music-wire size between the thinnest and the thickest of them.
+     *
+     * @param musicWire music-wire diameters, m
+     * @return core diameters, m, thickest first, each once
+     */
+    public static List<Double> presentCores(ScaleAnalysis present, KeyRange range, List<Double> musicWire) {
+        TreeSet<Double> set = new TreeSet<>();
+        for (NoteResult r : plannedKeys(present, range)) {
+            set.add(present.scale().notes().get(present.notes().indexOf(r)).wire().diameter());
+        }
+        if (set.isEmpty()) {
+            return List.of();
+        }
+        double lo = set.first();
+        double hi = set.last();
+        for (double d : musicWire) {
+            if (d >= lo - 1e-9 && d <= hi + 1e-9) {
+                set.add(d);
+            }
+        }
+        List<Double> out = new ArrayList<>();
+        for (double d : set.descendingSet()) {
+            if (out.isEmpty() || out.get(out.size() - 1) - d > 1e-9) {
+                out.add(d);
+            }
+        }
+        return out;
     }
 
     /** @return the present results of the wound keys in the range, bass to treble */
@@ -93,6 +130,7 @@ public final class WoundPlanner {
         job.settleCores(breaks);
         job.buildOptions();
         Note[] chosen = job.solve();
+        double[] input = job.roughness(null);
 
         List<Note> newNotes = new ArrayList<>(notes);
         for (int k = 0; k < idx.size(); k++) {
@@ -120,6 +158,22 @@ public final class WoundPlanner {
         if (!skipped.isEmpty()) {
             remarks.add(Words.keys(skipped) + ": plain wire, skipped (the wound-string designer plans wound strings only)");
         }
+        List<Integer> kept = new ArrayList<>();
+        for (int k = 0; k < idx.size(); k++) {
+            if (job.forced[k]) {
+                kept.add(notes.get(idx.get(k)).key());
+            }
+        }
+        if (!kept.isEmpty()) {
+            remarks.add(Words.keys(kept) + ": present strings kept: the designed ones would have left the planned keys "
+                    + "rougher than they are (a larger neighbour step or a larger deviation from the target)");
+        }
+        remarks.add(roughnessNote(input, changes, idx, options));
+        if (job.rougherThanInput) {
+            limits.add("the planned keys are rougher than the present strings, and the present strings that would "
+                    + "help cannot be kept: their cores are not in the core list given (" + mmList(options.cores())
+                    + "); add them to the list, or plan with the present cores");
+        }
         for (int p : breaks) {
             remarks.add(breakNote(present, after, notes.get(idx.get(p - 1)).key(), notes.get(idx.get(p)).key(),
                     options.joinBreakKeys()));
@@ -129,6 +183,23 @@ public final class WoundPlanner {
         }
         return new Proposal("wound strings", range, present, after, options.quantity(), aim, changes, steps,
                 options.maxBreakPct(), remarks, limits);
+    }
+
+    /** @return the largest neighbour step and deviation inside the planned keys, before → after */
+    private static String roughnessNote(double[] input, List<KeyChange> changes, List<Integer> idx,
+                                        WoundPlanOptions o) {
+        double step = 0;
+        double dev = 0;
+        for (int k = 0; k < changes.size(); k++) {
+            dev = Math.max(dev, Math.abs(changes.get(k).deviationPct()));
+            if (k > 0 && idx.get(k) == idx.get(k - 1) + 1) {
+                step = Math.max(step, Math.abs(StepSurvey.stepPct(changes.get(k - 1).afterResult(),
+                        changes.get(k).afterResult())));
+            }
+        }
+        return String.format(Locale.ROOT, "inside the planned keys: largest neighbour step in per-string tension "
+                + "%.1f %% → %.1f %%, largest deviation from the target %.1f %% → %.1f %% (a plan is never rougher "
+                + "than the strings it starts from)", 100 * input[0], step, 100 * input[1], dev);
     }
 
     /** @return positions p in the planned list where planned p − 1 and p are scale neighbours of different sections */
@@ -161,8 +232,18 @@ public final class WoundPlanner {
         final double limit;
         boolean[] free;
         double[] aimB;
-        /** core diameters tried, thickest first */
+        /** core diameters with a wire index: those offered and every present core, thickest first */
         List<Double> cores;
+        /** core diameters a key whose core is chosen may take, thickest first */
+        List<Double> offered;
+        /** per key: the option that keeps the present string */
+        int[] keep;
+        /** per key: the plan keeps the present string (it was better there) */
+        boolean[] forced;
+        /** per key: the present string may be kept (its core is among those the key may take) */
+        boolean[] keepable;
+        /** the plan stays rougher than its input where only present strings outside the core list would help */
+        boolean rougherThanInput;
         boolean monotone;
         /** per key: the candidate notes, their results, costs and core indices */
         List<List<Note>> optNotes;
@@ -240,12 +321,21 @@ public final class WoundPlanner {
                     }
                 }
             }
-            cores = new ArrayList<>();
-            for (double d : tried.descendingSet()) {
-                if (cores.isEmpty() || cores.get(cores.size() - 1) - d > 1e-9) {
-                    cores.add(d);
+            offered = distinctDescending(tried);
+            for (int k = 0; k < n; k++) {
+                tried.add(note(k).wire().diameter());
+            }
+            cores = distinctDescending(tried);
+        }
+
+        private static List<Double> distinctDescending(TreeSet<Double> set) {
+            List<Double> out = new ArrayList<>();
+            for (double d : set.descendingSet()) {
+                if (out.isEmpty() || out.get(out.size() - 1) - d > 1e-9) {
+                    out.add(d);
                 }
             }
+            return out;
         }
 
         int coreIndex(double d) {
@@ -264,13 +354,18 @@ public final class WoundPlanner {
             cost = new double[n][];
             wire = new int[n][];
             problem = new String[n];
+            keep = new int[n];
+            forced = new boolean[n];
+            keepable = new boolean[n];
             for (int k = 0; k < n; k++) {
                 List<Note> ns = new ArrayList<>();
                 List<NoteResult> rs = new ArrayList<>();
                 List<Double> cs = new ArrayList<>();
                 List<Integer> ws = new ArrayList<>();
                 Note present = note(k);
-                List<Double> mine = free[k] ? cores : List.of(present.wire().diameter());
+                List<Double> mine = free[k] ? offered : List.of(present.wire().diameter());
+                String nearestWhy = null;
+                double nearestGap = Double.POSITIVE_INFINITY;
                 int overMax = 0;
                 NoteResult leastStressed = null;
                 double leastStressedTarget = 0;
@@ -279,8 +374,10 @@ public final class WoundPlanner {
                             : CoreWire.ofDiameter(d);
                     double t = targetTension(k, d);
                     String why = wraps(k, core, t, ns, rs);
-                    if (why != null && !free[k]) {
-                        problem[k] = why;
+                    double gap = Math.abs(d - present.wire().diameter());
+                    if (why != null && gap < nearestGap) {
+                        nearestWhy = why;
+                        nearestGap = gap;
                     }
                     while (cs.size() < ns.size()) {
                         NoteResult r = rs.get(cs.size());
@@ -303,8 +400,8 @@ public final class WoundPlanner {
                         cs.add(c);
                     }
                 }
-                if (problem[k] == null && cs.stream().allMatch(c -> c == Double.POSITIVE_INFINITY)) {
-                    problem[k] = overMax > 0
+                if (cs.stream().allMatch(c -> c == Double.POSITIVE_INFINITY)) {
+                    problem[k] = overMax == 0 && nearestWhy != null ? nearestWhy : overMax > 0
                             ? String.format(Locale.ROOT, "%s: %s %.3f mm would be at %s of breaking strength "
                                     + "even with the lightest listed wrap near its target (%.0f N), over the maximum "
                                     + "%s; a thicker core or a lower target is needed", Words.key(present.key()),
@@ -315,6 +412,22 @@ public final class WoundPlanner {
                                     + "target; each alone is already at or above it", Words.key(present.key()),
                                     mmList(mine));
                 }
+                // the present string, kept as it is: the plan may keep it where it is better
+                NoteResult now = this.present.notes().get(idx.get(k));
+                keep[k] = ns.size();
+                ns.add(present);
+                rs.add(now);
+                ws.add(coreIndex(present.wire().diameter()));
+                double t0 = targetTension(k, present.wire().diameter());
+                double dev0 = now.tension() / t0 - 1.0;
+                keepable[k] = mine.stream().anyMatch(x -> Math.abs(x - present.wire().diameter()) < 1e-9);
+                double c0 = now.breakPct() > options.maxBreakPct() || !keepable[k] ? Double.POSITIVE_INFINITY
+                        : dev0 * dev0;
+                if (free[k] && c0 < Double.POSITIVE_INFINITY) {
+                    double lb = Math.log(now.inharmonicity() / aimB[k]);
+                    c0 += B_WEIGHT * lb * lb;
+                }
+                cs.add(c0);
                 optNotes.add(ns);
                 optResults.add(rs);
                 cost[k] = cs.stream().mapToDouble(Double::doubleValue).toArray();
@@ -343,17 +456,54 @@ public final class WoundPlanner {
                         d * 1e3, rule.kind() == WindingRule.Kind.FIXED_INNER ? " with the fixed inner wrap" : "",
                         coreOnly, t);
             }
+            Wrap w0 = exact.get();
+            WrapWires list = options.wraps();
+            if (!list.offers(w0.metal())) {
+                return String.format(Locale.ROOT, "%s: the wrap wire (%s) holds no %s wire", Words.key(n0.key()),
+                        list.description(), w0.metal().sheetName());
+            }
+            double thickest = list.thickest(w0.metal());
+            double thinnest = list.thinnest(w0.metal());
+            double widest = Math.max(w0.inner(), w0.outer());
+            double narrowest = w0.isDouble() ? Math.min(w0.inner(), w0.outer()) : w0.inner();
+            boolean beyond = widest > thickest * (1 + 1e-9) || narrowest < thinnest * (1 - 1e-9);
             int before = ns.size();
-            for (Wrap w : WrapSolver.roundedCandidates(exact.get(), d, mu, options.wraps(), materials)) {
+            NoteResult closest = null;
+            for (Wrap w : WrapSolver.roundedCandidates(w0, d, mu, list, materials)) {
                 Note candidate = keepLabels(n0, n0.withWire(core).withWrap(w));
                 NoteResult r = NoteCalculator.computeAt(candidate, f, settings);
-                if (r.tension() > 0) {
-                    ns.add(candidate);
-                    rs.add(r);
+                if (!(r.tension() > 0)) {
+                    continue;
                 }
+                if (closest == null || Math.abs(r.tension() / t - 1) < Math.abs(closest.tension() / t - 1)) {
+                    closest = r;
+                }
+                // a wire at the end of the list stands in for one beyond it only within the neighbour-step limit
+                if (beyond && Math.abs(r.tension() / t - 1.0) > limit) {
+                    continue;
+                }
+                ns.add(candidate);
+                rs.add(r);
             }
-            return ns.size() > before ? null : String.format(Locale.ROOT, "%s: no listed wrap wire (%s) makes up the "
-                    + "mass the target %.0f N needs", Words.key(n0.key()), options.wraps().description(), t);
+            if (ns.size() > before) {
+                return null;
+            }
+            String wrapWords = w0.isDouble() ? String.format(Locale.ROOT, "%.2f + %.2f mm", w0.inner() * 1e3,
+                    w0.outer() * 1e3) : String.format(Locale.ROOT, "%.2f mm", w0.inner() * 1e3);
+            String with = closest == null ? "" : String.format(Locale.ROOT, "; with the nearest listed wrap it would "
+                    + "be at %.0f N (%s)", closest.tension(), Words.signedPct(100 * (closest.tension() / t - 1)));
+            if (widest > thickest * (1 + 1e-9)) {
+                return String.format(Locale.ROOT, "%s: the wrap wire is too thin: the thickest listed wrap, %.2f mm, "
+                        + "cannot make up the mass the target %.0f N needs on the core %.2f mm (it needs a wrap of %s)%s",
+                        Words.key(n0.key()), thickest * 1e3, t, d * 1e3, wrapWords, with);
+            }
+            if (narrowest < thinnest * (1 - 1e-9)) {
+                return String.format(Locale.ROOT, "%s: the wrap wire is too thick: the thinnest listed wrap, %.2f mm, "
+                        + "puts more mass on the core %.2f mm than the target %.0f N allows (it needs a wrap of %s)%s",
+                        Words.key(n0.key()), thinnest * 1e3, d * 1e3, t, wrapWords, with);
+            }
+            return String.format(Locale.ROOT, "%s: no listed wrap wire (%s) makes up the mass the target %.0f N needs",
+                    Words.key(n0.key()), list.description(), t);
         }
 
         WindingRule rule(Wrap present, double d, double mu) {
@@ -397,22 +547,103 @@ public final class WoundPlanner {
                     }
                 }
             }
-            ChoiceChain.StepCost step = stepCost == 0 ? null : (k, i, j) -> idx.get(k) != idx.get(k - 1) + 1 ? 0
-                    : PlainPlanner.excessCost(optResults.get(k - 1).get(i).tension(), optResults.get(k).get(j).tension(),
-                    limit, stepCost);
+            ChoiceChain.StepCost step = (k, i, j) -> {
+                if (idx.get(k) != idx.get(k - 1) + 1) {
+                    return 0;
+                }
+                NoteResult lo = optResults.get(k - 1).get(i);
+                NoteResult hi = optResults.get(k).get(j);
+                // smoothness: neighbours the same fraction off their targets (the tension curve follows the target's shape)
+                double dLo = lo.tension() / targetTension(k - 1, lo.coreDiameter());
+                double dHi = hi.tension() / targetTension(k, hi.coreDiameter());
+                double smooth = SMOOTH_WEIGHT * (dHi - dLo) * (dHi - dLo);
+                return smooth + (stepCost == 0 ? 0 : PlainPlanner.excessCost(lo.tension(), hi.tension(), limit, stepCost));
+            };
             ChoiceChain.Allowed allowed = (k, i, j) -> !monotone || !free[k - 1] && !free[k]
-                    || wire[k - 1][i] <= wire[k][j];
-            ChoiceChain.Result r = ChoiceChain.solve(cost, wire, options.changeCost(), step, allowed);
-            if (r == null) {
-                throw new PlanNotPossible(List.of(String.format(Locale.ROOT, "no choice of cores (%s) keeps the cores "
-                        + "from growing toward the treble while every core stays at or under the maximum %s at its "
-                        + "target", mmList(cores), Words.pct(options.maxBreakPct()))));
+                    || i == keep[k - 1] || j == keep[k] || wire[k - 1][i] <= wire[k][j];
+            double[] input = roughness(null);
+            while (true) {
+                double[][] c = new double[n][];
+                for (int k = 0; k < n; k++) {
+                    c[k] = cost[k].clone();
+                    if (forced[k]) {
+                        Arrays.fill(c[k], Double.POSITIVE_INFINITY);
+                        c[k][keep[k]] = 0;
+                    }
+                }
+                ChoiceChain.Result r = ChoiceChain.solve(c, wire, options.changeCost(), step, allowed);
+                if (r == null) {
+                    throw new PlanNotPossible(List.of(String.format(Locale.ROOT, "no choice of cores (%s) keeps the "
+                            + "cores from growing toward the treble while every core stays at or under the maximum %s "
+                            + "at its target", mmList(offered), Words.pct(options.maxBreakPct()))));
+                }
+                int worse = rougherAt(r.choice(), input);
+                if (worse < 0) {
+                    Note[] out = new Note[n];
+                    for (int k = 0; k < n; k++) {
+                        out[k] = optNotes.get(k).get(r.choice()[k]);
+                    }
+                    return out;
+                }
+                forced[worse] = true;
             }
-            Note[] out = new Note[n];
+        }
+
+        /**
+         * The roughness of the planned keys: the largest neighbour step in per-string tension between
+         * planned scale neighbours, and the largest deviation from the target.
+         *
+         * @param choice the option per key, or null for the present strings
+         * @return {largest |step|, largest |deviation|}, fractions
+         */
+        double[] roughness(int[] choice) {
+            double stepMax = 0;
+            double devMax = 0;
             for (int k = 0; k < n; k++) {
-                out[k] = optNotes.get(k).get(r.choice()[k]);
+                NoteResult r = optResults.get(k).get(choice == null ? keep[k] : choice[k]);
+                devMax = Math.max(devMax, Math.abs(options.quantity().of(r) / target.at(note(k).key()) - 1));
+                if (k > 0 && idx.get(k) == idx.get(k - 1) + 1) {
+                    NoteResult lo = optResults.get(k - 1).get(choice == null ? keep[k - 1] : choice[k - 1]);
+                    stepMax = Math.max(stepMax, Math.abs(r.tension() / lo.tension() - 1));
+                }
             }
-            return out;
+            return new double[] {stepMax, devMax};
+        }
+
+        /**
+         * @return a key index where the plan is rougher than the input and the present string is not yet
+         *         kept (the worst such key), or -1 when the plan is nowhere rougher than the input
+         */
+        int rougherAt(int[] choice, double[] input) {
+            double[] plan = roughness(choice);
+            if (plan[0] <= input[0] + 1e-12 && plan[1] <= input[1] + 1e-12) {
+                return -1;
+            }
+            int worst = -1;
+            double worstBy = 0;
+            for (int k = 0; k < n; k++) {
+                if (forced[k] || choice[k] == keep[k] || !keepable[k]) {
+                    continue;
+                }
+                NoteResult r = optResults.get(k).get(choice[k]);
+                double by = Math.abs(options.quantity().of(r) / target.at(note(k).key()) - 1) - input[1];
+                if (k > 0 && idx.get(k) == idx.get(k - 1) + 1) {
+                    NoteResult lo = optResults.get(k - 1).get(choice[k - 1]);
+                    by = Math.max(by, Math.abs(r.tension() / lo.tension() - 1) - input[0]);
+                }
+                if (k + 1 < n && idx.get(k + 1) == idx.get(k) + 1) {
+                    NoteResult hi = optResults.get(k + 1).get(choice[k + 1]);
+                    by = Math.max(by, Math.abs(hi.tension() / r.tension() - 1) - input[0]);
+                }
+                if (by > worstBy) {
+                    worstBy = by;
+                    worst = k;
+                }
+            }
+            if (worst < 0) {
+                rougherThanInput = true;
+            }
+            return worst;
         }
 
         /** @return exp of a robust smooth trend of the logs */
@@ -496,8 +727,12 @@ public final class WoundPlanner {
             return String.format(Locale.ROOT, "%s: the target itself steps %s here; a smoother target would remove it",
                     where, Words.signedPct(targetStep));
         }
-        return String.format(Locale.ROOT, "%s: the wrap wire is too coarse here (%s): the nearest wraps leave %s "
-                + "%s and %s %s from the target; finer wrap wire would close it", where, o.wraps().description(),
+        if (!lo.changed() && !hi.changed()) {
+            return String.format(Locale.ROOT, "%s: both keep their present strings, which no listed wrap on the cores "
+                    + "tried improves on without leaving the keys rougher", where);
+        }
+        return String.format(Locale.ROOT, "%s: with the listed wrap wire (%s) and the cores tried, the closest "
+                + "choice leaves %s %s and %s %s from the target", where, o.wraps().description(),
                 Words.key(lo.key()), Words.signedPct(lo.deviationPct()), Words.key(hi.key()),
                 Words.signedPct(hi.deviationPct()));
     }

@@ -81,6 +81,40 @@ public final class TestScales {
                 OptionalDouble.empty(), OptionalDouble.empty(), section, "");
     }
 
+    /**
+     * A bass as a rebuilder measures it (invented test input, not a check value): wound keys 1..wound,
+     * speaking lengths running from {@code lowest} to {@code highest} metres, cores stepping by 0.05 mm
+     * every few keys, the first {@code doubles} keys double-wound, tensions scattered about a falling
+     * line as measured strings are, wraps rounded to 0.01 mm (what a micrometer reads), and four plain
+     * keys above.
+     */
+    public static Scale bass(String title, long seed, int wound, int doubles, double lowest, double highest,
+                             double lowCore, double lowTension) {
+        Random rnd = new Random(seed);
+        Materials m = BuiltInData.materials();
+        List<Note> notes = new ArrayList<>();
+        for (int key = 1; key <= wound + 4; key++) {
+            double f = Pitch.equalTempered(key, 440);
+            double t = (key - 1.0) / (wound - 1.0);
+            double length = measured(lowest * Math.pow(highest / lowest, Math.min(t, 1.0 + (key - wound) * 0.02)));
+            if (key > wound) {
+                double sigma = 4 * length * length * f * f * m.steelDensity();
+                double d = Math.round(Math.sqrt(750 / sigma / (Math.PI / 4)) / 0.025e-3) * 0.025e-3;
+                notes.add(note(key, 3, length, CoreWire.ofDiameter(d), null, "tenor"));
+                continue;
+            }
+            double core = Math.round((lowCore - 0.05e-3 * ((key - 1) / 4)) * 1e5) / 1e5;
+            double tension = lowTension * (1 - 0.25 * t) * (1 + 0.02 * rnd.nextGaussian());
+            double k = StringPhysics.stiffness(core, length, m.youngsModulus());
+            double mu = WrapSolver.neededMassPerLength(tension, length, f, k);
+            WindingRule rule = key <= doubles ? WindingRule.outerRatio(0.9) : WindingRule.single();
+            Wrap exact = WrapSolver.exact(core, mu, rule, WrapMetal.COPPER, m).orElseThrow();
+            Wrap wrap = new Wrap(round(exact.inner()), exact.isDouble() ? round(exact.outer()) : 0, WrapMetal.COPPER);
+            notes.add(note(key, key <= 8 ? 1 : 2, length, CoreWire.ofDiameter(core), wrap, "bass"));
+        }
+        return new Scale(title, PitchStandard.ISO_16, notes, null);
+    }
+
     /** @return the key of the last wound note */
     public static int lastWound(Scale s) {
         int last = 0;
