@@ -24,17 +24,27 @@ import org.scalewright.physics.StringPhysics;
 
 /**
  * Designs the wound strings of a range. For each wound key and core, the wrap diameter(s) come
- * in closed form from the mass the target tension needs, stiffness included
- * ({@link WrapSolver}); the exact wrap is then rounded to the wrap wire available, trying the
- * listed wires either side of it. Where a single wrap would pass a settable diameter the string
- * is double-wound. Plain keys in the range are skipped with a note.
+ * from the mass the target tension needs, stiffness and helix included ({@link WrapSolver}); the
+ * exact wrap is then rounded to the wrap wire available, trying the listed wires either side of
+ * it. Where a single wrap would pass a settable diameter the string is double-wound. Plain keys
+ * in the range are skipped with a note.
  *
- * <p>Which rounding (and, where cores are chosen, which core) each key gets is settled for all
- * planned keys at once by an exact dynamic programme ({@link ChoiceChain}) minimising
- * Σ ((T − T*)/T*)² + ¼ Σ (ln B/B*)² over keys whose core is chosen + change cost × core changes
- * + step cost × Σ (fraction by which a neighbour step exceeds the limit), with every core at or under the
- * maximum percent of breaking strength and chosen cores never growing toward the treble. B* is
- * a robust smooth trend of the B the present cores would have at the target tension.
+ * <p>Which core and which rounding each key gets — or whether it keeps its present string — is
+ * settled for all planned keys at once by an exact dynamic programme ({@link ChoiceChain})
+ * minimising Σ ((T − T*)/T*)² + ¼ Σ (ln B/B*)² over keys whose core is chosen
+ * + {@link #SMOOTH_WEIGHT} Σ (T_k/T*_k − T_{k−1}/T*_{k−1})² + change cost × core changes
+ * + step cost × Σ (fraction by which a neighbour step exceeds the limit), with every core at or
+ * under the maximum percent of breaking strength and chosen cores never growing toward the treble
+ * (so core changes + 1 is the number of distinct cores). B* is a robust smooth trend of the B
+ * the present cores would have at the target tension.
+ *
+ * <p>Never rougher than its input: where the plan's largest neighbour step in per-string tension
+ * or largest deviation from the target inside the planned keys passes the present strings', the
+ * key that makes it so most keeps its present string and the programme runs again.
+ *
+ * <p>A key whose exact wrap lies beyond the listed wire takes the end wire only within the
+ * neighbour-step limit of its target; otherwise the wrap wire is named too thin or too thick and,
+ * with no other option, the plan is not possible ({@link PlanNotPossible}).
  *
  * <p>"Join the break": the tension target is made continuous through each change of section
  * among the planned keys ({@link TargetCurve#join}), and the cores of the n keys either side are
