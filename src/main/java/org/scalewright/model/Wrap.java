@@ -105,9 +105,19 @@ public record Wrap(double inner, double outer, WrapMetal metal, double od, doubl
         return byOdOver(core);
     }
 
-    /** @return this wrap as given by OD over {@code core}: OD = core + 2 w1 + 2 w2, OD1 = core + 2 w1 */
+    /**
+     * @return this wrap as given by OD over {@code core}: OD = core + 2 w1 + 2 w2, OD1 = core + 2 w1,
+     *         each without the arithmetic's last-digit noise (to 12 significant digits), and the wraps
+     *         worked out from them as a sheet giving those ODs would, so that the note written and
+     *         read back is the same note
+     */
     public Wrap byOdOver(double core) {
-        return new Wrap(inner, outer, metal, core + 2 * inner + 2 * outer, isDouble() ? core + 2 * inner : 0);
+        double newOd = clean(core + 2 * inner + 2 * outer);
+        return fromOd(core, isDouble() ? clean(core + 2 * inner) : 0, newOd, metal);
+    }
+
+    private static double clean(double v) {
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(12)).doubleValue();
     }
 
     /** @return this wrap in another metal, given in the same form */
