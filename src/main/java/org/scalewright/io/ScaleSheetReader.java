@@ -17,6 +17,7 @@ import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.model.WireSize;
+import org.scalewright.model.WireNotation;
 import org.scalewright.model.WireSizeTable;
 import org.scalewright.model.Wrap;
 import org.scalewright.model.WrapMetal;
@@ -153,7 +154,7 @@ public final class ScaleSheetReader {
             }
             Double length = length(SheetColumn.SPEAKING_LENGTH, true);
             CoreWire wire = wire();
-            Wrap wrap = wrap();
+            Wrap wrap = wrap(wire);
             Double pitchHz = within(SheetColumn.PITCH_HZ, LOWEST_PITCH_HZ, HIGHEST_PITCH_HZ, "Hz");
             Double cents = within(SheetColumn.CENTS, -MAX_CENTS, MAX_CENTS, "cents");
             if (pitchHz != null && cents != null) {
@@ -164,12 +165,18 @@ public final class ScaleSheetReader {
             Double strike = length(SheetColumn.STRIKE, false);
             Double total = length(SheetColumn.TOTAL_LENGTH, false);
             Double winding = length(SheetColumn.WINDING_LENGTH, false);
+            Double front = bare(SheetColumn.BARE_FRONT);
+            Double back = bare(SheetColumn.BARE_BACK);
             if (problems.size() > before) {
+                return null;
+            }
+            if (!bareEndsAgree(wrap, length, winding, front, back)) {
                 return null;
             }
             try {
                 return new Note(key, strings, length, wire, wrap, opt(pitchHz), cents == null ? 0 : cents,
-                        opt(strike), opt(total), opt(winding), text(SheetColumn.SECTION), text(SheetColumn.REMARK));
+                        opt(strike), opt(total), opt(winding), text(SheetColumn.SECTION), text(SheetColumn.REMARK),
+                        opt(front), opt(back));
             } catch (IllegalArgumentException e) {
                 problem("", e.getMessage());
                 return null;
@@ -206,9 +213,16 @@ public final class ScaleSheetReader {
             return d == null ? null : CoreWire.ofDiameter(d);
         }
 
-        private Wrap wrap() {
+        /**
+         * The winding, given one way or the other: by its wrap wires ({@code wrap1}, {@code wrap2}),
+         * or by what a micrometer measures on the string ({@code od}, and {@code od1} over the first
+         * layer of a double-wound string), the wraps then following from the core.
+         */
+        private Wrap wrap(CoreWire wire) {
             Double w1 = length(SheetColumn.WRAP1, false);
             Double w2 = length(SheetColumn.WRAP2, false);
+            Double od = length(SheetColumn.OD, false);
+            Double od1 = length(SheetColumn.OD1, false);
             String metalText = cell(SheetColumn.WRAP_METAL);
             WrapMetal metal = WrapMetal.COPPER;
             if (!metalText.isEmpty()) {
@@ -222,10 +236,129 @@ public final class ScaleSheetReader {
                 problem(SheetColumn.WRAP2, "a second wrap needs a first wrap (" + header.name(SheetColumn.WRAP1) + ")");
                 return null;
             }
+            boolean byWraps = !cell(SheetColumn.WRAP1).isEmpty() || !cell(SheetColumn.WRAP2).isEmpty();
+            boolean byOd = !cell(SheetColumn.OD).isEmpty() || !cell(SheetColumn.OD1).isEmpty();
+            if (byWraps && byOd) {
+                problem(cell(SheetColumn.OD).isEmpty() ? SheetColumn.OD1 : SheetColumn.OD, "give the winding either by "
+                        + "its wrap wires (" + header.name(SheetColumn.WRAP1) + ") or by its outside diameter ("
+                        + header.name(SheetColumn.OD) + "), not both on one row");
+                return null;
+            }
+            if (od1 != null && od == null) {
+                problem(SheetColumn.OD1, "a diameter over the first layer needs the outside diameter ("
+                        + header.name(SheetColumn.OD) + ") on the same row");
+                return null;
+            }
+            if (od != null) {
+                return wrapFromOd(wire, od, od1, metal);
+            }
             if (w1 == null || problems.size() > before) {
                 return null;
             }
             return new Wrap(w1, w2 == null ? 0 : w2, metal);
+        }
+
+        /** single wound w1 = (OD − d)/2; double wound w1 = (OD1 − d)/2, w2 = (OD − OD1)/2 (DESIGN §3) */
+        private Wrap wrapFromOd(CoreWire wire, double od, Double od1, WrapMetal metal) {
+            if (wire == null) {
+                if (cell(SheetColumn.WIRE_SIZE).isEmpty() && cell(SheetColumn.WIRE_DIAMETER).isEmpty()) {
+                    problem(SheetColumn.OD, "an outside diameter needs the core it is wound on: give the core in "
+                            + "wire (size number) or as a diameter (wire_mm or wire_in)");
+                }
+                return null;
+            }
+            double d = wire.diameter();
+            if (!(od > d)) {
+                problem(SheetColumn.OD, "the outside diameter " + cell(SheetColumn.OD) + " " + unitOf(SheetColumn.OD)
+                        + " must be larger than the core, " + shown(d, SheetColumn.OD));
+                return null;
+            }
+            if (od1 != null && !(od1 > d && od1 < od)) {
+                problem(SheetColumn.OD1, "the diameter over the first layer " + cell(SheetColumn.OD1) + " "
+                        + unitOf(SheetColumn.OD1) + " must lie between the core, " + shown(d, SheetColumn.OD1)
+                        + ", and the outside diameter, " + shown(od, SheetColumn.OD1));
+                return null;
+            }
+            if (problems.size() > before) {
+                return null;
+            }
+            return Wrap.fromOd(d, od1 == null ? 0 : od1, od, metal);
+        }
+
+        private String unitOf(SheetColumn c) {
+            return header.unit(c).symbol();
+        }
+
+        /** @return a diameter (m) in the unit of column {@code c}, with the unit */
+        private String shown(double metres, SheetColumn c) {
+            return WireNotation.diameter(metres, header.unit(c)) + " " + unitOf(c);
+        }
+
+        /**
+         * Checks the bare ends against the rest of the row: they belong to a wound string; one
+         * alone needs the wound length; together they fit in the speaking length; with the wound
+         * length they add up to the speaking length within {@link Note#WINDING_TOLERANCE}.
+         *
+         * @return true when they agree (or none is given)
+         */
+        private boolean bareEndsAgree(Wrap wrap, double length, Double winding, Double front, Double back) {
+            if (front == null && back == null) {
+                return true;
+            }
+            SheetColumn given = front != null ? SheetColumn.BARE_FRONT : SheetColumn.BARE_BACK;
+            if (wrap == null) {
+                problem(given, "bare core at the ends belongs to a wound string; this row has no winding (give "
+                        + header.name(SheetColumn.WRAP1) + " or " + header.name(SheetColumn.OD) + ")");
+                return false;
+            }
+            double l = length;
+            double sum = (front == null ? 0 : front) + (back == null ? 0 : back);
+            if (sum > l) {
+                problem(given, "bare core at the ends, " + lengthText(sum, header.unit(given)) + " together, is longer "
+                        + "than the speaking length, " + lengthText(l, header.unit(given)));
+                return false;
+            }
+            if (front == null || back == null) {
+                if (winding == null) {
+                    problem(given, "give both " + header.name(SheetColumn.BARE_FRONT) + " and "
+                            + header.name(SheetColumn.BARE_BACK) + ", or one of them with the wound length ("
+                            + header.name(SheetColumn.WINDING_LENGTH) + ")");
+                    return false;
+                }
+                if (winding + sum > l + Note.WINDING_TOLERANCE) {
+                    problem(SheetColumn.WINDING_LENGTH, "the winding " + cell(SheetColumn.WINDING_LENGTH) + " "
+                            + unitOf(SheetColumn.WINDING_LENGTH) + " and the bare core " + cell(given) + " "
+                            + unitOf(given) + " are longer than the speaking length together");
+                    return false;
+                }
+                return true;
+            }
+            if (winding != null && Math.abs(winding + sum - l) > Note.WINDING_TOLERANCE) {
+                problem(SheetColumn.WINDING_LENGTH, "winding + bare core at the front + at the back must add up to "
+                        + "the speaking length within " + lengthText(Note.WINDING_TOLERANCE, LengthUnit.MM) + ": "
+                        + cell(SheetColumn.WINDING_LENGTH) + " + " + cell(SheetColumn.BARE_FRONT) + " + "
+                        + cell(SheetColumn.BARE_BACK) + " is " + lengthText(winding + sum,
+                        header.unit(SheetColumn.WINDING_LENGTH)) + ", the speaking length "
+                        + lengthText(l, header.unit(SheetColumn.WINDING_LENGTH)));
+                return false;
+            }
+            return true;
+        }
+
+        /** @return a bare end in metres: 0 (winding right to the termination) or a length as {@link #length} */
+        private Double bare(SheetColumn c) {
+            Double v = number(c, false, false);
+            if (v == null) {
+                return null;
+            }
+            if (v == 0) {
+                return 0.0;
+            }
+            if (v < 0) {
+                problem(c, "must be 0 or more, was " + cell(c));
+                return null;
+            }
+            return length(c, false);
         }
 
         private static OptionalDouble opt(Double v) {

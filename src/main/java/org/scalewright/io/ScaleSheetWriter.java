@@ -93,9 +93,11 @@ public final class ScaleSheetWriter {
                 l = l.with(SheetColumn.WIRE_DIAMETER);
             }
             if (n.isWound()) {
-                l = l.with(SheetColumn.WRAP1);
+                // a wrap keeps the form it was given in: by its wires, or by the outside diameter(s)
+                SheetColumn first = n.wrap().givenByOd() ? SheetColumn.OD : SheetColumn.WRAP1;
+                l = l.with(first);
                 if (n.wrap().isDouble()) {
-                    l = l.with(SheetColumn.WRAP2);
+                    l = l.with(n.wrap().givenByOd() ? SheetColumn.OD1 : SheetColumn.WRAP2);
                 }
                 // copper is what a blank or missing wrap_metal means: add the column only for other metals
                 if (n.wrap().metal() != WrapMetal.COPPER) {
@@ -107,6 +109,8 @@ public final class ScaleSheetWriter {
             l = n.strikePoint().isPresent() ? l.with(SheetColumn.STRIKE) : l;
             l = n.stretchedLength().isPresent() ? l.with(SheetColumn.TOTAL_LENGTH) : l;
             l = n.woundLength().isPresent() ? l.with(SheetColumn.WINDING_LENGTH) : l;
+            l = n.bareFront().isPresent() ? l.with(SheetColumn.BARE_FRONT) : l;
+            l = n.bareBack().isPresent() ? l.with(SheetColumn.BARE_BACK) : l;
             l = n.section().isEmpty() ? l : l.with(SheetColumn.SECTION);
             l = n.remark().isEmpty() ? l : l.with(SheetColumn.REMARK);
         }
@@ -121,17 +125,29 @@ public final class ScaleSheetWriter {
             case WIRE_SIZE -> n.wire().musicWireSize().isPresent() ? NumberText.plain(n.wire().musicWireSize().getAsDouble()) : "";
             case WIRE_DIAMETER -> n.wire().musicWireSize().isPresent() && layout.has(SheetColumn.WIRE_SIZE) ? ""
                     : length(n.wire().diameter(), c, layout);
-            case WRAP1 -> n.isWound() ? length(n.wrap().inner(), c, layout) : "";
-            case WRAP2 -> n.isWound() && n.wrap().isDouble() ? length(n.wrap().outer(), c, layout) : "";
+            case WRAP1 -> byWires(n) ? length(n.wrap().inner(), c, layout) : "";
+            case WRAP2 -> byWires(n) && n.wrap().isDouble() ? length(n.wrap().outer(), c, layout) : "";
+            case OD -> byOd(n) ? length(n.wrap().od(), c, layout) : "";
+            case OD1 -> byOd(n) && n.wrap().isDouble() ? length(n.wrap().od1(), c, layout) : "";
             case WRAP_METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
             case PITCH_HZ -> n.pitchHz().isPresent() ? exact(n.pitchHz().getAsDouble()) : "";
             case CENTS -> n.cents() == 0 ? "" : exact(n.cents());
             case STRIKE -> optionalLength(n.strikePoint(), c, layout);
             case TOTAL_LENGTH -> optionalLength(n.stretchedLength(), c, layout);
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
+            case BARE_FRONT -> optionalLength(n.bareFront(), c, layout);
+            case BARE_BACK -> optionalLength(n.bareBack(), c, layout);
             case SECTION -> CsvCells.safeText(oneLine(n.section()));
             case REMARK -> CsvCells.safeText(oneLine(n.remark()));
         };
+    }
+
+    private static boolean byWires(Note n) {
+        return n.isWound() && !n.wrap().givenByOd();
+    }
+
+    private static boolean byOd(Note n) {
+        return n.isWound() && n.wrap().givenByOd();
     }
 
     /** @return a number with zeros added up to {@code decimals} decimals, as its column was typed ({@code 0.3} → {@code 0.30}) */
@@ -154,7 +170,8 @@ public final class ScaleSheetWriter {
 
     private static String length(double metres, SheetColumn c, SheetLayout layout) {
         LengthUnit unit = layout.unitOf(c);
-        boolean diameter = c == SheetColumn.WIRE_DIAMETER || c == SheetColumn.WRAP1 || c == SheetColumn.WRAP2;
+        boolean diameter = c == SheetColumn.WIRE_DIAMETER || c == SheetColumn.WRAP1 || c == SheetColumn.WRAP2
+                || c == SheetColumn.OD || c == SheetColumn.OD1;
         return NumberText.sheetCell(metres, unit::toMetres, unit.fromMetres(metres), places(unit, diameter));
     }
 

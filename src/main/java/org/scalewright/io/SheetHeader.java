@@ -75,6 +75,10 @@ final class SheetHeader {
             problems.add(new SheetProblem(file, line, h.name(SheetColumn.WRAP2),
                     "a second wrap column needs a first wrap column (wrap1_mm or wrap1_in)"));
         }
+        if (h.positions.containsKey(SheetColumn.OD1) && !h.positions.containsKey(SheetColumn.OD)) {
+            problems.add(new SheetProblem(file, line, h.name(SheetColumn.OD1),
+                    "a column of diameters over the first layer needs an outside-diameter column (od_mm or od_in)"));
+        }
         return h;
     }
 

@@ -19,11 +19,37 @@ import java.util.function.Consumer;
  * @param woundLength    wound length of a wound string, m, or empty
  * @param section        free section label ("" when none)
  * @param remark         free text ("" when none)
+ * @param bareFront      bare core at the front end inside the speaking length, m, or empty
+ * @param bareBack       bare core at the back end inside the speaking length, m, or empty
  */
 public record Note(int key, int strings, double speakingLength, CoreWire wire, Wrap wrap,
                    OptionalDouble pitchHz, double cents, OptionalDouble strikePoint,
                    OptionalDouble stretchedLength, OptionalDouble woundLength,
-                   String section, String remark) {
+                   String section, String remark, OptionalDouble bareFront, OptionalDouble bareBack) {
+
+    /**
+     * How far the wound length and the two bare ends may fall from the speaking length, m
+     * (0.5 mm: a tape measure's reading of three lengths; common practice, no source).
+     */
+    public static final double WINDING_TOLERANCE = 0.5e-3;
+
+    /** The bare core at each end of a wound string inside its speaking length, m. */
+    public record BareEnds(double front, double back) {
+        public static final BareEnds NONE = new BareEnds(0, 0);
+
+        /** @return true when there is bare core at either end */
+        public boolean any() {
+            return front > 0 || back > 0;
+        }
+    }
+
+    /** A note without bare ends given. */
+    public Note(int key, int strings, double speakingLength, CoreWire wire, Wrap wrap,
+                OptionalDouble pitchHz, double cents, OptionalDouble strikePoint,
+                OptionalDouble stretchedLength, OptionalDouble woundLength, String section, String remark) {
+        this(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint, stretchedLength, woundLength,
+                section, remark, OptionalDouble.empty(), OptionalDouble.empty());
+    }
 
     public Note {
         if (strings < 1 || strings > 3) {
@@ -42,6 +68,30 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         stretchedLength.ifPresent(v -> Checks.positive("stretched length", v, "mm", 1e3));
         woundLength.ifPresent(v -> Checks.positive("wound length", v, "mm", 1e3));
         Checks.finite("cents", cents);
+        bareFront = orEmpty(bareFront);
+        bareBack = orEmpty(bareBack);
+        bareFront.ifPresent(v -> Checks.nonNegative("bare core at the front", v, "mm", 1e3));
+        bareBack.ifPresent(v -> Checks.nonNegative("bare core at the back", v, "mm", 1e3));
+        if (wrap == null && (bareFront.isPresent() || bareBack.isPresent())) {
+            throw new IllegalArgumentException("key " + key + ": bare core at the ends belongs to a wound string");
+        }
+        double bareSum = bareFront.orElse(0) + bareBack.orElse(0);
+        if (bareSum > speakingLength) {
+            throw new IllegalArgumentException("key " + key + ": bare core at the ends (" + Checks.format(bareSum * 1e3)
+                    + " mm) is longer than the speaking length " + Checks.format(speakingLength * 1e3) + " mm");
+        }
+        if (bareFront.isPresent() && bareBack.isPresent() && woundLength.isPresent()
+                && Math.abs(woundLength.getAsDouble() + bareSum - speakingLength) > WINDING_TOLERANCE) {
+            throw new IllegalArgumentException(windingMismatch(key, speakingLength, woundLength.getAsDouble(),
+                    bareFront.getAsDouble(), bareBack.getAsDouble()));
+        }
+        if (wrap != null && wrap.givenByOd()) {
+            double d = wire.diameter();
+            if (Math.abs(d + 2 * wrap.inner() + 2 * wrap.outer() - wrap.od()) > 1e-9
+                    || (wrap.isDouble() && Math.abs(d + 2 * wrap.inner() - wrap.od1()) > 1e-9)) {
+                throw new IllegalArgumentException("key " + key + ": the outside diameter does not match core and wraps");
+            }
+        }
         section = section == null ? "" : section;
         remark = remark == null ? "" : remark;
     }
@@ -56,6 +106,47 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
                 OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(), "", "");
     }
 
+    /** @return the message for a wound length and bare ends that do not add up to the speaking length */
+    public static String windingMismatch(int key, double length, double wound, double front, double back) {
+        return "key " + key + ": winding " + Checks.format(wound * 1e3) + " mm + bare core "
+                + Checks.format(front * 1e3) + " mm (front) + " + Checks.format(back * 1e3) + " mm (back) = "
+                + Checks.format((wound + front + back) * 1e3) + " mm, but the speaking length is "
+                + Checks.format(length * 1e3) + " mm (they must agree within "
+                + Checks.format(WINDING_TOLERANCE * 1e3) + " mm)";
+    }
+
+    /**
+     * The bare core at each end inside the speaking length (DESIGN §3): as given by the sheet's
+     * bare ends; one bare end given with the wound length, the other is what is left of the
+     * speaking length; only the wound length given, the bare core is split equally between the
+     * ends; a wound length as long as the speaking length or longer leaves none. Plain wire: none.
+     */
+    public BareEnds bareEnds() {
+        if (!isWound()) {
+            return BareEnds.NONE;
+        }
+        double l = speakingLength;
+        if (bareFront.isPresent() && bareBack.isPresent()) {
+            return new BareEnds(bareFront.getAsDouble(), bareBack.getAsDouble());
+        }
+        if (woundLength.isEmpty()) {
+            return new BareEnds(bareFront.orElse(0), bareBack.orElse(0));
+        }
+        double bare = Math.max(0, l - woundLength.getAsDouble());
+        if (bareFront.isPresent()) {
+            return new BareEnds(bareFront.getAsDouble(), Math.max(0, bare - bareFront.getAsDouble()));
+        }
+        if (bareBack.isPresent()) {
+            return new BareEnds(Math.max(0, bare - bareBack.getAsDouble()), bareBack.getAsDouble());
+        }
+        return new BareEnds(bare / 2, bare / 2);
+    }
+
+    /** @return the outside diameter of a wound string (as given, else core + 2 w1 + 2 w2), m; NaN for plain wire */
+    public double outsideDiameter() {
+        return isWound() ? wrap.outsideDiameter(wire.diameter()) : Double.NaN;
+    }
+
     /** @return true for a wound (covered) string */
     public boolean isWound() {
         return wrap != null;
@@ -66,12 +157,28 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         return stretchedLength.orElse(speakingLength);
     }
 
+    /**
+     * @return this note with another plain wire or core; a wrap given by OD keeps its wraps
+     *         and its OD follows the new core
+     */
     public Note withWire(CoreWire newWire) {
-        return edited(e -> e.wire = newWire);
+        return edited(e -> {
+            e.wire = newWire;
+            if (e.wrap != null && e.wrap.givenByOd()) {
+                e.wrap = e.wrap.byOdOver(newWire.diameter());
+            }
+        });
     }
 
+    /** @return this note with another wrap; without a wrap (plain wire) it has no bare ends either */
     public Note withWrap(Wrap newWrap) {
-        return edited(e -> e.wrap = newWrap);
+        return edited(e -> {
+            e.wrap = newWrap;
+            if (newWrap == null) {
+                e.bareFront = OptionalDouble.empty();
+                e.bareBack = OptionalDouble.empty();
+            }
+        });
     }
 
     public Note withSpeakingLength(double newLength) {
@@ -118,6 +225,8 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         private final OptionalDouble woundLength;
         private String section;
         private String remark;
+        private OptionalDouble bareFront;
+        private OptionalDouble bareBack;
 
         Edit(Note n) {
             key = n.key;
@@ -132,11 +241,13 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
             woundLength = n.woundLength;
             section = n.section;
             remark = n.remark;
+            bareFront = n.bareFront;
+            bareBack = n.bareBack;
         }
 
         Note note() {
             return new Note(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
-                    stretchedLength, woundLength, section, remark);
+                    stretchedLength, woundLength, section, remark, bareFront, bareBack);
         }
     }
 }

@@ -12,12 +12,20 @@ public enum SheetColumn {
     WIRE_DIAMETER("wire", true),
     WRAP1("wrap1", true),
     WRAP2("wrap2", true),
+    /** Outside diameter of a wound string as measured; instead of the wraps. */
+    OD("od", true),
+    /** Diameter over the first layer of a double-wound string as measured; with {@link #OD}. */
+    OD1("od1", true),
     WRAP_METAL("wrap_metal", false),
     PITCH_HZ("pitch_hz", false),
     CENTS("cents", false),
     STRIKE("strike", true),
     TOTAL_LENGTH("total", true),
     WINDING_LENGTH("winding", true),
+    /** Bare core at the front end inside the speaking length. */
+    BARE_FRONT("bare_front", true),
+    /** Bare core at the back end inside the speaking length. */
+    BARE_BACK("bare_back", true),
     SECTION("section", false),
     REMARK("remark", false);
 
@@ -27,6 +35,14 @@ public enum SheetColumn {
     SheetColumn(String stem, boolean length) {
         this.stem = stem;
         this.length = length;
+    }
+
+    /**
+     * @return true for the columns a sheet holds only where its notes need them (another form of
+     *         entry, or a detail): left out of the layout of a scale that has none yet
+     */
+    public boolean onlyWhereNeeded() {
+        return this == OD || this == OD1 || this == BARE_FRONT || this == BARE_BACK;
     }
 
     /** @return the column name without unit suffix */

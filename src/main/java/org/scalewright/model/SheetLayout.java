@@ -51,9 +51,13 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
         return decimals.getOrDefault(column, 0);
     }
 
-    /** The layout used for a scale that has none yet: every column, lengths in millimetres. */
+    /**
+     * The layout used for a scale that has none yet: every column but those written only where
+     * notes need them ({@link SheetColumn#onlyWhereNeeded()}), lengths in millimetres.
+     */
     public static SheetLayout metricDefault() {
         List<SheetColumn> cols = new ArrayList<>(List.of(SheetColumn.values()));
+        cols.removeIf(SheetColumn::onlyWhereNeeded);
         Map<SheetColumn, LengthUnit> u = new EnumMap<>(SheetColumn.class);
         for (SheetColumn c : cols) {
             if (c.isLength()) {
@@ -71,6 +75,21 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
         }
         if (column == SheetColumn.WRAP2 && units.containsKey(SheetColumn.WRAP1)) {
             return units.get(SheetColumn.WRAP1);
+        }
+        if (column == SheetColumn.OD1 && units.containsKey(SheetColumn.OD)) {
+            return units.get(SheetColumn.OD);
+        }
+        if (column == SheetColumn.OD && units.containsKey(SheetColumn.OD1)) {
+            return units.get(SheetColumn.OD1);
+        }
+        if ((column == SheetColumn.OD || column == SheetColumn.OD1) && units.containsKey(SheetColumn.WRAP1)) {
+            return units.get(SheetColumn.WRAP1);
+        }
+        if (column == SheetColumn.BARE_FRONT && units.containsKey(SheetColumn.BARE_BACK)) {
+            return units.get(SheetColumn.BARE_BACK);
+        }
+        if (column == SheetColumn.BARE_BACK && units.containsKey(SheetColumn.BARE_FRONT)) {
+            return units.get(SheetColumn.BARE_FRONT);
         }
         return units.getOrDefault(SheetColumn.SPEAKING_LENGTH, LengthUnit.MM);
     }

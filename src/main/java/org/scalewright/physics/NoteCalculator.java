@@ -78,10 +78,11 @@ public final class NoteCalculator {
 
     /**
      * The mass per length that tunes the note's fundamental: the wound (or plain) string's μ,
-     * or, where the note's wound length is shorter than its speaking length, the effective μ
-     * with bare core at the ends ({@link StringPhysics#effectiveMassPerLength}). With only the
-     * wound length given, the bare core is split equally between the two ends, (L − wound)/2
-     * each (DESIGN §3). A wound length equal to or longer than the speaking length leaves no
+     * or, where bare core lies inside the speaking length at either end, the effective μ
+     * ({@link StringPhysics#effectiveMassPerLength}). The bare ends are the note's
+     * ({@link Note#bareEnds()}): as the sheet's {@code bare_front}/{@code bare_back} give them,
+     * else with only the wound length given the bare core (L − wound) split equally between the
+     * two ends (DESIGN §3). A wound length equal to or longer than the speaking length leaves no
      * bare core inside it.
      *
      * @param note the note
@@ -91,12 +92,11 @@ public final class NoteCalculator {
     public static double massForFundamental(Note note, Materials m) {
         double d = note.wire().diameter();
         double mu = StringPhysics.massPerLength(d, note.wrap(), m);
-        double length = note.speakingLength();
-        if (!note.isWound() || note.woundLength().isEmpty() || note.woundLength().getAsDouble() >= length) {
+        Note.BareEnds bare = note.bareEnds();
+        if (!bare.any()) {
             return mu;
         }
-        double bare = (length - note.woundLength().getAsDouble()) / 2.0;
         return StringPhysics.effectiveMassPerLength(mu, StringPhysics.plainMassPerLength(d, m.steelDensity()),
-                length, bare, bare);
+                note.speakingLength(), bare.front(), bare.back());
     }
 }

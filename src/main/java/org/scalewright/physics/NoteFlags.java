@@ -57,6 +57,9 @@ final class NoteFlags {
                         + NumberText.fixed(p.maxWrap() * 1e3, 2) + " mm"));
             }
         }
+        if (note.isWound()) {
+            winding(note).ifPresent(f -> flags.add(f));
+        }
         if (!(tension > 0)) {
             flags.add(new Flag(key, FlagKind.IMPLAUSIBLE, "the wire is too stiff for this length and pitch "
                     + "(no positive tension)"));
@@ -68,6 +71,38 @@ final class NoteFlags {
                     + NumberText.fixed(s.strength().maxDiameter() * 1e3, 3) + " mm); strength extrapolated"));
         }
         return flags.isEmpty() ? List.of() : flags;
+    }
+
+    /**
+     * An implausible winding: longer than the speaking length by more than
+     * {@link Note#WINDING_TOLERANCE} (the winding stops short of the bridge pin and the front
+     * termination, leaving bare core over both), or shorter than half of it. The wound length is
+     * the sheet's {@code winding}, else what both bare ends given leave of the speaking length.
+     */
+    private static java.util.Optional<Flag> winding(Note note) {
+        double l = note.speakingLength();
+        double wound;
+        String what;
+        if (note.woundLength().isPresent()) {
+            wound = note.woundLength().getAsDouble();
+            what = "winding " + NumberText.fixed(wound * 1e3, 0) + " mm";
+        } else if (note.bareFront().isPresent() && note.bareBack().isPresent()) {
+            wound = l - note.bareFront().getAsDouble() - note.bareBack().getAsDouble();
+            what = "winding " + NumberText.fixed(wound * 1e3, 0) + " mm (what the bare ends leave)";
+        } else {
+            return java.util.Optional.empty();
+        }
+        if (wound > l + Note.WINDING_TOLERANCE) {
+            return java.util.Optional.of(new Flag(note.key(), FlagKind.IMPLAUSIBLE, what + " is longer than the "
+                    + "speaking length " + NumberText.fixed(l * 1e3, 0) + " mm: a winding stops short of the "
+                    + "bridge pin and the front termination; measure the wound part between them"));
+        }
+        if (wound < l / 2) {
+            return java.util.Optional.of(new Flag(note.key(), FlagKind.IMPLAUSIBLE, what + " is shorter than half "
+                    + "the speaking length " + NumberText.fixed(l * 1e3, 0) + " mm: more than half the string "
+                    + "would be bare core"));
+        }
+        return java.util.Optional.empty();
     }
 
     /**

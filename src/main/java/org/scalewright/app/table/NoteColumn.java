@@ -21,6 +21,8 @@ public enum NoteColumn {
     WIRE("wire", Group.SPEC),
     WRAP1("wrap 1", Group.SPEC),
     WRAP2("wrap 2", Group.SPEC),
+    OD("OD", Group.SPEC),
+    OD1("OD1", Group.SPEC),
     METAL("wrap metal", Group.SPEC),
     PITCH("pitch", Group.COMPUTED),
     TENSION("T/string", Group.COMPUTED),
@@ -51,7 +53,12 @@ public enum NoteColumn {
 
     /** @return the column's name in plain words, without unit ({@code speaking length}, {@code wire}) */
     String word() {
-        return this == LENGTH ? "speaking length" : name;
+        return switch (this) {
+            case LENGTH -> "speaking length";
+            case OD -> "outside diameter";
+            case OD1 -> "diameter over the first layer";
+            default -> name;
+        };
     }
 
     /** @return true for the string specification, which the user edits */
@@ -75,6 +82,8 @@ public enum NoteColumn {
             case WIRE -> "wire\n# or " + u.length().symbol();
             case WRAP1 -> "wrap 1\n" + u.length().symbol();
             case WRAP2 -> "wrap 2\n" + u.length().symbol();
+            case OD -> "OD\n" + u.length().symbol();
+            case OD1 -> "OD1\n" + u.length().symbol();
             case METAL -> "wrap\nmetal";
             case PITCH -> "pitch\nHz";
             case TENSION -> "T/string\n" + u.force().symbol();
@@ -101,6 +110,10 @@ public enum NoteColumn {
             case WIRE -> "plain wire or core: a music-wire size number (12 to 23, half sizes) or a diameter";
             case WRAP1 -> "first (inner) wrap wire diameter; blank for plain wire";
             case WRAP2 -> "second (outer) wrap wire diameter; blank for single-wound";
+            case OD -> "outside diameter of a wound string, as a micrometer measures it; entering it works out "
+                    + "the outer wrap from the core (and OD1)";
+            case OD1 -> "diameter over the first layer of a double-wound string; entering it works out both wraps "
+                    + "from the core and the OD";
             case METAL -> "wrap metal: copper, iron or steel";
             case PITCH -> "working pitch";
             case TENSION -> "tension per string";
@@ -132,6 +145,9 @@ public enum NoteColumn {
                     : DisplayFormat.diameter(n.wire().diameter(), u);
             case WRAP1 -> n.isWound() ? DisplayFormat.diameter(n.wrap().inner(), u) : "";
             case WRAP2 -> n.isWound() && n.wrap().isDouble() ? DisplayFormat.diameter(n.wrap().outer(), u) : "";
+            case OD -> n.isWound() ? DisplayFormat.diameter(n.outsideDiameter(), u) : "";
+            case OD1 -> n.isWound() && n.wrap().isDouble()
+                    ? DisplayFormat.diameter(n.wrap().firstLayerDiameter(n.wire().diameter()), u) : "";
             case METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
             case PITCH -> DisplayFormat.fixed(r.frequency(), 2);
             case TENSION -> DisplayFormat.force(r.tension(), u);

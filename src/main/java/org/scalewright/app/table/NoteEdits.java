@@ -45,6 +45,8 @@ final class NoteEdits {
             case WIRE -> note.withWire(wire(t, units));
             case WRAP1 -> wrap1(note, t, units);
             case WRAP2 -> wrap2(note, t, units);
+            case OD -> od(note, t, units);
+            case OD1 -> od1(note, t, units);
             case METAL -> metal(note, t);
             default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
         };
@@ -95,18 +97,75 @@ final class NoteEdits {
         double inner = length("first wrap diameter", t, units);
         Wrap old = note.wrap();
         return note.withWrap(old == null ? Wrap.single(inner, WrapMetal.COPPER)
-                : new Wrap(inner, old.outer(), old.metal()));
+                : new Wrap(inner, old.outer(), old.metal()).inFormOf(old, note.wire().diameter()));
     }
 
     private static Note wrap2(Note note, String t, DisplayUnits units) {
         Wrap old = note.wrap();
         if (t.isEmpty()) {
-            return old == null ? note : note.withWrap(new Wrap(old.inner(), 0, old.metal()));
+            return old == null ? note
+                    : note.withWrap(new Wrap(old.inner(), 0, old.metal()).inFormOf(old, note.wire().diameter()));
         }
         if (old == null) {
             throw new IllegalArgumentException("a second wrap needs a first wrap: enter wrap 1 first");
         }
-        return note.withWrap(new Wrap(old.inner(), length("second wrap diameter", t, units), old.metal()));
+        return note.withWrap(new Wrap(old.inner(), length("second wrap diameter", t, units), old.metal())
+                .inFormOf(old, note.wire().diameter()));
+    }
+
+    /**
+     * The outside diameter as measured: the wraps follow from the core (single wound w1 = (OD − d)/2;
+     * double wound, keeping OD1, w2 = (OD − OD1)/2) and the note is then given by OD. On plain wire
+     * it makes a single-wound copper string; blank, the note becomes plain wire, as with wrap 1.
+     */
+    private static Note od(Note note, String t, DisplayUnits units) {
+        Wrap old = note.wrap();
+        if (t.isEmpty()) {
+            return old == null ? note : note.withWrap(null);
+        }
+        double od = length("outside diameter", t, units);
+        double core = note.wire().diameter();
+        if (!(od > core)) {
+            throw new IllegalArgumentException("the outside diameter " + shown(od, units)
+                    + " must be larger than the core, " + shown(core, units));
+        }
+        WrapMetal metal = old == null ? WrapMetal.COPPER : old.metal();
+        if (old == null || !old.isDouble()) {
+            return note.withWrap(Wrap.fromOd(core, 0, od, metal));
+        }
+        double od1 = old.firstLayerDiameter(core);
+        if (!(od > od1)) {
+            throw new IllegalArgumentException("the outside diameter " + shown(od, units)
+                    + " must be larger than the diameter over the first layer, " + shown(od1, units));
+        }
+        return note.withWrap(Wrap.fromOd(core, od1, od, metal));
+    }
+
+    /**
+     * The diameter over the first layer of a double-wound string: both wraps follow from core,
+     * OD1 and the OD, which stays. Blank, the string becomes single wound with the same OD.
+     */
+    private static Note od1(Note note, String t, DisplayUnits units) {
+        Wrap old = note.wrap();
+        double core = note.wire().diameter();
+        if (t.isEmpty()) {
+            return old == null || !old.isDouble() ? note
+                    : note.withWrap(Wrap.fromOd(core, 0, old.outsideDiameter(core), old.metal()));
+        }
+        if (old == null) {
+            throw new IllegalArgumentException("a diameter over the first layer needs a wound string: enter the OD first");
+        }
+        double od1 = length("diameter over the first layer", t, units);
+        double od = old.outsideDiameter(core);
+        if (!(od1 > core && od1 < od)) {
+            throw new IllegalArgumentException("the diameter over the first layer " + shown(od1, units)
+                    + " must lie between the core, " + shown(core, units) + ", and the OD, " + shown(od, units));
+        }
+        return note.withWrap(Wrap.fromOd(core, od1, od, old.metal()));
+    }
+
+    private static String shown(double metres, DisplayUnits units) {
+        return DisplayFormat.diameter(metres, units) + " " + units.length().symbol();
     }
 
     private static Note metal(Note note, String t) {
@@ -123,7 +182,7 @@ final class NoteEdits {
         String lower = t.toLowerCase(Locale.ROOT);
         for (WrapMetal m : WrapMetal.values()) {
             if (m.sheetName().startsWith(lower)) {
-                return note.withWrap(new Wrap(old.inner(), old.outer(), m));
+                return note.withWrap(old.withMetal(m));
             }
         }
         throw new IllegalArgumentException("wrap metal must be copper, iron or steel, was '" + t + "'");

@@ -105,7 +105,7 @@ public final class NoteTableView {
             case SECTION -> 56;
             case LENGTH, PITCH -> 56;
             case WIRE -> 62;
-            case WRAP1, WRAP2 -> 48;
+            case WRAP1, WRAP2, OD, OD1 -> 48;
             case METAL -> 54;
             case TENSION, NOTE_TENSION -> 58;
             case STRESS, BREAK_PCT -> 50;
