@@ -5,7 +5,8 @@
 #
 # Usage, from the project root after `mvn -q -DskipTests package`:
 #   src/test/scripts/report-kill-test.sh [TRIES]        (default 100)
-# Environment: JAVA_OPTS (default "-XX:TieredStopAtLevel=1 -XX:+UseSerialGC", lighter on a shared machine).
+# Environment: JAVA_OPTS (default "-XX:TieredStopAtLevel=1 -XX:+UseSerialGC", lighter on a shared machine);
+# SCALEWRIGHT_JAR (default target/scalewright.jar; a copy lets a build run meanwhile).
 #
 # Each try runs `java -jar target/scalewright.jar report OTHER.csv --out DIR` over a folder holding the
 # report of the other demo instrument (demo-instruments/grand-190 and upright-131 take turns) and kills
@@ -23,7 +24,7 @@
 # Exit status 0 when no try failed.
 set -u
 cd "$(dirname "$0")/../../.." || exit 2
-jar=target/scalewright.jar
+jar=${SCALEWRIGHT_JAR:-target/scalewright.jar}
 [ -f "$jar" ] || { echo "build the jar first: mvn -q -DskipTests package" >&2; exit 2; }
 tries=${1:-100}
 opts=${JAVA_OPTS:--XX:TieredStopAtLevel=1 -XX:+UseSerialGC}
@@ -77,7 +78,9 @@ cur=B
 old=0 new=0 aside=0 mixed=0 finished=0 killed_with_temps=0 left_after_finish=0 write_phase=0
 for ((i = 1; i <= tries; i++)); do
   if [ "$cur" = A ]; then next=B sheet=$B; else next=A sheet=$A; fi
-  report "$sheet" "$out" & pid=$!
+  # java itself in the background (not a function in a subshell), so that $! is the process killed
+  # shellcheck disable=SC2086
+  java $opts -jar "$jar" report "$sheet" --out "$out" >/dev/null 2>"$work/err" & pid=$!
   if (( RANDOM % 2 )); then
     pause_ms "$(rand_ms $(( full * 11 / 10 )))"
   else
@@ -87,6 +90,7 @@ for ((i = 1; i <= tries; i++)); do
   fi
   kill -9 "$pid" 2>/dev/null
   wait "$pid" 2>/dev/null; rc=$?
+  if kill -0 "$pid" 2>/dev/null; then echo "try $i: process $pid still runs after kill -9" >&2; exit 1; fi
   s=$(state); t=$(temps)
   [ "$rc" = 0 ] && finished=$((finished + 1))
   if [ "$s" = "$next" ]; then new=$((new + 1)); cur=$next
