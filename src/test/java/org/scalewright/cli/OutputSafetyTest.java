@@ -83,7 +83,7 @@ class OutputSafetyTest {
     }
 
     @Test
-    @DisplayName("--out onto a read-only file, a link or a pipe: refused, nothing replaced, exit 2")
+    @DisplayName("--out onto a read-only file, a link, a device or a pipe: refused, nothing replaced, exit 2")
     void outOntoWhatMustNotBeReplaced() throws Exception {
         Path sheet = copy(GRAND, "my.csv");
         Path ro = copy(UPRIGHT, "ro.csv");
@@ -103,6 +103,11 @@ class OutputSafetyTest {
         Path report = Files.createSymbolicLink(dir.resolve("report-link"), Files.createDirectory(dir.resolve("r")));
         refused(run("report", sheet, "--out", report), "symbolic link");
         assertEquals(List.of("link.csv", "my.csv", "other.csv", "r", "report-link", "ro.csv"), names());
+        Path device = Path.of("/dev/null");
+        if (Files.exists(device)) {
+            refused(run("analyze", sheet, "--out", device), "it is a device");
+            assertFalse(Files.isRegularFile(device));
+        }
         Path fifo = Fifos.make(dir.resolve("pipe.csv"));
         refused(run("analyze", sheet, "--out", fifo), "named pipe");
         refused(run("plan-wound", sheet, "--keys", "1-12", "--out", fifo), "named pipe");
