@@ -11,7 +11,7 @@
 # Each try runs `java -jar target/scalewright.jar report OTHER.csv --out DIR` over a folder holding the
 # report of the other demo instrument (demo-instruments/grand-190 and upright-131 take turns) and kills
 # it: in about half of the tries after a delay drawn uniformly over a whole run, in the others at a
-# random moment up to 400 ms after the new folder appears beside DIR (the write and swap phase).
+# random moment up to 120 ms after the new folder appears beside DIR (the write and swap phase).
 # The folder is then compared with reference reports of both instruments made first: every file
 # byte for byte, except report.pdf (which carries its creation time) by its size. Outcomes:
 #   old      wholly the report that was there before
@@ -86,7 +86,7 @@ for ((i = 1; i <= tries; i++)); do
   else
     write_phase=$((write_phase + 1))
     while kill -0 "$pid" 2>/dev/null && ! compgen -G "$parent/.scalewright-new-*" >/dev/null; do sleep 0.002; done
-    pause_ms "$(rand_ms 400)"
+    pause_ms "$(rand_ms 120)"
   fi
   kill -9 "$pid" 2>/dev/null
   wait "$pid" 2>/dev/null; rc=$?

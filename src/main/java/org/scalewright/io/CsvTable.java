@@ -11,7 +11,8 @@ import java.util.Locale;
 /**
  * A CSV file split into its comment lines, its header and its data rows, each row keeping its
  * line number. Lines whose first non-blank character is {@code #} are comments (a comment written
- * as {@code #,"quoted text"} is read as its text, {@link CommentLines}); blank lines are skipped. Quoted cells may hold commas and quotes (OpenCSV's parser).
+ * as {@code #,"quoted text"} is read as its text, {@link CommentLines}); blank lines are skipped.
+ * Quoted cells may hold commas and quotes (OpenCSV's parser).
  *
  * @param file     the file read
  * @param comments the text of the comment lines before the header, without the {@code #}
