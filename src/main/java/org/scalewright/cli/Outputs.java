@@ -3,20 +3,29 @@ package org.scalewright.cli;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import org.scalewright.io.AtomicFiles;
 import org.scalewright.io.CsvReportWriter;
+import org.scalewright.io.OutputRefused;
 import org.scalewright.io.ScaleSheetWriter;
 import org.scalewright.model.Scale;
 
-/** Writes command output files, turning a file-system failure into a one-line user error. */
+/**
+ * Writes command output files, turning a file-system failure into a one-line user error. A file
+ * replaced by {@code --out} is kept as {@code NAME.bak}; a symbolic link, a named pipe, a device or a
+ * read-only file is refused (io.AtomicFiles), and an input of the command is refused before
+ * anything is computed ({@link OutputChecks}).
+ */
 public final class Outputs {
     private Outputs() {
     }
 
-    /** Writes a results CSV atomically. */
+    /** Writes a results CSV atomically, keeping a file it replaces as {@code NAME.bak}. */
     public static void csv(Path file, List<String> comments, List<String> header, List<List<String>> rows) {
         checkTarget(file);
         try {
-            CsvReportWriter.write(file, comments, header, rows);
+            CsvReportWriter.write(file, comments, header, rows, true);
+        } catch (OutputRefused e) {
+            throw refused(file, e);
         } catch (IOException e) {
             throw new UserError("cannot write " + file + ": " + describe(e));
         }
@@ -44,26 +53,31 @@ public final class Outputs {
         }
     }
 
-    /** Writes a scale sheet atomically, keeping the input's units. */
+    /** Writes a scale sheet atomically, keeping the input's units and a file it replaces as {@code NAME.bak}. */
     public static void sheet(Path file, Scale scale) {
         checkTarget(file);
         try {
-            ScaleSheetWriter.write(scale, file, false);
+            ScaleSheetWriter.write(scale, file, true);
+        } catch (OutputRefused e) {
+            throw refused(file, e);
         } catch (IOException e) {
             throw new UserError("cannot write " + file + ": " + describe(e));
         }
     }
 
-    /** A missing folder or a folder in the way is said plainly (not as the temporary file's error). */
-    private static void checkTarget(Path file) {
-        Path abs = file.toAbsolutePath();
-        if (java.nio.file.Files.isDirectory(abs)) {
-            throw new UserError("cannot write " + file + ": it is a folder; give a file name");
+    /**
+     * A missing folder, a folder in the way, a link, a pipe, a device or a read-only file is said
+     * plainly (not as the temporary file's error).
+     */
+    static void checkTarget(Path file) {
+        String problem = AtomicFiles.problemWithFile(file);
+        if (problem != null) {
+            throw new UserError("cannot write " + file + ": " + problem);
         }
-        Path dir = abs.getParent();
-        if (dir == null || !java.nio.file.Files.isDirectory(dir)) {
-            throw new UserError("cannot write " + file + ": the folder " + dir + " does not exist");
-        }
+    }
+
+    private static UserError refused(Path file, OutputRefused e) {
+        return new UserError("cannot write " + file + ": " + e.getMessage());
     }
 
     static String describe(IOException e) {

@@ -11,6 +11,7 @@ import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchPoint;
+import org.scalewright.io.OutputRefused;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Scale;
@@ -40,7 +41,8 @@ public final class ReportCommand implements Callable<Integer> {
     Inputs inputs;
 
     @Option(names = "--out", paramLabel = "DIR", required = true,
-            description = "directory to write the report into (created if missing; files in it replaced)")
+            description = "directory to write the report into: created if missing, replaced as a whole if it "
+                    + "holds an earlier report (it may hold nothing else)")
     Path out;
 
     @Option(names = "--reference", paramLabel = "OTHER.csv",
@@ -98,6 +100,8 @@ public final class ReportCommand implements Callable<Integer> {
         List<Path> written;
         try {
             written = files.writeTo(out);
+        } catch (OutputRefused e) {
+            throw new UserError("--out: cannot write the report into " + out + ": " + e.getMessage());
         } catch (IOException e) {
             throw new UserError("cannot write the report into " + out + ": " + Outputs.describe(e));
         }

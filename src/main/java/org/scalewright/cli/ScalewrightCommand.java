@@ -43,7 +43,11 @@ public final class ScalewrightCommand implements Runnable {
      *
      * @param log the file an internal error's stack trace is appended to
      */
-    static int run(CommandLine cl, String[] args, PrintWriter out, PrintWriter err, java.nio.file.Path log) {
+    static int run(CommandLine cl, String[] args, PrintWriter terminalOut, PrintWriter terminalErr,
+                   java.nio.file.Path log) {
+        // control characters in a sheet's text never reach the terminal raw
+        PrintWriter out = TerminalText.printer(terminalOut);
+        PrintWriter err = TerminalText.printer(terminalErr);
         cl.setOut(out);
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
@@ -53,6 +57,16 @@ public final class ScalewrightCommand implements Runnable {
             return ExitStatus.BAD_INPUT;
         });
         cl.setExecutionExceptionHandler(new Failures(err, log));
+        cl.setExecutionStrategy(parsed -> {
+            try {
+                OutputChecks.check(parsed);
+            } catch (UserError e) {
+                err.println("error: " + e.getMessage());
+                err.flush();
+                return ExitStatus.BAD_INPUT;
+            }
+            return new CommandLine.RunLast().execute(parsed);
+        });
         if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
             err.println("error: unknown command '" + args[0] + "'; commands: "
                     + String.join(", ", cl.getSubcommands().keySet()));

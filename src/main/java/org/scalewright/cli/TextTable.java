@@ -4,7 +4,11 @@ import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
 
-/** A plain-text table with aligned columns for the terminal: text left, numbers right. */
+/**
+ * A plain-text table with aligned columns for the terminal: text left, numbers right. Each cell is one
+ * line without control characters ({@link TerminalText#cell}), so a title or remark cannot act on the
+ * terminal or break the columns.
+ */
 public final class TextTable {
     private final List<String> header;
     private final boolean[] rightAligned;
@@ -16,7 +20,7 @@ public final class TextTable {
         rightAligned = new boolean[columns.length];
         for (int i = 0; i < columns.length; i++) {
             rightAligned[i] = columns[i].startsWith(">");
-            header.add(rightAligned[i] ? columns[i].substring(1) : columns[i]);
+            header.add(TerminalText.cell(rightAligned[i] ? columns[i].substring(1) : columns[i]));
         }
     }
 
@@ -27,7 +31,7 @@ public final class TextTable {
         }
         List<String> r = new ArrayList<>(cells.length);
         for (Object c : cells) {
-            r.add(String.valueOf(c));
+            r.add(TerminalText.cell(String.valueOf(c)));
         }
         rows.add(r);
         return this;

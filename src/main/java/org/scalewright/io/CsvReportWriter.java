@@ -9,8 +9,9 @@ import java.nio.file.Path;
 import java.util.List;
 
 /**
- * Writes a table of results as CSV: a header row of column names, then the rows. Text cells are
- * made spreadsheet-safe ({@link CsvCells#safeText}); the file is written atomically.
+ * Writes a table of results as CSV: comment lines, a header row of column names, then the rows. Text
+ * cells are made spreadsheet-safe ({@link CsvCells#safeText}), comment lines too ({@link CommentLines});
+ * the file is written atomically.
  */
 public final class CsvReportWriter {
     private CsvReportWriter() {
@@ -24,14 +25,24 @@ public final class CsvReportWriter {
      */
     public static void write(Path file, List<String> comments, List<String> header, List<List<String>> rows)
             throws IOException {
-        AtomicFiles.write(file, toText(comments, header, rows).getBytes(StandardCharsets.UTF_8), false);
+        write(file, comments, header, rows, false);
+    }
+
+    /**
+     * As {@link #write(Path, List, List, List)}.
+     *
+     * @param keepBackup keep a file replaced as {@code NAME.bak}
+     */
+    public static void write(Path file, List<String> comments, List<String> header, List<List<String>> rows,
+                             boolean keepBackup) throws IOException {
+        AtomicFiles.write(file, toText(comments, header, rows).getBytes(StandardCharsets.UTF_8), keepBackup);
     }
 
     /** @return the CSV text */
     public static String toText(List<String> comments, List<String> header, List<List<String>> rows) {
         StringWriter out = new StringWriter();
         for (String c : comments) {
-            out.write("# " + c.replace('\n', ' ') + "\n");
+            out.write(CommentLines.line(c) + "\n");
         }
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.DEFAULT_QUOTE_CHARACTER,
                 ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n")) {

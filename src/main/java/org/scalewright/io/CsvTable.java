@@ -10,8 +10,9 @@ import java.util.Locale;
 
 /**
  * A CSV file split into its comment lines, its header and its data rows, each row keeping its
- * line number. Lines whose first non-blank character is {@code #} are comments; blank lines
- * are skipped. Quoted cells may hold commas and quotes (OpenCSV's parser).
+ * line number. Lines whose first non-blank character is {@code #} are comments (a comment written
+ * as {@code #,"quoted text"} is read as its text, {@link CommentLines}); blank lines are skipped.
+ * Quoted cells may hold commas and quotes (OpenCSV's parser).
  *
  * @param file     the file read
  * @param comments the text of the comment lines before the header, without the {@code #}
@@ -58,9 +59,10 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
             if (stripped.isEmpty()) {
                 continue;
             }
-            if (stripped.startsWith("#")) {
+            String comment = CommentLines.textOf(stripped);
+            if (comment != null) {
                 if (header == null) {
-                    comments.add(stripped.substring(1).strip());
+                    comments.add(comment);
                     commentLines.add(i + 1);
                 }
                 continue;

@@ -38,12 +38,13 @@ public final class ScaleSheetWriter {
     public static String toText(Scale scale) {
         SheetLayout layout = layoutFor(scale);
         StringWriter out = new StringWriter();
+        // title and comments are spreadsheet-safe single cells, as every CSV comment the program writes
         if (!scale.title().isEmpty()) {
-            out.write("# title: " + scale.title().replace('\n', ' ') + "\n");
+            out.write(CommentLines.line("title: " + scale.title()) + "\n");
         }
-        out.write("# a4_hz: " + exact(scale.pitch().a4()) + "\n");
+        out.write(CommentLines.line("a4_hz: " + exact(scale.pitch().a4())) + "\n");
         for (String c : layout.comments()) {
-            out.write("# " + c.replace('\n', ' ').replace('\r', ' ') + "\n");
+            out.write(CommentLines.line(c) + "\n");
         }
         // quoting and quote doubling are done by quoteWhereNeeded alone; the CSVWriter must not escape again
         try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.NO_QUOTE_CHARACTER,

@@ -1,7 +1,6 @@
 package org.scalewright.report;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -10,7 +9,7 @@ import org.scalewright.io.AtomicFiles;
 
 /**
  * The files of a report, held in memory until everything is computed, then written into one
- * directory, each file atomically.
+ * directory as a whole: the new folder is swapped in for the old one.
  */
 public final class ReportFiles {
     private final Map<String, byte[]> files = new LinkedHashMap<>();
@@ -41,41 +40,30 @@ public final class ReportFiles {
     }
 
     /**
-     * Checks that {@code dir} can take the files: it is a directory, or does not exist yet and its
-     * parent is one.
+     * Checks that {@code dir} can take a report before anything is computed: a folder that may be
+     * replaced, or a new name in an existing folder (io.AtomicFiles#problemWithFolder). What the
+     * folder holds is checked when the report is written.
      *
      * @return a problem in words, or null when the directory will do
      */
     public static String problemWith(Path dir) {
-        Path abs = dir.toAbsolutePath();
-        if (Files.exists(abs)) {
-            if (!Files.isDirectory(abs)) {
-                return abs + " is a file, not a directory";
-            }
-            if (!Files.isWritable(abs)) {
-                return "directory " + abs + " cannot be written to";
-            }
-            return null;
-        }
-        Path parent = abs.getParent();
-        if (parent == null || !Files.isDirectory(parent)) {
-            return "the parent directory of " + abs + " does not exist";
-        }
-        return null;
+        String problem = AtomicFiles.problemWithFolder(dir, null);
+        return problem == null ? null : dir.toAbsolutePath() + " cannot take the report: " + problem;
     }
 
     /**
-     * Creates {@code dir} if needed and writes every file into it atomically.
+     * Writes the report whole: into a new folder beside {@code dir}, which is then swapped in, so
+     * that {@code dir} holds the old report or the new one, never a mixture, and no temporary files
+     * are left ({@link AtomicFiles#writeFolder}). An existing {@code dir} may hold only files of a
+     * report, which the new one replaces.
      *
      * @return the paths written, in order
      */
     public List<Path> writeTo(Path dir) throws IOException {
-        Files.createDirectories(dir);
+        AtomicFiles.writeFolder(dir, files);
         List<Path> written = new java.util.ArrayList<>();
-        for (Map.Entry<String, byte[]> e : files.entrySet()) {
-            Path f = dir.resolve(e.getKey());
-            AtomicFiles.write(f, e.getValue(), false);
-            written.add(f);
+        for (String name : files.keySet()) {
+            written.add(dir.resolve(name));
         }
         return written;
     }

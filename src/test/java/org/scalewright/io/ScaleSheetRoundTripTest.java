@@ -72,7 +72,7 @@ class ScaleSheetRoundTripTest {
         Scale s = read(METRIC);
         String text = ScaleSheetWriter.toText(s);
         List<String> lines = text.lines().toList();
-        assertEquals("# title: Round trip, \"metric\" grand", lines.get(0));
+        assertEquals("#,\"title: Round trip, \"\"metric\"\" grand\"", lines.get(0), "a comment with a comma is one quoted cell");
         assertEquals("# a4_hz: 442", lines.get(1));
         assertEquals("key,strings,length_mm,wire,wire_mm,wrap1_mm,wrap2_mm,wrap_metal,pitch_hz,cents,strike_mm,"
                 + "total_mm,winding_mm,section,remark", lines.get(2));

@@ -217,7 +217,7 @@ public final class ExportViewModel {
             paths = files.writeTo(dir);
         } catch (IOException | RuntimeException e) {
             return failed("Report not written", "could not write into " + dir.toAbsolutePath() + ": " + why(e)
-                    + ". Each file is written whole or not at all; any written before the problem are complete.");
+                    + ". The report is swapped in as a whole folder, so the folder is as it was.");
         }
         List<Written> list = new ArrayList<>();
         long total = 0;

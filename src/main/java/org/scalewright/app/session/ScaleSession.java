@@ -221,7 +221,9 @@ public final class ScaleSession {
 
     /**
      * Writes the sheet atomically, keeping the previous file as {@code NAME.bak}; on failure
-     * the file on disk is unchanged and the session still points at its old file.
+     * the file on disk is unchanged and the session still points at its old file. A read-only
+     * file, a symbolic link, a named pipe or a device is refused ({@link org.scalewright.io.OutputRefused},
+     * whose message says why), so a save never loses what is on disk.
      */
     public void saveAs(Path target) throws IOException {
         ScaleSheetWriter.write(scale(), target, true);
