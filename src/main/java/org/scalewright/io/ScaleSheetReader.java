@@ -112,7 +112,7 @@ public final class ScaleSheetReader {
         List<String> freeComments = table.comments().stream()
                 .filter(c -> !isSetting(c, "title") && !isSetting(c, "a4_hz")).toList();
         return new Scale(title == null ? "" : title, pitch, notes, header.layout().withComments(freeComments)
-                .withDecimals(decimals));
+                .withDecimals(decimals).withLines(keyLines));
     }
 
     private static boolean isSetting(String comment, String name) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 
 /**
  * How a scale sheet was laid out: its columns in order and the unit of each length column,
@@ -15,15 +16,47 @@ import java.util.Map;
  *                 other than the {@code title:} and {@code a4_hz:} settings, written back as they were
  * @param decimals per number column, the fewest decimals any of its cells was typed with
  *                 ({@code 0.30, 1.25} → 2), so that written back the column keeps its look
+ * @param lines    per key, the line of the file it was read from (empty for a scale not read from a
+ *                 file), so that a problem found later in a note can name its place; where the rows
+ *                 stood is not part of what the layout means, so two layouts are equal without it
  */
 public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments,
-                          Map<SheetColumn, Integer> decimals) {
+                          Map<SheetColumn, Integer> decimals, Map<Integer, Integer> lines) {
 
     public SheetLayout {
         columns = List.copyOf(columns);
         units = Map.copyOf(units);
         comments = comments == null ? List.of() : List.copyOf(comments);
         decimals = decimals == null ? Map.of() : Map.copyOf(decimals);
+        lines = lines == null ? Map.of() : Map.copyOf(lines);
+    }
+
+    /** A layout that knows no lines. */
+    public SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit> units, List<String> comments,
+                       Map<SheetColumn, Integer> decimals) {
+        this(columns, units, comments, decimals, Map.of());
+    }
+
+    /** @return this layout with the line each key was read from */
+    public SheetLayout withLines(Map<Integer, Integer> newLines) {
+        return new SheetLayout(columns, units, comments, decimals, newLines);
+    }
+
+    /** @return {@code line N: } for a key read from line N of a sheet, else the empty string */
+    public String placeOf(int key) {
+        Integer line = lines.get(key);
+        return line == null ? "" : "line " + line + ": ";
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof SheetLayout l && columns.equals(l.columns) && units.equals(l.units)
+                && comments.equals(l.comments) && decimals.equals(l.decimals);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(columns, units, comments, decimals);
     }
 
     /** A layout whose number columns have no decimals to keep. */
@@ -38,12 +71,12 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
 
     /** @return this layout with other comment lines */
     public SheetLayout withComments(List<String> newComments) {
-        return new SheetLayout(columns, units, newComments, decimals);
+        return new SheetLayout(columns, units, newComments, decimals, lines);
     }
 
     /** @return this layout with the fewest decimals of each number column as read */
     public SheetLayout withDecimals(Map<SheetColumn, Integer> newDecimals) {
-        return new SheetLayout(columns, units, comments, newDecimals);
+        return new SheetLayout(columns, units, comments, newDecimals, lines);
     }
 
     /** @return the fewest decimals the column's cells were typed with, 0 when not known */
@@ -111,6 +144,6 @@ public record SheetLayout(List<SheetColumn> columns, Map<SheetColumn, LengthUnit
         if (column.isLength()) {
             u.put(column, unitOf(column));
         }
-        return new SheetLayout(cols, u, comments, decimals);
+        return new SheetLayout(cols, u, comments, decimals, lines);
     }
 }

@@ -45,7 +45,8 @@ public record ScaleAnalysis(Scale scale, AnalysisSettings settings, List<NoteRes
         List<String> out = new ArrayList<>();
         for (NoteResult r : notes) {
             if (range.contains(r.key()) && !NoteCalculator.isPossible(r)) {
-                scale.note(r.key()).ifPresent(n -> out.add(NoteCalculator.impossibility(n, r)));
+                scale.note(r.key()).ifPresent(n -> out.add(scale.layout().placeOf(n.key())
+                        + NoteCalculator.impossibility(n, r)));
             }
         }
         return out;

@@ -77,7 +77,7 @@ class BoundsCommandTest {
     }
 
     @Test
-    @DisplayName("a note with no positive tension: shown and flagged by analyze; diagnose and plan-plain refuse it by key")
+    @DisplayName("a note with no positive tension: shown and flagged by analyze; diagnose and plan-plain refuse it by line and key")
     void noPositiveTension() throws IOException {
         Path sheet = file("short.csv", NO_TENSION);
         Run a = run("analyze", sheet.toString());
@@ -86,10 +86,10 @@ class BoundsCommandTest {
         String named = "key 1 (A0): no positive tension: a 2.500 mm wire is too stiff for a speaking length of "
                 + "60.0 mm at 27.50 Hz";
         Run d = run("diagnose", sheet.toString(), "--keys", "1-9", "--out", dir.resolve("out.csv").toString());
-        refused(d, named);
+        refused(d, "line 2: " + named); // the sheet line where key 1 stands
         assertTrue(d.err().contains("error: keys 1-9 are not diagnosed"), d.err());
         Run p = run("plan-plain", sheet.toString(), "--keys", "A0-F1", "--out", dir.resolve("out.csv").toString());
-        refused(p, named);
+        refused(p, "line 2: " + named);
         assertTrue(p.err().contains("error: keys 1-9 are not planned"), p.err());
         assertFalse(p.err().contains("stress must be"), p.err());
     }

@@ -69,7 +69,7 @@ public final class SectionDiagnosis {
             if (NoteCalculator.isPossible(r)) {
                 possible.add(n);
             } else if (request.range().contains(n.key())) {
-                impossible.add(NoteCalculator.impossibility(n, r));
+                impossible.add(request.scale().layout().placeOf(n.key()) + NoteCalculator.impossibility(n, r));
             }
         }
         if (!impossible.isEmpty()) {
