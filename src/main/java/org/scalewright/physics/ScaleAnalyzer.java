@@ -30,7 +30,7 @@ public final class ScaleAnalyzer {
         double total = 0;
         for (NoteResult r : results) {
             allFlags.addAll(r.flags());
-            total += r.noteTension();
+            total += load(r);
         }
         return new ScaleAnalysis(scale, settings, List.of(results), sections(results), total, allFlags);
     }
@@ -68,6 +68,15 @@ public final class ScaleAnalyzer {
                 r.impedance(), r.elongation(), r.band(), flags);
     }
 
+    /**
+     * @return the tension a note puts on the plate, N: its strings' tension, or nothing for a note
+     *         with no positive tension (impossible as specified; it is flagged, and a negative figure
+     *         would only hide the others in a total)
+     */
+    private static double load(NoteResult r) {
+        return NoteCalculator.isPossible(r) ? r.noteTension() : 0;
+    }
+
     private static List<SectionTotal> sections(NoteResult[] results) {
         List<SectionTotal> out = new ArrayList<>();
         int start = 0;
@@ -76,7 +85,7 @@ public final class ScaleAnalyzer {
                 double t = 0;
                 int strings = 0;
                 for (int j = start; j < i; j++) {
-                    t += results[j].noteTension();
+                    t += load(results[j]);
                     strings += results[j].strings();
                 }
                 out.add(new SectionTotal(results[start].section(), results[start].key(), results[i - 1].key(),

@@ -8,7 +8,7 @@ package org.scalewright.physics;
  * @param lastKey  highest key of the section
  * @param notes    number of notes
  * @param strings  number of strings
- * @param tension  sum of strings × tension per string, N
+ * @param tension  sum of strings × tension per string, N (a note with no positive tension adds nothing)
  */
 public record SectionTotal(String section, int firstKey, int lastKey, int notes, int strings, double tension) {
 }

@@ -83,6 +83,8 @@ class BoundsCommandTest {
         Run a = run("analyze", sheet.toString());
         assertEquals(ExitStatus.OK, a.status(), a.err());
         assertTrue(a.out().contains("no positive tension"), a.out());
+        assertTrue(a.out().contains("Whole instrument: 0.8 kN"), "the impossible note (-1051 N) adds nothing to "
+                + "the total of the eight others (about 0.1 kN each), which it would turn negative: " + a.out());
         String named = "key 1 (A0): no positive tension: a 2.500 mm wire is too stiff for a speaking length of "
                 + "60.0 mm at 27.50 Hz";
         Run d = run("diagnose", sheet.toString(), "--keys", "1-9", "--out", dir.resolve("out.csv").toString());
