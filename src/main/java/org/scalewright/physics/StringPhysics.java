@@ -126,8 +126,43 @@ public final class StringPhysics {
                     "bare core at the front and back together must be <= the speaking length %s mm, was %s mm",
                     Checks.format(length * 1e3), Checks.format((bareFront + bareBack) * 1e3)));
         }
-        double weight = (2.0 / length) * (sinSquaredIntegral(bareFront, length) + sinSquaredIntegral(bareBack, length));
+        double weight = bareEndsWeight(length, bareFront, bareBack);
         return muWound - (muWound - muCore) * weight;
+    }
+
+    /**
+     * The wound part's mass per length that gives a wanted effective one: the inverse of
+     * {@link #effectiveMassPerLength}, μ_w = (μ_eff − μ_core · w) / (1 − w) with
+     * w = (2/L) · Σ_{x∈{a,b}} [x/2 − L/(4π) · sin(2πx/L)], so that a wound-string designer plans the
+     * winding of a string with bare ends to tune where the analysis says it does.
+     *
+     * @param muEffective the effective mass per length wanted, kg/m, &gt; 0
+     * @param muCore      mass per length of the bare core, kg/m, &gt; 0
+     * @param length      speaking length L, m, &gt; 0
+     * @param bareFront   bare core inside the speaking length at the front end, m, &ge; 0
+     * @param bareBack    bare core inside the speaking length at the back end, m, &ge; 0; together &lt; L
+     * @return μ_w, kg/m (below μ_core when the wanted μ_eff is lighter than the bare core can give)
+     * @throws IllegalArgumentException naming the parameter and its value when one is out of range
+     */
+    public static double woundMassForEffective(double muEffective, double muCore, double length,
+                                               double bareFront, double bareBack) {
+        Checks.positive("effective mass per length", muEffective, "g/m", 1e3);
+        Checks.positive("core mass per length", muCore, "g/m", 1e3);
+        Checks.positive("speaking length", length, "mm", 1e3);
+        Checks.nonNegative("bare core at the front", bareFront, "mm", 1e3);
+        Checks.nonNegative("bare core at the back", bareBack, "mm", 1e3);
+        if (bareFront + bareBack >= length) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT,
+                    "bare core at the front and back together must be < the speaking length %s mm, was %s mm",
+                    Checks.format(length * 1e3), Checks.format((bareFront + bareBack) * 1e3)));
+        }
+        double weight = bareEndsWeight(length, bareFront, bareBack);
+        return (muEffective - muCore * weight) / (1 - weight);
+    }
+
+    /** @return w = (2/L) · Σ_{x∈{a,b}} ∫₀ˣ sin²(π s/L) ds, the share of the fundamental's weight in the bare ends */
+    private static double bareEndsWeight(double length, double bareFront, double bareBack) {
+        return (2.0 / length) * (sinSquaredIntegral(bareFront, length) + sinSquaredIntegral(bareBack, length));
     }
 
     /** @return ∫₀ˣ sin²(π s/L) ds = x/2 − L/(4π) sin(2πx/L), m */

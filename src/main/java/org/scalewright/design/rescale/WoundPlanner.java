@@ -446,6 +446,21 @@ public final class WoundPlanner {
         }
 
         /**
+         * @param muEffective the mass per length that tunes the note to its target, kg/m
+         * @return the wound part's mass per length that gives it, the note's bare core ends (kept
+         *         from the present string) counted as the analysis counts them
+         */
+        double woundPartMass(Note n0, double core, double muEffective) {
+            Note.BareEnds bare = n0.bareEnds();
+            if (!bare.any()) {
+                return muEffective;
+            }
+            return StringPhysics.woundMassForEffective(muEffective,
+                    StringPhysics.plainMassPerLength(core, materials.steelDensity()), n0.speakingLength(),
+                    bare.front(), bare.back());
+        }
+
+        /**
          * Adds key k's listed-wire wraps on the given core to {@code ns}/{@code rs}.
          *
          * @return why none can be made, or null
@@ -455,7 +470,7 @@ public final class WoundPlanner {
             double d = core.diameter();
             double f = Pitch.working(n0, present.scale().pitch());
             double kk = stiffness(k, d);
-            double mu = WrapSolver.neededMassPerLength(t, n0.speakingLength(), f, kk);
+            double mu = woundPartMass(n0, d, WrapSolver.neededMassPerLength(t, n0.speakingLength(), f, kk));
             WindingRule rule = rule(n0.wrap(), d, mu);
             Optional<Wrap> exact = WrapSolver.exact(d, mu, rule, n0.wrap().metal(), materials);
             if (exact.isEmpty()) {

@@ -29,6 +29,28 @@ class WoundPlannerTest {
     }
 
     @Test
+    void stringsWithBareCoreEndsAreWoundToMeetTheirTargetAsTheAnalysisCountsThem() {
+        // half of each wound string bare (a quarter at each end): the bare ends lower the tension
+        // that tunes the string by 7-17 % (DESIGN §3, Rayleigh's principle); a plan that ignored them
+        // would miss its target by that much
+        for (long seed = 1; seed <= 3; seed++) {
+            Scale half = TestScales.random(seed).withNotes(TestScales.random(seed).notes().stream()
+                    .map(n -> n.isWound() ? new Note(n.key(), n.strings(), n.speakingLength(), n.wire(), n.wrap(),
+                            n.pitchHz(), n.cents(), n.strikePoint(), n.stretchedLength(),
+                            OptionalDouble.of(n.speakingLength() / 2), n.section(), n.remark()) : n)
+                    .toList());
+            ScaleAnalysis present = ScaleAnalyzer.analyze(half, SETTINGS);
+            TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
+            Proposal p = WoundPlanner.plan(present, ALL, target, fine());
+            assertTrue(p.changes().size() > 5);
+            for (KeyChange c : p.changes()) {
+                assertEquals(0, c.deviationPct(), 0.5, "key " + c.key() + " with half its length bare");
+                assertEquals(c.before().woundLength(), c.after().woundLength(), "winding length kept");
+            }
+        }
+    }
+
+    @Test
     void withFineWrapWireEveryStringMeetsItsTarget() {
         for (long seed = 1; seed <= 6; seed++) {
             ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(seed), SETTINGS);
