@@ -186,28 +186,61 @@ public final class PdfReportWriter {
             p.paragraph("The scale has no wound strings.");
             return;
         }
-        p.paragraph("One row per string design; make each as many times as its count (the strings of its note): "
-                + r.woundOrder().totalStrings() + " wound strings on " + r.woundOrder().rows().size() + " notes. "
+        p.paragraph("One row per string design, identical strings of several notes on one row; make each as many "
+                + "times as its count: " + r.woundOrder().totalStrings() + " wound strings on " + r.woundOrder().notes()
+                + " notes in " + r.woundOrder().rows().size() + " designs. "
                 + (imp ? "Inches, with millimetres in brackets." : "Millimetres.")
-                + " Stretched length: hitch pin to tuning pin. Tension per string at the working pitch.");
-        String du = imp ? "in (mm)" : "mm";
+                + " Core with its music-wire size; OD = outside diameter over the winding.");
+        // the cells are the CSV's own, so the page and wound-order.csv print the same figures
+        CsvSheet sheet = WoundOrderCsv.sheet(r.woundOrder(), r.units(), List.of());
+        List<String> h = sheet.header();
+        List<String> lengths = List.of("od", "speaking_length", "wound_length", "bare_front", "bare_back",
+                "winding_start_from_hitch", "stretched_length");
         List<List<String>> rows = new ArrayList<>();
-        for (WoundOrderRow w : r.woundOrder().rows()) {
-            rows.add(List.of(Integer.toString(w.key()), w.noteName(), NumberText.fixed(w.frequency(), 2),
-                    Integer.toString(w.count()), diameter(w.coreDiameter(), imp), diameter(w.wrapInner(), imp),
-                    w.doubleWound() ? diameter(w.wrapOuter(), imp) : "", w.metal().sheetName(),
-                    w.stretchedLength().isPresent() ? lengthBoth(w.stretchedLength().getAsDouble(), imp) : "",
-                    w.woundLength().isPresent() ? lengthBoth(w.woundLength().getAsDouble(), imp) : "",
-                    imp ? NumberText.fixed(UnitConversions.newtonsToLbf(w.tension()), 1) + " (" + NumberText.fixed(w.tension(), 0) + ")"
-                            : NumberText.fixed(w.tension(), 0)));
+        for (List<String> row : sheet.rows()) {
+            List<String> c = new ArrayList<>();
+            c.add(row.get(h.indexOf("keys")));
+            c.add(row.get(h.indexOf("notes")));
+            c.add(row.get(h.indexOf("count")));
+            String size = row.get(h.indexOf("core_size"));
+            c.add(both(row, h, "core", imp) + (size.isEmpty() ? "" : " #" + size));
+            c.add(both(row, h, "wrap1", imp));
+            c.add(both(row, h, "wrap2", imp));
+            c.add(row.get(h.indexOf("wrap_metal")));
+            for (String q : lengths) {
+                c.add(both(row, h, q, imp));
+            }
+            c.add(row.get(h.indexOf("bare_ends")));
+            rows.add(c);
         }
-        rows.add(List.of("", "total", "", Integer.toString(r.woundOrder().totalStrings()), "", "", "", "", "", "",
-                ""));
-        p.table(new PdfTable(List.of(Column.number("key"), Column.text("note"), Column.number("pitch Hz"),
-                Column.number("count"), Column.number("core " + du), Column.number("wrap 1 " + du),
-                Column.number("wrap 2 " + du), Column.text("metal"), Column.number("stretched length " + du),
-                Column.number("wound length " + du), Column.number("tension " + (imp ? "lbf (N)" : "N"))),
-                rows, Set.of(rows.size() - 1)));
+        rows.add(List.of("", "total", Integer.toString(r.woundOrder().totalStrings()), "", "", "", "", "", "", "", "",
+                "", "", "", ""));
+        p.table(new PdfTable(List.of(Column.wrapping("keys"), Column.wrapping("notes"), Column.number("count"),
+                Column.number("core"), Column.number("wrap 1"), Column.number("wrap 2"), Column.text("metal"),
+                Column.number("OD"), Column.number("speaking length"), Column.number("wound length"),
+                Column.number("bare front"), Column.number("bare back"),
+                Column.number("winding starts from hitch"), Column.number("stretched length"),
+                Column.text("bare ends")), rows, Set.of(rows.size() - 1)));
+        for (String line : WoundOrderCsv.notes(imp)) {
+            p.paragraph(line.substring(0, 1).toUpperCase(java.util.Locale.ROOT) + line.substring(1) + ".", 8, true, 0);
+        }
+    }
+
+    /**
+     * @return the cell of quantity {@code q}: mm with all its printed decimals (3 for a diameter, 1 for
+     *         a length), or inches with that in brackets
+     */
+    private static String both(List<String> row, List<String> h, String q, boolean imp) {
+        String cell = row.get(h.indexOf(q + "_mm"));
+        if (cell.isEmpty()) {
+            return cell;
+        }
+        boolean diameter = List.of("core", "wrap1", "wrap2", "od").contains(q);
+        String mm = NumberText.fixed(Double.parseDouble(cell), diameter ? 3 : 1);
+        if (!imp) {
+            return mm;
+        }
+        return row.get(h.indexOf(q + "_in")) + " (" + mm + ")";
     }
 
     private static void wireOrder(PdfPages p, ReportDocument r) throws IOException {

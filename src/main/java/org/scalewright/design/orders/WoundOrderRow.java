@@ -1,39 +1,77 @@
 package org.scalewright.design.orders;
 
+import java.util.List;
 import java.util.OptionalDouble;
 import org.scalewright.model.WrapMetal;
 
 /**
- * One wound string to be made, {@code count} times (once per string of its note). SI throughout.
+ * One wound-string design to be made {@code count} times: the strings of one note, or of several
+ * notes whose strings are identical to the precision printed (same core, wraps, metal and
+ * lengths). SI throughout.
  *
- * @param key             key number
- * @param noteName        note name, sharps
- * @param section         section label ("" when none)
- * @param frequency       working pitch, Hz
- * @param count           how many of this string to make: the note's strings per note
- * @param coreDiameter    core diameter, m
- * @param coreSize        the core's music-wire size number, when the sheet gave one
- * @param wrapInner       first (inner) wrap wire diameter, m
- * @param wrapOuter       second (outer) wrap wire diameter, m; 0 for a single-wound string
- * @param metal           wrap metal
- * @param stretchedLength stretched length hitch pin to tuning pin, m, where the sheet gives it
- * @param woundLength     wound length, m, where the sheet gives it
- * @param speakingLength  speaking length, m
- * @param tension         tension per string at the working pitch, N
- * @param massPerLength   μ of the wound string, kg/m
+ * @param keys             the keys strung with it, bass to treble
+ * @param noteNames        their note names, sharps, in the same order
+ * @param count            how many of this string to make: the strings per note summed over the keys
+ * @param coreDiameter     core diameter, m
+ * @param coreSize         the core's music-wire size number, when the sheet gave one
+ * @param wrapInner        first (inner) wrap wire diameter, m
+ * @param wrapOuter        second (outer) wrap wire diameter, m; 0 for a single-wound string
+ * @param metal            wrap metal
+ * @param outsideDiameter  outside diameter over the winding, m: as the sheet gave it, else core + 2 w1 + 2 w2
+ * @param speakingLength   speaking length, m
+ * @param woundLength      wound length inside the speaking length, m: given, or the speaking length less
+ *                         the bare ends
+ * @param bareFront        bare core at the front (tuning-pin) end inside the speaking length, m
+ * @param bareBack         bare core at the back (bridge, hitch-pin) end inside the speaking length, m
+ * @param bareEnds         how the bare ends were found
+ * @param stretchedLength  stretched length hitch pin to tuning pin, m, where the sheet gives it
+ * @param windingStart     where the winding starts measured from the hitch pin, m: back length + bare
+ *                         back, where the stretched length is known (see {@link WoundOrder#windingStart})
  */
-public record WoundOrderRow(int key, String noteName, String section, double frequency, int count,
+public record WoundOrderRow(List<Integer> keys, List<String> noteNames, int count,
                             double coreDiameter, OptionalDouble coreSize, double wrapInner, double wrapOuter,
-                            WrapMetal metal, OptionalDouble stretchedLength, OptionalDouble woundLength,
-                            double speakingLength, double tension, double massPerLength) {
+                            WrapMetal metal, double outsideDiameter, double speakingLength, double woundLength,
+                            double bareFront, double bareBack, BareEndsFrom bareEnds,
+                            OptionalDouble stretchedLength, OptionalDouble windingStart) {
+
+    /** Where a row's bare ends come from. */
+    public enum BareEndsFrom {
+        /** both given by the sheet, or one given and the other what the winding leaves */
+        GIVEN("given"),
+        /** only the wound length given: the bare core split equally between the two ends */
+        SPLIT("split equally"),
+        /** neither wound length nor bare ends given: the winding fills the speaking length */
+        NONE("none given");
+
+        private final String word;
+
+        BareEndsFrom(String word) {
+            this.word = word;
+        }
+
+        /** @return the word written in the order */
+        public String word() {
+            return word;
+        }
+    }
 
     public WoundOrderRow {
+        keys = List.copyOf(keys);
+        noteNames = List.copyOf(noteNames);
         coreSize = coreSize == null ? OptionalDouble.empty() : coreSize;
         stretchedLength = stretchedLength == null ? OptionalDouble.empty() : stretchedLength;
-        woundLength = woundLength == null ? OptionalDouble.empty() : woundLength;
-        if (count < 1) {
-            throw new IllegalArgumentException("count of strings to make must be >= 1, was " + count);
+        windingStart = windingStart == null ? OptionalDouble.empty() : windingStart;
+        if (keys.isEmpty() || keys.size() != noteNames.size()) {
+            throw new IllegalArgumentException("a wound-order row needs one note name per key, keys " + keys);
         }
+        if (count < keys.size()) {
+            throw new IllegalArgumentException("count of strings to make must be at least one per key, was " + count);
+        }
+    }
+
+    /** @return the first (lowest) key of the row */
+    public int key() {
+        return keys.get(0);
     }
 
     /** @return true for a double-wound string */
