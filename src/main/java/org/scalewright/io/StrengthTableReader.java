@@ -1,8 +1,5 @@
 package org.scalewright.io;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -32,17 +29,7 @@ public final class StrengthTableReader {
 
     /** Reads a table bundled as a class-path resource; a broken bundled table is an internal error. */
     static StrengthTable readResource(String resource) {
-        try (InputStream in = StrengthTableReader.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new IllegalStateException("missing built-in table " + resource);
-            }
-            Path name = Path.of(resource.substring(resource.lastIndexOf('/') + 1));
-            return parse(name, CsvTable.parse(name, TextFile.lines(name, in.readAllBytes()), CsvTable.RowLimit.TABLE));
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        } catch (BadInputException e) {
-            throw new IllegalStateException("built-in table " + resource + " is broken: " + e.getMessage(), e);
-        }
+        return BundledTable.read(resource, StrengthTableReader::parse);
     }
 
     private static StrengthTable parse(Path file, CsvTable t) throws BadInputException {

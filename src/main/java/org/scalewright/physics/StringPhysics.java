@@ -117,16 +117,7 @@ public final class StringPhysics {
     public static double effectiveMassPerLength(double muWound, double muCore, double length,
                                                 double bareFront, double bareBack) {
         Checks.positive("wound mass per length", muWound, "g/m", 1e3);
-        Checks.positive("core mass per length", muCore, "g/m", 1e3);
-        Checks.positive("speaking length", length, "mm", 1e3);
-        Checks.nonNegative("bare core at the front", bareFront, "mm", 1e3);
-        Checks.nonNegative("bare core at the back", bareBack, "mm", 1e3);
-        if (bareFront + bareBack > length) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "bare core at the front and back together must be <= the speaking length %s mm, was %s mm",
-                    Checks.format(length * 1e3), Checks.format((bareFront + bareBack) * 1e3)));
-        }
-        double weight = bareEndsWeight(length, bareFront, bareBack);
+        double weight = bareEndsWeight(muCore, length, bareFront, bareBack, false);
         return muWound - (muWound - muCore) * weight;
     }
 
@@ -147,21 +138,28 @@ public final class StringPhysics {
     public static double woundMassForEffective(double muEffective, double muCore, double length,
                                                double bareFront, double bareBack) {
         Checks.positive("effective mass per length", muEffective, "g/m", 1e3);
+        double weight = bareEndsWeight(muCore, length, bareFront, bareBack, true);
+        return (muEffective - muCore * weight) / (1 - weight);
+    }
+
+    /**
+     * Checks the bare-ends arguments shared by {@link #effectiveMassPerLength} and its inverse.
+     *
+     * @param someWound true when some winding must remain (front + back &lt; L), else front + back &le; L
+     * @return w = (2/L) · Σ_{x∈{a,b}} ∫₀ˣ sin²(π s/L) ds, the share of the fundamental's weight in the bare ends
+     */
+    private static double bareEndsWeight(double muCore, double length, double bareFront, double bareBack,
+                                         boolean someWound) {
         Checks.positive("core mass per length", muCore, "g/m", 1e3);
         Checks.positive("speaking length", length, "mm", 1e3);
         Checks.nonNegative("bare core at the front", bareFront, "mm", 1e3);
         Checks.nonNegative("bare core at the back", bareBack, "mm", 1e3);
-        if (bareFront + bareBack >= length) {
+        double bare = bareFront + bareBack;
+        if (someWound ? bare >= length : bare > length) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "bare core at the front and back together must be < the speaking length %s mm, was %s mm",
-                    Checks.format(length * 1e3), Checks.format((bareFront + bareBack) * 1e3)));
+                    "bare core at the front and back together must be %s the speaking length %s mm, was %s mm",
+                    someWound ? "<" : "<=", Checks.format(length * 1e3), Checks.format(bare * 1e3)));
         }
-        double weight = bareEndsWeight(length, bareFront, bareBack);
-        return (muEffective - muCore * weight) / (1 - weight);
-    }
-
-    /** @return w = (2/L) · Σ_{x∈{a,b}} ∫₀ˣ sin²(π s/L) ds, the share of the fundamental's weight in the bare ends */
-    private static double bareEndsWeight(double length, double bareFront, double bareBack) {
         return (2.0 / length) * (sinSquaredIntegral(bareFront, length) + sinSquaredIntegral(bareBack, length));
     }
 
