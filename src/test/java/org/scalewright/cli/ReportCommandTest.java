@@ -145,6 +145,31 @@ class ReportCommandTest {
     }
 
     @Test
+    void thePaperIsChosenApartFromTheUnits() throws Exception {
+        Path letter = tmp.resolve("letter");
+        Run r = run("report", GRAND.toString(), "--out", letter.toString(), "--paper", "Letter");
+        assertEquals(0, r.status(), r.err());
+        Path a4 = tmp.resolve("a4");
+        r = run("report", GRAND.toString(), "--out", a4.toString(), "--units", "imperial", "--paper", "a4");
+        assertEquals(0, r.status(), r.err());
+        try (PDDocument metricOnLetter = Loader.loadPDF(letter.resolve("report.pdf").toFile());
+             PDDocument imperialOnA4 = Loader.loadPDF(a4.resolve("report.pdf").toFile())) {
+            for (int p = 0; p < metricOnLetter.getNumberOfPages(); p++) {
+                assertEquals(PDRectangle.LETTER.getHeight(), metricOnLetter.getPage(p).getMediaBox().getHeight(), 0.01);
+            }
+            for (int p = 0; p < imperialOnA4.getNumberOfPages(); p++) {
+                assertEquals(PDRectangle.A4.getHeight(), imperialOnA4.getPage(p).getMediaBox().getHeight(), 0.01);
+            }
+        }
+        assertFalse(Files.readString(letter.resolve("schedule.csv")).contains("speaking_length_in"),
+                "the tables keep the sheet's metric units on Letter paper");
+        assertTrue(Files.readString(a4.resolve("schedule.csv")).contains("speaking_length_in"),
+                "the tables in inches on A4 paper");
+        Run bad = run("report", GRAND.toString(), "--out", tmp.resolve("never").toString(), "--paper", "a3");
+        assertEquals("error: --paper: paper must be a4 or letter, was 'a3'", bad.err().strip());
+    }
+
+    @Test
     void aBadSheetWritesNothingAndExitsTwo() throws Exception {
         Path bad = Files.writeString(tmp.resolve("bad.csv"), "key,strings,length_mm,wire\n1,2,abc,14\n");
         Path dir = tmp.resolve("never");
@@ -170,7 +195,7 @@ class ReportCommandTest {
     void badOptionsWriteNothingAndExitTwo() throws Exception {
         Path dir = tmp.resolve("never");
         for (String[] extra : List.of(new String[] {"--units", "furlongs"}, new String[] {"--octave", "3:1"},
-                new String[] {"--pin-allowance", "-5"}, new String[] {"--a4", "0"})) {
+                new String[] {"--pin-allowance", "-5"}, new String[] {"--a4", "0"}, new String[] {"--paper", "a3"})) {
             List<String> args = new ArrayList<>(List.of("report", GRAND.toString(), "--out", dir.toString()));
             args.addAll(List.of(extra));
             Run r = run(args.toArray(String[]::new));
@@ -190,6 +215,7 @@ class ReportCommandTest {
     void helpDescribesTheCommand() {
         Run r = run("report", "--help");
         assertEquals(0, r.status());
-        assertTrue(r.out().contains("--reference") && r.out().contains("--units"), r.out());
+        assertTrue(r.out().contains("--reference") && r.out().contains("--units") && r.out().contains("--paper"),
+                r.out());
     }
 }

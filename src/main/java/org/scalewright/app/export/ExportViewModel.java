@@ -40,6 +40,7 @@ import org.scalewright.report.CsvSheet;
 import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;
 import org.scalewright.report.ReportPackage;
+import org.scalewright.report.ReportPaper;
 import org.scalewright.report.ReportUnits;
 import org.scalewright.report.Reports;
 import org.scalewright.report.ScheduleCsv;
@@ -68,6 +69,10 @@ public final class ExportViewModel {
     private final ScaleSession session;
     private final UserPrompts prompts;
     private final ObjectProperty<OctaveType> octave = new SimpleObjectProperty<>(OctaveType.TWO_ONE);
+    private final ObjectProperty<ReportPaper> paper = new SimpleObjectProperty<>();
+    /** True once the user has chosen the paper; until then it follows the display's units. */
+    private boolean paperChosen;
+    private boolean followingUnits;
     private final ReadOnlyStringWrapper note = new ReadOnlyStringWrapper("Nothing exported yet.");
     private final ReadOnlyBooleanWrapper noteIsProblem = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper();
@@ -76,6 +81,29 @@ public final class ExportViewModel {
     ExportViewModel(ScaleSession session, UserPrompts prompts) {
         this.session = session;
         this.prompts = prompts;
+        followUnits();
+        session.unitsProperty().addListener((o, was, is) -> {
+            if (!paperChosen) {
+                followUnits();
+            }
+        });
+        paper.addListener((o, was, is) -> {
+            if (is == null) {
+                paperChosen = false;
+                followUnits();
+            } else if (!followingUnits) {
+                paperChosen = true;
+            }
+        });
+    }
+
+    private void followUnits() {
+        followingUnits = true;
+        try {
+            paper.set(ReportPaper.of(units()));
+        } finally {
+            followingUnits = false;
+        }
     }
 
     /** @return the one export view model of a window (its session), shared by its Exports tab and its File menu */
@@ -95,6 +123,15 @@ public final class ExportViewModel {
     /** @return the octave type whose stretch is {@code stretch_cents} in the stretch table */
     ObjectProperty<OctaveType> octaveProperty() {
         return octave;
+    }
+
+    /**
+     * @return the paper of the PDF: A4 for metric display units and Letter for imperial until
+     *         the user chooses one, then the chosen one whatever the units (null goes back to
+     *         following the units)
+     */
+    ObjectProperty<ReportPaper> paperProperty() {
+        return paper;
     }
 
     /** @return what the last export wrote, or why it wrote nothing */
@@ -325,7 +362,7 @@ public final class ExportViewModel {
         }
         try {
             return Optional.of(ReportContent.compute(sheetName(), a, reference(), units(), octave.get(),
-                    WireAllowances.DEFAULT));
+                    WireAllowances.DEFAULT).withPaper(paper.get()));
         } catch (IllegalArgumentException e) {
             failed("Nothing exported", "the report could not be made: " + why(e) + ".");
             return Optional.empty();
