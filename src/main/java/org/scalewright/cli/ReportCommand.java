@@ -19,6 +19,7 @@ import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
+import org.scalewright.report.ReportCharts;
 import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;
 import org.scalewright.report.ReportPaper;
@@ -78,6 +79,9 @@ public final class ReportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** Draws the report's charts (tests put a failing one here). */
+    Reports.ChartDrawer charts = ReportCharts::reportCharts;
+
     @Override
     public Integer call() throws Exception {
         String dirProblem = ReportFiles.problemWith(out);
@@ -102,7 +106,7 @@ public final class ReportCommand implements Callable<Integer> {
         }
         ReportContent content = ReportContent.compute(inputs.scaleFile.getFileName().toString(), a, ref, u, type,
                 allowances).withPaper(pp);
-        ReportFiles files = Reports.make(content);
+        ReportFiles files = Reports.make(content, charts);
         List<Path> written;
         try {
             written = files.writeTo(out);

@@ -24,6 +24,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import picocli.CommandLine;
 
 class ReportCommandTest {
     static final Path GRAND = Path.of("demo-instruments/grand-190/grand-190.csv");
@@ -167,6 +168,32 @@ class ReportCommandTest {
                 "the tables in inches on A4 paper");
         Run bad = run("report", GRAND.toString(), "--out", tmp.resolve("never").toString(), "--paper", "a3");
         assertEquals("error: --paper: paper must be a4 or letter, was 'a3'", bad.err().strip());
+    }
+
+    @Test
+    void withoutFontsTheReportSaysWhatToInstallInOneLine() throws Exception {
+        CommandLine cl = new CommandLine(new ScalewrightCommand());
+        ReportCommand report = cl.getSubcommands().get("report").getCommand();
+        report.charts = content -> {
+            // as AWT fails on a machine without fontconfig's fonts: an Error, not an Exception
+            throw new Error("Fontconfig head is null, check your fonts or fonts configuration");
+        };
+        Path dir = tmp.resolve("never");
+        Path log = tmp.resolve("errors.log");
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int rc = ScalewrightCommand.run(cl, new String[] {"report", GRAND.toString(), "--out", dir.toString()},
+                new PrintWriter(out, true), new PrintWriter(err, true), log);
+        assertEquals(1, rc);
+        List<String> lines = err.toString().lines().toList();
+        assertEquals(1, lines.size(), err.toString());
+        assertTrue(lines.get(0).startsWith("error: the charts could not be drawn (Fontconfig head is null"),
+                lines.get(0));
+        assertTrue(lines.get(0).contains("install fontconfig and a font package such as fonts-dejavu-core"),
+                lines.get(0));
+        assertFalse(err.toString().contains("Exception") || err.toString().contains("\tat "), err.toString());
+        assertFalse(Files.exists(dir), "nothing written");
+        assertFalse(Files.exists(log), "not a program error: no stack trace logged");
     }
 
     @Test

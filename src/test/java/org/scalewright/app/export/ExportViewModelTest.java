@@ -104,6 +104,26 @@ class ExportViewModelTest {
     }
 
     @Test
+    void withoutFontsTheExportShowsWhatToInstallAndWritesNothing() throws IOException {
+        vm.charts = content -> {
+            throw new Error("Fontconfig head is null, check your fonts or fonts configuration");
+        };
+        assertFalse(vm.writeReportTo(dir.resolve("report")));
+        assertFalse(Files.exists(dir.resolve("report")));
+        assertFalse(vm.write(ExportPiece.PDF, dir.resolve("alone.pdf")));
+        assertFalse(Files.exists(dir.resolve("alone.pdf")));
+        assertEquals(2, prompts.errors.size(), prompts.errors.toString());
+        for (String shown : prompts.errors) {
+            assertTrue(shown.contains("the charts could not be drawn (Fontconfig head is null, check your fonts or "
+                    + "fonts configuration). Java draws the charts' text with the system's fonts; install fontconfig "
+                    + "and a font package such as fonts-dejavu-core"), shown);
+            assertFalse(shown.contains("Exception") || shown.contains("java.lang"), shown);
+        }
+        assertTrue(vm.noteIsProblemProperty().get());
+        assertTrue(vm.noteProperty().get().contains("fonts-dejavu-core"), vm.noteProperty().get());
+    }
+
+    @Test
     void aFolderThatIsAFileIsRefusedWithTheReasonAndNothingIsWritten() throws IOException {
         Path notAFolder = Files.writeString(dir.resolve("occupied"), "x");
         assertFalse(vm.writeReportTo(notAFolder));
