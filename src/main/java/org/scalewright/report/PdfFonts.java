@@ -2,6 +2,9 @@ package org.scalewright.report;
 
 import java.io.IOException;
 import java.io.InputStream;
+import org.apache.fontbox.ttf.TTFParser;
+import org.apache.fontbox.ttf.TrueTypeFont;
+import org.apache.pdfbox.io.RandomAccessReadBuffer;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.font.PDType0Font;
 
@@ -30,7 +33,10 @@ final class PdfFonts {
             if (in == null) {
                 throw new IOException("the bundled font " + FOLDER + file + " is missing from the program");
             }
-            return PDType0Font.load(doc, in, true);
+            TrueTypeFont ttf = new TTFParser().parse(new RandomAccessReadBuffer(in));
+            // no glyph substitution: "fi" stays two letters, so text copied or searched in the PDF is as written
+            ttf.setEnableGsub(false);
+            return PDType0Font.load(doc, ttf, true);
         }
     }
 }

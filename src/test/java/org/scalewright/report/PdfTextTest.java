@@ -4,7 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.apache.pdfbox.cos.COSString;
+import org.apache.pdfbox.pdfparser.PDFStreamParser;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.font.PDType0Font;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
@@ -41,6 +45,27 @@ class PdfTextTest {
         assertEquals("Flügel ? ??   tab here", safe); // control characters become blanks
         assertDoesNotThrow(() -> dejaVu.encode(safe));
         assertEquals("", text.safe(null));
+    }
+
+    @Test
+    void lettersAreNotJoinedIntoLigaturesSoCopiedTextIsAsWritten() throws Exception {
+        PDPage page = new PDPage();
+        doc.addPage(page);
+        try (PDPageContentStream cs = new PDPageContentStream(doc, page)) {
+            cs.beginText();
+            cs.setFont(dejaVu, 10);
+            cs.showText("fi");
+            cs.endText();
+        }
+        PDFStreamParser parser = new PDFStreamParser(page);
+        byte[] shown = null;
+        for (Object token = parser.parseNextToken(); token != null; token = parser.parseNextToken()) {
+            if (token instanceof COSString str) {
+                shown = str.getBytes();
+            }
+        }
+        assertEquals(4, shown.length, "two glyphs of two bytes each, not the fi ligature");
+        assertEquals(dejaVu.encode("f").length + dejaVu.encode("i").length, shown.length);
     }
 
     @Test
