@@ -9,6 +9,7 @@ import org.scalewright.io.BadInputException;
 import org.scalewright.io.LogFiles;
 import org.scalewright.io.SheetProblem;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.report.ChartsNotDrawn;
 import picocli.CommandLine;
 
 /**
@@ -17,7 +18,9 @@ import picocli.CommandLine;
  * ({@link InvalidInput}, {@link UserError}), a plan the constraints do not allow
  * ({@link PlanNotPossible}), a bad argument — exits 2 with one line per problem. Anything else,
  * an {@link IllegalArgumentException} from an engine precondition included, is a program error:
- * exit 1, one line on standard error, and the stack trace appended to the error log.
+ * exit 1, one line on standard error, and the stack trace appended to the error log. A machine
+ * that cannot draw the charts ({@link ChartsNotDrawn}: no fonts) also exits 1, with one line
+ * naming the cause and what to install, and no log: the program is not at fault.
  */
 final class Failures implements CommandLine.IExecutionExceptionHandler {
     /** File name of the error log, in the temporary folder ({@code java.io.tmpdir}). */
@@ -64,6 +67,10 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
                 err.println("error: " + line);
             }
             return ExitStatus.BAD_INPUT;
+        }
+        if (e instanceof ChartsNotDrawn) {
+            err.println("error: " + e.getMessage());
+            return ExitStatus.INTERNAL;
         }
         String what = e.getClass().getSimpleName() + (e.getMessage() == null ? ""
                 : ": " + e.getMessage().replace('\n', ' '));

@@ -19,8 +19,10 @@ import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.physics.ScaleAnalyzer;
+import org.scalewright.report.ReportCharts;
 import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;
+import org.scalewright.report.ReportPaper;
 import org.scalewright.report.ReportUnits;
 import org.scalewright.report.Reports;
 import picocli.CommandLine.Command;
@@ -53,6 +55,10 @@ public final class ReportCommand implements Callable<Integer> {
             description = "units of the tables and orders (default: those of the sheet's speaking lengths)")
     String units;
 
+    @Option(names = "--paper", paramLabel = "a4|letter",
+            description = "paper of the PDF (default: A4 for metric units, Letter for imperial)")
+    String paper;
+
     /** The octave type of stretch_cents in stretch.csv; the PDF gives all three. */
     @Mixin
     OctaveOption octave;
@@ -73,6 +79,9 @@ public final class ReportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
+    /** Draws the report's charts (tests put a failing one here). */
+    Reports.ChartDrawer charts = ReportCharts::reportCharts;
+
     @Override
     public Integer call() throws Exception {
         String dirProblem = ReportFiles.problemWith(out);
@@ -84,6 +93,7 @@ public final class ReportCommand implements Callable<Integer> {
         Scale scale = inputs.scale();
         AnalysisSettings settings = inputs.settings();
         ReportUnits u = reportUnits(scale);
+        ReportPaper pp = paper();
         ScaleAnalysis a = ScaleAnalyzer.analyze(scale, settings);
         Optional<ReportContent.Reference> ref = Optional.empty();
         if (reference != null) {
@@ -95,8 +105,8 @@ public final class ReportCommand implements Callable<Integer> {
                     ScaleAnalyzer.analyze(r, settings)));
         }
         ReportContent content = ReportContent.compute(inputs.scaleFile.getFileName().toString(), a, ref, u, type,
-                allowances);
-        ReportFiles files = Reports.make(content);
+                allowances).withPaper(pp);
+        ReportFiles files = Reports.make(content, charts);
         List<Path> written;
         try {
             written = files.writeTo(out);
@@ -121,6 +131,18 @@ public final class ReportCommand implements Callable<Integer> {
             return ReportUnits.parse(units);
         } catch (InvalidInput e) {
             throw new UserError("--units: " + e.getMessage());
+        }
+    }
+
+    /** @return the paper given, or null for the usual one of the units */
+    private ReportPaper paper() {
+        if (paper == null) {
+            return null;
+        }
+        try {
+            return ReportPaper.parse(paper);
+        } catch (InvalidInput e) {
+            throw new UserError("--paper: " + e.getMessage());
         }
     }
 

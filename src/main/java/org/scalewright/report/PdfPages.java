@@ -6,22 +6,18 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.logging.Level;
-import java.util.logging.Logger;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.font.PDFont;
-import org.apache.pdfbox.pdmodel.font.PDType1Font;
-import org.apache.pdfbox.pdmodel.font.Standard14Fonts;
 import org.apache.pdfbox.pdmodel.graphics.image.LosslessFactory;
 import org.apache.pdfbox.pdmodel.graphics.image.PDImageXObject;
 
 /**
  * Lays out a report page by page: headings, wrapped paragraphs, images and tables that carry
  * their header over to each new page; a footer with page numbers is added at the end.
- * Standard-14 Helvetica fonts, every text through {@link PdfText}.
+ * The bundled DejaVu Sans fonts, embedded ({@link PdfFonts}), every text through {@link PdfText}.
  */
 final class PdfPages implements AutoCloseable {
     static final float MARGIN = 40f;
@@ -31,30 +27,28 @@ final class PdfPages implements AutoCloseable {
     private static final float TABLE_MIN = 6.0f;
     private static final float PAD = 2.6f;
 
-    /**
-     * PDFBox looks for system fonts to render the standard-14 fonts on screen and logs each
-     * substitute it picks; a report only writes text, so those notes are kept off the console.
-     * Held here so that the logger (and its level) is not garbage-collected.
-     */
-    private static final Logger PDFBOX_FONTS = Logger.getLogger("org.apache.pdfbox.pdmodel.font");
-
-    static {
-        PDFBOX_FONTS.setLevel(Level.SEVERE);
-    }
-
     private final PDDocument doc = new PDDocument();
     private final PDRectangle size;
-    private final PDFont regular = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
-    private final PDFont bold = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
-    private final PdfText regularText = new PdfText(regular);
-    private final PdfText boldText = new PdfText(bold);
+    private final PDFont regular;
+    private final PDFont bold;
+    private final PdfText regularText;
+    private final PdfText boldText;
     private final String footer;
     private PDPageContentStream cs;
     private float y;
 
-    PdfPages(PDRectangle size, String footer) {
+    PdfPages(PDRectangle size, String footer) throws IOException {
         this.size = size;
         this.footer = footer;
+        try {
+            this.regular = PdfFonts.load(doc, PdfFonts.REGULAR);
+            this.bold = PdfFonts.load(doc, PdfFonts.BOLD);
+        } catch (IOException | RuntimeException e) {
+            doc.close();
+            throw e;
+        }
+        this.regularText = new PdfText(regular);
+        this.boldText = new PdfText(bold);
     }
 
     float width() {

@@ -9,7 +9,6 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.stream.Collectors;
-import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.scalewright.design.orders.ScheduleRow;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.orders.WoundOrderRow;
@@ -33,7 +32,7 @@ import org.scalewright.report.PdfTable.Column;
  * The PDF report of one instrument (Apache PDFBox): title page with pitch standard, strength
  * table, section totals and cautions; the curves; the flags; the string schedule; the
  * wound-string and plain-wire orders; the tuning stretch; the cautions and the sources of the
- * figures. A4 pages for metric units, US Letter for imperial.
+ * figures. On the content's paper: by default A4 for metric units, US Letter for imperial.
  */
 public final class PdfReportWriter {
     private PdfReportWriter() {
@@ -44,8 +43,7 @@ public final class PdfReportWriter {
      * @return the PDF file's bytes
      */
     public static byte[] toBytes(ReportDocument r) {
-        PDRectangle size = r.units() == ReportUnits.IMPERIAL ? PDRectangle.LETTER : PDRectangle.A4;
-        try (PdfPages p = new PdfPages(size, r.title() + " - string scale report - Scalewright")) {
+        try (PdfPages p = new PdfPages(r.paper().size(), r.title() + " - string scale report - Scalewright")) {
             p.info(r.title(), "Scalewright");
             titlePage(p, r);
             curves(p, r);

@@ -24,10 +24,12 @@ import org.scalewright.physics.ScaleAnalysis;
  * @param woundOrder the wound-string order
  * @param wireOrder  the plain-wire order
  * @param stretch    the tuning stretch for every octave type, the chosen one first
+ * @param paper      the paper of the PDF (null: the usual one for the units, {@link ReportPaper#of})
  */
 public record ReportContent(String sheetName, ScaleAnalysis analysis, Optional<Reference> reference,
                             ReportUnits units, WireAllowances allowances, StringSchedule schedule,
-                            WoundOrder woundOrder, WireOrder wireOrder, List<StretchCurve> stretch) {
+                            WoundOrder woundOrder, WireOrder wireOrder, List<StretchCurve> stretch,
+                            ReportPaper paper) {
 
     /**
      * A reference scale.
@@ -49,10 +51,12 @@ public record ReportContent(String sheetName, ScaleAnalysis analysis, Optional<R
         reference = reference == null ? Optional.empty() : reference;
         units = units == null ? ReportUnits.METRIC : units;
         stretch = List.copyOf(stretch);
+        paper = paper == null ? ReportPaper.of(units) : paper;
     }
 
     /**
-     * Computes everything a report shows except the charts.
+     * Computes everything a report shows except the charts; the PDF on the usual paper for
+     * the units ({@link #withPaper} to choose another).
      *
      * @param sheetName  the scale sheet's file name
      * @param analysis   the working scale's analysis
@@ -71,7 +75,13 @@ public record ReportContent(String sheetName, ScaleAnalysis analysis, Optional<R
             }
         }
         return new ReportContent(sheetName, analysis, reference, units, allowances, StringSchedule.of(analysis),
-                WoundOrder.of(analysis), WireOrder.of(analysis, allowances), stretch);
+                WoundOrder.of(analysis), WireOrder.of(analysis, allowances), stretch, null);
+    }
+
+    /** @return the same content with the PDF on {@code paper} (null: the usual one for the units) */
+    public ReportContent withPaper(ReportPaper paper) {
+        return new ReportContent(sheetName, analysis, reference, units, allowances, schedule, woundOrder, wireOrder,
+                stretch, paper);
     }
 
     /** @return the stretch curve of the chosen octave type */

@@ -36,6 +36,10 @@ public record ReportDocument(ReportContent content, List<ReportChart> curves, Re
         return content.units();
     }
 
+    ReportPaper paper() {
+        return content.paper();
+    }
+
     String sheetName() {
         return content.sheetName();
     }

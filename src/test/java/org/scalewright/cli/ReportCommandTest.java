@@ -24,6 +24,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import picocli.CommandLine;
 
 class ReportCommandTest {
     static final Path GRAND = Path.of("demo-instruments/grand-190/grand-190.csv");
@@ -145,6 +146,57 @@ class ReportCommandTest {
     }
 
     @Test
+    void thePaperIsChosenApartFromTheUnits() throws Exception {
+        Path letter = tmp.resolve("letter");
+        Run r = run("report", GRAND.toString(), "--out", letter.toString(), "--paper", "Letter");
+        assertEquals(0, r.status(), r.err());
+        Path a4 = tmp.resolve("a4");
+        r = run("report", GRAND.toString(), "--out", a4.toString(), "--units", "imperial", "--paper", "a4");
+        assertEquals(0, r.status(), r.err());
+        try (PDDocument metricOnLetter = Loader.loadPDF(letter.resolve("report.pdf").toFile());
+             PDDocument imperialOnA4 = Loader.loadPDF(a4.resolve("report.pdf").toFile())) {
+            for (int p = 0; p < metricOnLetter.getNumberOfPages(); p++) {
+                assertEquals(PDRectangle.LETTER.getHeight(), metricOnLetter.getPage(p).getMediaBox().getHeight(), 0.01);
+            }
+            for (int p = 0; p < imperialOnA4.getNumberOfPages(); p++) {
+                assertEquals(PDRectangle.A4.getHeight(), imperialOnA4.getPage(p).getMediaBox().getHeight(), 0.01);
+            }
+        }
+        assertFalse(Files.readString(letter.resolve("schedule.csv")).contains("speaking_length_in"),
+                "the tables keep the sheet's metric units on Letter paper");
+        assertTrue(Files.readString(a4.resolve("schedule.csv")).contains("speaking_length_in"),
+                "the tables in inches on A4 paper");
+        Run bad = run("report", GRAND.toString(), "--out", tmp.resolve("never").toString(), "--paper", "a3");
+        assertEquals("error: --paper: paper must be a4 or letter, was 'a3'", bad.err().strip());
+    }
+
+    @Test
+    void withoutFontsTheReportSaysWhatToInstallInOneLine() throws Exception {
+        CommandLine cl = new CommandLine(new ScalewrightCommand());
+        ReportCommand report = cl.getSubcommands().get("report").getCommand();
+        report.charts = content -> {
+            // as AWT fails on a machine without fontconfig's fonts: an Error, not an Exception
+            throw new Error("Fontconfig head is null, check your fonts or fonts configuration");
+        };
+        Path dir = tmp.resolve("never");
+        Path log = tmp.resolve("errors.log");
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int rc = ScalewrightCommand.run(cl, new String[] {"report", GRAND.toString(), "--out", dir.toString()},
+                new PrintWriter(out, true), new PrintWriter(err, true), log);
+        assertEquals(1, rc);
+        List<String> lines = err.toString().lines().toList();
+        assertEquals(1, lines.size(), err.toString());
+        assertTrue(lines.get(0).startsWith("error: the charts could not be drawn (Fontconfig head is null"),
+                lines.get(0));
+        assertTrue(lines.get(0).contains("install fontconfig and a font package such as fonts-dejavu-core"),
+                lines.get(0));
+        assertFalse(err.toString().contains("Exception") || err.toString().contains("\tat "), err.toString());
+        assertFalse(Files.exists(dir), "nothing written");
+        assertFalse(Files.exists(log), "not a program error: no stack trace logged");
+    }
+
+    @Test
     void aBadSheetWritesNothingAndExitsTwo() throws Exception {
         Path bad = Files.writeString(tmp.resolve("bad.csv"), "key,strings,length_mm,wire\n1,2,abc,14\n");
         Path dir = tmp.resolve("never");
@@ -170,7 +222,7 @@ class ReportCommandTest {
     void badOptionsWriteNothingAndExitTwo() throws Exception {
         Path dir = tmp.resolve("never");
         for (String[] extra : List.of(new String[] {"--units", "furlongs"}, new String[] {"--octave", "3:1"},
-                new String[] {"--pin-allowance", "-5"}, new String[] {"--a4", "0"})) {
+                new String[] {"--pin-allowance", "-5"}, new String[] {"--a4", "0"}, new String[] {"--paper", "a3"})) {
             List<String> args = new ArrayList<>(List.of("report", GRAND.toString(), "--out", dir.toString()));
             args.addAll(List.of(extra));
             Run r = run(args.toArray(String[]::new));
@@ -190,6 +242,7 @@ class ReportCommandTest {
     void helpDescribesTheCommand() {
         Run r = run("report", "--help");
         assertEquals(0, r.status());
-        assertTrue(r.out().contains("--reference") && r.out().contains("--units"), r.out());
+        assertTrue(r.out().contains("--reference") && r.out().contains("--units") && r.out().contains("--paper"),
+                r.out());
     }
 }

@@ -5,8 +5,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.font.PDFont;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
 import org.scalewright.design.orders.TestScales;
@@ -99,12 +101,30 @@ class PdfReportWriterTest {
     }
 
     @Test
-    void textTheStandardFontCannotShowIsReplacedNotFatal() throws Exception {
-        Scale s = TestScales.generated().withTitle("Flügel μ−≤² 日本 😀");
+    void namesAndSymbolsPrintAsWrittenInTheEmbeddedFont() throws Exception {
+        Scale s = TestScales.generated().withTitle("Łódź – ≤ 70 % μ Δ");
+        try (PDDocument doc = Loader.loadPDF(pdf(ReportFixtures.content(s, ReportUnits.METRIC)))) {
+            String first = pageText(doc, 1);
+            assertTrue(first.contains("Łódź – ≤ 70 % μ Δ"), first.substring(0, 80));
+            int fonts = 0;
+            for (COSName name : doc.getPage(0).getResources().getFontNames()) {
+                PDFont f = doc.getPage(0).getResources().getFont(name);
+                assertTrue(f.isEmbedded(), f.getName() + " is embedded");
+                assertTrue(f.getName().contains("DejaVuSans"), f.getName());
+                fonts++;
+            }
+            assertTrue(fonts >= 2, "regular and bold on the title page");
+        }
+    }
+
+    @Test
+    void textTheFontCannotShowIsReplacedNotFatal() throws Exception {
+        Scale s = TestScales.generated().withTitle("Flügel μ−≤² 日本 𝄞");
         s = s.withNote(s.note(40).orElseThrow().withSection("σ√∞"));
         try (PDDocument doc = Loader.loadPDF(pdf(ReportFixtures.content(s, ReportUnits.METRIC)))) {
             String first = pageText(doc, 1);
-            assertTrue(first.contains("Flügel µ-<=² ?? ?"), first.substring(0, 80));
+            assertTrue(first.contains("Flügel μ−≤² ?? ?"), first.substring(0, 80));
+            assertTrue(new PDFTextStripper().getText(doc).contains("σ√∞"), "the section name as written");
         }
     }
 }

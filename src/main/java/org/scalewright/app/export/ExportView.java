@@ -17,6 +17,7 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.scalewright.app.tool.Tool;
 import org.scalewright.design.stretch.OctaveType;
+import org.scalewright.report.ReportPaper;
 
 /**
  * The Exports tab: the whole report into a folder, or one table, chart or the PDF alone into a
@@ -45,13 +46,21 @@ public final class ExportView implements Tool {
         octave.valueProperty().bindBidirectional(model.octaveProperty());
         octave.setTooltip(new Tooltip("octave type of stretch_cents in the stretch table (the PDF shows all three)"));
 
+        ChoiceBox<ReportPaper> paper = new ChoiceBox<>();
+        paper.setId("export-paper");
+        paper.getItems().setAll(ReportPaper.values());
+        paper.valueProperty().bindBidirectional(model.paperProperty());
+        paper.setTooltip(new Tooltip("paper of the PDF report (A4 for metric units, Letter for imperial "
+                + "until you choose)"));
+
         FlowPane tables = flow(heading("Tables (CSV)"));
         for (ExportPiece p : ExportPiece.values()) {
             if (p.format() == ExportPiece.Format.CSV) {
                 tables.getChildren().add(button(p, p.title()));
             }
         }
-        tables.getChildren().addAll(small("stretch for"), octave, small("octaves"));
+        tables.getChildren().addAll(small("stretch for"), octave, small("octaves"), small("PDF on"), paper,
+                small("paper"));
 
         FlowPane charts = flow(heading("Charts"));
         for (ExportPiece p : ExportPiece.values()) {

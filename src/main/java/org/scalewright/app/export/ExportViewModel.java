@@ -36,10 +36,13 @@ import org.scalewright.io.AtomicFiles;
 import org.scalewright.io.CsvReportWriter;
 import org.scalewright.model.NumberText;
 import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.report.ChartsNotDrawn;
 import org.scalewright.report.CsvSheet;
+import org.scalewright.report.ReportCharts;
 import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;
 import org.scalewright.report.ReportPackage;
+import org.scalewright.report.ReportPaper;
 import org.scalewright.report.ReportUnits;
 import org.scalewright.report.Reports;
 import org.scalewright.report.ScheduleCsv;
@@ -68,14 +71,43 @@ public final class ExportViewModel {
     private final ScaleSession session;
     private final UserPrompts prompts;
     private final ObjectProperty<OctaveType> octave = new SimpleObjectProperty<>(OctaveType.TWO_ONE);
+    private final ObjectProperty<ReportPaper> paper = new SimpleObjectProperty<>();
+    /** True once the user has chosen the paper; until then it follows the display's units. */
+    private boolean paperChosen;
+    private boolean followingUnits;
     private final ReadOnlyStringWrapper note = new ReadOnlyStringWrapper("Nothing exported yet.");
     private final ReadOnlyBooleanWrapper noteIsProblem = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper busy = new ReadOnlyBooleanWrapper();
     private final ObservableList<Written> written = FXCollections.observableArrayList();
+    /** Draws the report's charts (tests put a failing one here). */
+    Reports.ChartDrawer charts = ReportCharts::reportCharts;
 
     ExportViewModel(ScaleSession session, UserPrompts prompts) {
         this.session = session;
         this.prompts = prompts;
+        followUnits();
+        session.unitsProperty().addListener((o, was, is) -> {
+            if (!paperChosen) {
+                followUnits();
+            }
+        });
+        paper.addListener((o, was, is) -> {
+            if (is == null) {
+                paperChosen = false;
+                followUnits();
+            } else if (!followingUnits) {
+                paperChosen = true;
+            }
+        });
+    }
+
+    private void followUnits() {
+        followingUnits = true;
+        try {
+            paper.set(ReportPaper.of(units()));
+        } finally {
+            followingUnits = false;
+        }
     }
 
     /** @return the one export view model of a window (its session), shared by its Exports tab and its File menu */
@@ -95,6 +127,15 @@ public final class ExportViewModel {
     /** @return the octave type whose stretch is {@code stretch_cents} in the stretch table */
     ObjectProperty<OctaveType> octaveProperty() {
         return octave;
+    }
+
+    /**
+     * @return the paper of the PDF: A4 for metric display units and Letter for imperial until
+     *         the user chooses one, then the chosen one whatever the units (null goes back to
+     *         following the units)
+     */
+    ObjectProperty<ReportPaper> paperProperty() {
+        return paper;
     }
 
     /** @return what the last export wrote, or why it wrote nothing */
@@ -151,7 +192,7 @@ public final class ExportViewModel {
             ReportFiles files = null;
             RuntimeException failure = null;
             try {
-                files = Reports.make(content.get());
+                files = Reports.make(content.get(), charts);
             } catch (RuntimeException e) {
                 failure = e;
             }
@@ -190,7 +231,7 @@ public final class ExportViewModel {
         }
         ReportFiles files;
         try {
-            files = Reports.make(content.get());
+            files = Reports.make(content.get(), charts);
         } catch (RuntimeException e) {
             return failed("Report not written", "the report could not be made: " + why(e) + ". Nothing was written.");
         }
@@ -285,13 +326,16 @@ public final class ExportViewModel {
             case STRETCH_CSV -> csv(file, StretchCsv.sheet(c.chosenStretch(), c.stretchInOrder(), head));
             case RESULTS -> CsvReportWriter.write(file, AnalysisCsv.comments(c.analysis()), AnalysisCsv.HEADER,
                     AnalysisCsv.rows(c.analysis()));
-            case PDF -> AtomicFiles.write(file, Reports.make(c)
+            case PDF -> AtomicFiles.write(file, Reports.make(c, charts)
                     .content(ReportPackage.PDF), false);
             default -> {
-                JFreeChart chart = chart(piece, c);
-                byte[] bytes = piece.format() == ExportPiece.Format.PNG
-                        ? ChartFiles.png(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT, ChartFiles.PRINT_DPI)
-                        : ChartFiles.svgBytes(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT);
+                byte[] bytes = ChartsNotDrawn.guard(() -> {
+                    JFreeChart chart = chart(piece, c);
+                    return piece.format() == ExportPiece.Format.PNG
+                            ? ChartFiles.png(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT,
+                                    ChartFiles.PRINT_DPI)
+                            : ChartFiles.svgBytes(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT);
+                });
                 AtomicFiles.write(file, bytes, false);
             }
         }
@@ -325,7 +369,7 @@ public final class ExportViewModel {
         }
         try {
             return Optional.of(ReportContent.compute(sheetName(), a, reference(), units(), octave.get(),
-                    WireAllowances.DEFAULT));
+                    WireAllowances.DEFAULT).withPaper(paper.get()));
         } catch (IllegalArgumentException e) {
             failed("Nothing exported", "the report could not be made: " + why(e) + ".");
             return Optional.empty();
@@ -387,6 +431,9 @@ public final class ExportViewModel {
 
     private static String why(Exception e) {
         String m = e.getMessage();
+        if (e instanceof ChartsNotDrawn) {
+            return m; // already one line naming the cause and what to install
+        }
         String kind = e.getClass().getSimpleName().replace("Exception", "").replaceAll("([a-z])([A-Z])", "$1 $2")
                 .toLowerCase(java.util.Locale.ROOT);
         return m == null ? kind : kind + " (" + m + ")";

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.stream.Stream;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -21,6 +22,7 @@ import org.junit.jupiter.params.provider.EnumSource;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.TestSheets;
+import org.scalewright.report.ReportPaper;
 
 /** The Exports tab's behaviour through its view model, without a display, on the demo grand. */
 class ExportViewModelTest {
@@ -69,6 +71,56 @@ class ExportViewModelTest {
             String text = new PDFTextStripper().getText(doc);
             assertTrue(text.contains("as opened: grand-190.csv"), "the session's reference goes into the report");
         }
+    }
+
+    private static float pageHeight(Path pdf) throws IOException {
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            return doc.getPage(0).getMediaBox().getHeight();
+        }
+    }
+
+    @Test
+    void thePaperFollowsTheUnitsUntilChosenAndThenStaysAsChosen() throws IOException {
+        assertEquals(ReportPaper.A4, vm.paperProperty().get(), "metric display: A4");
+        session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        assertEquals(ReportPaper.LETTER, vm.paperProperty().get(), "imperial display: Letter");
+        assertTrue(vm.write(ExportPiece.PDF, dir.resolve("letter.pdf")));
+        assertEquals(PDRectangle.LETTER.getHeight(), pageHeight(dir.resolve("letter.pdf")), 0.01);
+
+        vm.paperProperty().set(ReportPaper.A4); // chosen in the Exports tab
+        session.unitsProperty().set(DisplayUnits.METRIC);
+        session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        assertEquals(ReportPaper.A4, vm.paperProperty().get(), "the chosen paper stays whatever the units");
+        assertTrue(vm.writeReportTo(dir.resolve("imperial-on-a4")));
+        assertEquals(PDRectangle.A4.getHeight(), pageHeight(dir.resolve("imperial-on-a4").resolve("report.pdf")),
+                0.01);
+        assertTrue(Files.readString(dir.resolve("imperial-on-a4").resolve("schedule.csv"))
+                .contains("speaking_length_in"), "the tables stay in inches");
+
+        vm.paperProperty().set(null); // back to following the units
+        assertEquals(ReportPaper.LETTER, vm.paperProperty().get());
+        session.unitsProperty().set(DisplayUnits.METRIC);
+        assertEquals(ReportPaper.A4, vm.paperProperty().get());
+    }
+
+    @Test
+    void withoutFontsTheExportShowsWhatToInstallAndWritesNothing() throws IOException {
+        vm.charts = content -> {
+            throw new Error("Fontconfig head is null, check your fonts or fonts configuration");
+        };
+        assertFalse(vm.writeReportTo(dir.resolve("report")));
+        assertFalse(Files.exists(dir.resolve("report")));
+        assertFalse(vm.write(ExportPiece.PDF, dir.resolve("alone.pdf")));
+        assertFalse(Files.exists(dir.resolve("alone.pdf")));
+        assertEquals(2, prompts.errors.size(), prompts.errors.toString());
+        for (String shown : prompts.errors) {
+            assertTrue(shown.contains("the charts could not be drawn (Fontconfig head is null, check your fonts or "
+                    + "fonts configuration). Java draws the charts' text with the system's fonts; install fontconfig "
+                    + "and a font package such as fonts-dejavu-core"), shown);
+            assertFalse(shown.contains("Exception") || shown.contains("java.lang"), shown);
+        }
+        assertTrue(vm.noteIsProblemProperty().get());
+        assertTrue(vm.noteProperty().get().contains("fonts-dejavu-core"), vm.noteProperty().get());
     }
 
     @Test
