@@ -38,6 +38,7 @@ import org.scalewright.io.BuiltInData;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
+import org.scalewright.model.WireSize;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 
@@ -98,7 +99,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private final ObjectProperty<RescaleWireList> wireList = new SimpleObjectProperty<>(RescaleWireList.MUSIC);
     private final StringProperty customWires = new SimpleStringProperty("");
     private final StringProperty changeCost = new SimpleStringProperty(Double.toString(PlainPlanOptions.DEFAULT_CHANGE_COST));
-    private final StringProperty wrapStep = new SimpleStringProperty("0.05");
+    private final StringProperty wrapStep = new SimpleStringProperty(""); // empty: the wrap-wire catalogue
     private final StringProperty doubleAbove = new SimpleStringProperty("");
     private final BooleanProperty joinBreak = new SimpleBooleanProperty(false);
     private final StringProperty joinKeys = new SimpleStringProperty("3");
@@ -312,7 +313,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
                 p = PlainPlanner.plan(present, r, t, new PlainPlanOptions(wireList.get().wires(customWires.get()), max,
                         cost, PlainPlanOptions.DEFAULT_STEP_COST));
             } else {
-                p = WoundPlanner.plan(present, r, t, woundOptions(max));
+                p = WoundPlanner.plan(present, r, t, woundOptions(max, present, r));
             }
             show(p, t);
             session.inform("proposal for keys " + r + ": " + p.changedCount() + " of " + p.changes().size()
@@ -326,8 +327,15 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         return false;
     }
 
-    private WoundPlanOptions woundOptions(double max) {
-        double step = number(wrapStep.get(), "wrap step (mm)");
+    /**
+     * The wound designer's settings as the command line's defaults: wrap wire from the catalogue
+     * (or in the steps typed), cores chosen with the wraps from the range's present cores and the
+     * music-wire sizes between them.
+     */
+    private WoundPlanOptions woundOptions(double max, ScaleAnalysis present, KeyRange r) {
+        String typedStep = wrapStep.get() == null ? "" : wrapStep.get().strip();
+        WrapWires wraps = typedStep.isEmpty() ? BuiltInData.wrapWire()
+                : WrapWires.steps(number(typedStep, "wrap step (mm)") * 1e-3);
         OptionalDouble dbl = doubleAbove.get() == null || doubleAbove.get().isBlank() ? OptionalDouble.empty()
                 : OptionalDouble.of(number(doubleAbove.get(), "double-wind above (mm)") * 1e-3);
         int join = 0;
@@ -339,7 +347,9 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
             }
             join = PlanChecks.joinBreakKeys((int) Math.min(j, Integer.MAX_VALUE));
         }
-        return WoundPlanOptions.defaults(max).withWraps(WrapWires.steps(step * 1e-3)).withDoubleAbove(dbl)
+        List<Double> cores = WoundPlanner.presentCores(present, r, BuiltInData.musicWireSizes().sizes().stream()
+                .map(WireSize::diameter).toList());
+        return WoundPlanOptions.defaults(max).withWraps(wraps).withCores(cores).withDoubleAbove(dbl)
                 .withJoinBreak(join);
     }
 
