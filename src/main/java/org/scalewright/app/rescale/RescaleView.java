@@ -135,6 +135,7 @@ public final class RescaleView implements Tool {
 
         TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 4,
                 "wrap wire available in steps of, mm; empty: the wrap-wire catalogue (0.01 mm steps)");
+        step.setPromptText("catalogue");
         TextField dbl = field("rescale-double-above", model.doubleAboveProperty(), 4,
                 "double-wind where a single wrap would be thicker than this, mm; blank keeps each string's winding");
         CheckBox join = new CheckBox("join the break over");
