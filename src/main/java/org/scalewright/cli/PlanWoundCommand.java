@@ -17,7 +17,6 @@ import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.WrapCatalogueReader;
 import org.scalewright.model.WireNotation;
-import org.scalewright.model.WireSize;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 import picocli.CommandLine.ArgGroup;
@@ -127,8 +126,7 @@ public final class PlanWoundCommand extends PlanCommand {
     @Override
     Proposal plan(ScaleAnalysis present, TargetCurve target, double maxBreakPct) {
         if (presentCores) {
-            coreList = WoundPlanner.presentCores(present, keys(), BuiltInData.musicWireSizes().sizes().stream()
-                    .map(WireSize::diameter).toList());
+            coreList = WoundPlanner.presentCores(present, keys(), BuiltInData.musicWireSizes().diameters());
         }
         return WoundPlanner.plan(present, keys(), target, options(maxBreakPct));
     }

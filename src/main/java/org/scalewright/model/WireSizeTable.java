@@ -42,6 +42,11 @@ public record WireSizeTable(List<WireSize> sizes) {
         return Optional.empty();
     }
 
+    /** @return every size's diameter, m, in the table's order */
+    public List<Double> diameters() {
+        return sizes.stream().map(WireSize::diameter).toList();
+    }
+
     /** @return a phrase naming the table's range, e.g. {@code 12 to 23 in half steps} */
     public String rangeText() {
         return String.format(Locale.ROOT, "%s to %s", fmt(sizes.get(0).size()),

@@ -373,11 +373,6 @@ public final class PdfReportWriter {
         return imp ? NumberText.fixed(metres / UnitConversions.METRES_PER_INCH, 2) : NumberText.fixed(metres * 1e3, 1);
     }
 
-    private static String lengthBoth(double metres, boolean imp) {
-        return imp ? NumberText.fixed(metres / UnitConversions.METRES_PER_INCH, 2) + " (" + NumberText.fixed(metres * 1e3, 0) + ")"
-                : NumberText.fixed(metres * 1e3, 1);
-    }
-
     private static String diameter(double metres, boolean imp) {
         return imp ? WireNotation.diameter(metres, LengthUnit.IN) + " (" + WireNotation.diameter(metres, LengthUnit.MM) + ")"
                 : WireNotation.diameter(metres, LengthUnit.MM);

@@ -38,7 +38,6 @@ import org.scalewright.io.BuiltInData;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
-import org.scalewright.model.WireSize;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
 
@@ -347,8 +346,7 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
             }
             join = PlanChecks.joinBreakKeys((int) Math.min(j, Integer.MAX_VALUE));
         }
-        List<Double> cores = WoundPlanner.presentCores(present, r, BuiltInData.musicWireSizes().sizes().stream()
-                .map(WireSize::diameter).toList());
+        List<Double> cores = WoundPlanner.presentCores(present, r, BuiltInData.musicWireSizes().diameters());
         return WoundPlanOptions.defaults(max).withWraps(wraps).withCores(cores).withDoubleAbove(dbl)
                 .withJoinBreak(join);
     }
