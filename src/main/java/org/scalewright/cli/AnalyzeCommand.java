@@ -11,7 +11,6 @@ import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.Flag;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
-import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.physics.SectionTotal;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -29,8 +28,7 @@ public final class AnalyzeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        Scale scale = inputs.scale();
-        ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
+        ScaleAnalysis a = inputs.analysis();
         return out.writeThenPrint(AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a), w -> print(a, w));
     }
 

@@ -13,7 +13,6 @@ import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.io.OutputRefused;
 import org.scalewright.io.ScaleSheetReader;
-import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
@@ -127,42 +126,21 @@ public final class ReportCommand implements Callable<Integer> {
         if (units == null) {
             return ReportUnits.of(scale.layout().unitOf(SheetColumn.SPEAKING_LENGTH));
         }
-        try {
-            return ReportUnits.parse(units);
-        } catch (InvalidInput e) {
-            throw new UserError("--units: " + e.getMessage());
-        }
+        return OptionChecks.named("--units", () -> ReportUnits.parse(units));
     }
 
     /** @return the paper given, or null for the usual one of the units */
     private ReportPaper paper() {
-        if (paper == null) {
-            return null;
-        }
-        try {
-            return ReportPaper.parse(paper);
-        } catch (InvalidInput e) {
-            throw new UserError("--paper: " + e.getMessage());
-        }
+        return paper == null ? null : OptionChecks.named("--paper", () -> ReportPaper.parse(paper));
     }
 
     private WireAllowances allowances() {
-        WireAllowances a = WireAllowances.DEFAULT.withLooped(!singleTied);
-        try {
-            if (pinAllowanceMm != null) {
-                a = a.withPinAllowance(WireAllowances.pinAllowanceOf(pinAllowanceMm));
-            }
-        } catch (InvalidInput e) {
-            throw new UserError("--pin-allowance: " + e.getMessage());
-        }
-        try {
-            if (lengthAllowanceMm != null) {
-                a = a.withLengthAllowance(WireAllowances.lengthAllowanceOf(lengthAllowanceMm));
-            }
-        } catch (InvalidInput e) {
-            throw new UserError("--length-allowance: " + e.getMessage());
-        }
-        return a;
+        WireAllowances d = WireAllowances.DEFAULT;
+        double pin = pinAllowanceMm == null ? d.pinAllowance()
+                : OptionChecks.named("--pin-allowance", () -> WireAllowances.pinAllowanceOf(pinAllowanceMm));
+        double length = lengthAllowanceMm == null ? d.lengthAllowance()
+                : OptionChecks.named("--length-allowance", () -> WireAllowances.lengthAllowanceOf(lengthAllowanceMm));
+        return new WireAllowances(pin, length, !singleTied);
     }
 
     private static void print(ReportContent c, List<Path> written, java.util.Map<String, Integer> sizes,

@@ -10,7 +10,6 @@ import org.scalewright.design.stretch.TuningStretch;
 import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.ScaleAnalysis;
-import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.report.CsvSheet;
 import org.scalewright.report.StretchCsv;
 import picocli.CommandLine.Command;
@@ -35,8 +34,8 @@ public final class StretchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         OctaveType type = octave.type();
-        Scale scale = inputs.scale();
-        ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
+        ScaleAnalysis a = inputs.analysis();
+        Scale scale = a.scale();
         StretchCurve curve = TuningStretch.of(a, type);
         CsvSheet sheet = StretchCsv.sheet(curve, List.of(), header(scale));
         return out.writeThenPrint(sheet.comments(), sheet.header(), sheet.rows(), w -> print(scale, curve, w));
