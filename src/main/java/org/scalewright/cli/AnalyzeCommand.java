@@ -1,7 +1,6 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
-import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.BuiltInData;
@@ -19,10 +18,7 @@ import picocli.CommandLine.Mixin;
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = {"Analyse a scale: per string tension, stress, percent of breaking strength,",
                 "inharmonicity and headroom, with flagged notes and section totals."})
-public final class AnalyzeCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class AnalyzeCommand extends ScaleCommand {
     @Mixin
     CsvOutput out;
 

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 import org.scalewright.design.diagnosis.DiagnosedNote;
 import org.scalewright.design.diagnosis.DiagnosisReport;
 import org.scalewright.design.diagnosis.DiagnosisRequest;
@@ -35,10 +34,7 @@ import picocli.CommandLine.Option;
                 + "(plain or wound); its trend is fitted over the whole section, also outside --keys.",
                 "", "Figures are estimates from nominal data: confirm with the maker's certified strength data. "
                 + "A breaking string can whip: wear eye protection."})
-public final class DiagnoseCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class DiagnoseCommand extends ScaleCommand {
     @Mixin
     KeysOption range;
 

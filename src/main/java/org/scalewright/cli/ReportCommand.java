@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.concurrent.Callable;
 import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.stretch.OctaveType;
@@ -37,10 +36,7 @@ import picocli.CommandLine.Spec;
                         + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv "
                         + "(stretch_cents for the --octave type; the PDF gives all three). "
                         + "Nothing is written if any input is bad."})
-public final class ReportCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class ReportCommand extends ScaleCommand {
     @Option(names = "--out", paramLabel = "DIR", required = true,
             description = "directory to write the report into: created if missing, replaced as a whole if it "
                     + "holds an earlier report (it may hold nothing else)")

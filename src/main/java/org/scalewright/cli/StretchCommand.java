@@ -2,7 +2,6 @@ package org.scalewright.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
@@ -21,10 +20,7 @@ import picocli.CommandLine.Mixin;
                 "Keys A3-A4 (37-49) stay at equal temperament; each octave outward is tuned so that the lower "
                         + "note's partial 2m sounds with the upper note's partial m, with each note's B at its "
                         + "working pitch."})
-public final class StretchCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class StretchCommand extends ScaleCommand {
     @Mixin
     OctaveOption octave;
 
