@@ -68,7 +68,7 @@ final class BreakWords {
         for (BrokenString s : known) {
             StressAtBreak at = s.atBreak().orElseThrow();
             b.append(sep).append(s.key()).append(' ').append(KeyNames.name(s.key())).append(" at ")
-                    .append(NumberText.fixed(at.breakHz(), 1)).append(" Hz, ").append(BreakFindings.mpa(at.stress()))
+                    .append(NumberText.plain(at.breakHz())).append(" Hz, ").append(BreakFindings.mpa(at.stress()))
                     .append(", ").append(NumberText.fixed(at.ratio(), 2)).append(" of the table's ")
                     .append(BreakFindings.mpa(at.tableStrength()));
             sep = "; ";
