@@ -85,13 +85,13 @@ class ArchiveCommandTest {
         assertEquals("2026-11-10", c6.get("date"));
         assertEquals("1052", c6.get("break_hz"));
 
-        Run d = run("diagnose", GRAND.toString(), "--keys", "60-72", "--archive", db().toString(), "--instrument",
+        Run diag = run("diagnose", GRAND.toString(), "--keys", "60-72", "--archive", db().toString(), "--instrument",
                 "grand-190");
-        assertEquals(0, d.rc(), d.err());
-        assertTrue(d.out().contains("Recorded breaks: 3 strings broke on keys 60-72 (64 C6, 66 D6, 69 F6)"), d.out());
-        assertTrue(d.out().contains("3 broke at a known pitch: 64 C6 at 1052 Hz"), d.out());
-        assertTrue(d.out().contains("broke at the front bearing"), d.out());
-        assertTrue(d.out().contains("during a pitch raise"), "the caution where breaks came in a pitch raise");
+        assertEquals(0, diag.rc(), diag.err());
+        assertTrue(diag.out().contains("Recorded breaks: 3 strings broke on keys 60-72 (64 C6, 66 D6, 69 F6)"), diag.out());
+        assertTrue(diag.out().contains("3 broke at a known pitch: 64 C6 at 1052 Hz"), diag.out());
+        assertTrue(diag.out().contains("broke at the front bearing"), diag.out());
+        assertTrue(diag.out().contains("during a pitch raise"), "the caution where breaks came in a pitch raise");
         Run narrow = run("diagnose", GRAND.toString(), "--keys", "67-72", "--archive", db().toString(),
                 "--instrument", "grand-190");
         assertTrue(narrow.out().contains("1 string broke on keys 67-72 (69 F6); 2 more outside keys 67-72"),
