@@ -101,7 +101,7 @@ public final class Archive implements AutoCloseable {
 
     /** @return every instrument, by name */
     public List<Instrument> instruments() {
-        return file.transaction(c -> {
+        return file.read(c -> {
             List<Instrument> out = new ArrayList<>();
             try (PreparedStatement s = c.prepareStatement("SELECT name, maker, model, serial, owner, location FROM "
                     + "instrument ORDER BY name COLLATE NOCASE"); ResultSet r = s.executeQuery()) {
@@ -156,7 +156,7 @@ public final class Archive implements AutoCloseable {
 
     /** @return the instrument's versions, oldest first */
     public List<ScaleVersion> versions(String name) {
-        return file.transaction(c -> {
+        return file.read(c -> {
             long id = requireId(c, name);
             List<ScaleVersion> out = new ArrayList<>();
             try (PreparedStatement s = c.prepareStatement("SELECT number, date, label, derived_from, sheet FROM "
@@ -230,7 +230,7 @@ public final class Archive implements AutoCloseable {
 
     /** @return the instrument's jobs, by date */
     public List<Job> jobs(String name) {
-        return file.transaction(c -> {
+        return file.read(c -> {
             long id = requireId(c, name);
             List<Job> out = new ArrayList<>();
             try (PreparedStatement s = c.prepareStatement("SELECT date, kind, notes, a4_hz, strength_table, "
@@ -288,7 +288,7 @@ public final class Archive implements AutoCloseable {
 
     /** @return the instrument's breaks, by date then key */
     public List<ArchivedBreak> breaks(String name) {
-        return file.transaction(c -> {
+        return file.read(c -> {
             long id = requireId(c, name);
             List<ArchivedBreak> out = new ArrayList<>();
             try (PreparedStatement s = c.prepareStatement("SELECT id, date, key, string_of_unison, break_hz, during, "
@@ -320,6 +320,11 @@ public final class Archive implements AutoCloseable {
     /** Runs work on the connection in one transaction (the dump and load of this package). */
     <T> T transaction(ArchiveFile.Work<T> work) {
         return file.transaction(work);
+    }
+
+    /** Runs reading work on the connection in one read transaction (the dump). */
+    <T> T read(ArchiveFile.Work<T> work) {
+        return file.read(work);
     }
 
     @Override

@@ -47,7 +47,7 @@ public final class ArchiveDump {
         Map<String, Integer> counts = new LinkedHashMap<>();
         files.put(META, DumpCsv.write(List.of("format", "schema_version"),
                 List.of(List.of("scalewright archive dump", Integer.toString(Archive.schemaVersion())))));
-        archive.transaction(c -> {
+        archive.read(c -> {
             for (String table : ArchiveSchema.TABLES) {
                 List<String> header = columns(c, table).stream().map(Column::name).toList();
                 List<List<String>> rows = rows(c, table);

@@ -113,10 +113,11 @@ final class ArchiveFile implements AutoCloseable {
         config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
         config.enforceForeignKeys(true);
         config.setBusyTimeout(BUSY_TIMEOUT_MS);
-        config.setTransactionMode(SQLiteConfig.TransactionMode.IMMEDIATE);
         try {
+            // transactions are begun and ended here (BEGIN IMMEDIATE … COMMIT), never left open between
+            // changes: the driver's own mode would begin the next one at once and hold its lock
             Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
-            c.setAutoCommit(false);
+            c.setAutoCommit(true);
             return c;
         } catch (SQLException e) {
             throw refusedOrFailed(file, e);
@@ -125,6 +126,7 @@ final class ArchiveFile implements AutoCloseable {
 
     /** Refuses an SQLite file of another program, a newer version and a damaged archive, before any write. */
     private static void checkContents(Path file, Connection c) throws SQLException {
+        exec(c, "BEGIN");
         try {
             int app = intPragma(c, "application_id");
             int version = intPragma(c, "user_version");
@@ -144,22 +146,28 @@ final class ArchiveFile implements AutoCloseable {
                         Math.min(3, problems.size()))) + "); it was left as it is: restore it from a backup or a dump");
             }
         } finally {
-            c.rollback();
+            exec(c, "ROLLBACK");
+        }
+    }
+
+    private static void exec(Connection c, String sql) throws SQLException {
+        try (Statement s = c.createStatement()) {
+            s.execute(sql);
         }
     }
 
     private static void migrate(Connection c) throws SQLException {
         int version = intPragma(c, "user_version");
-        c.commit();
         for (int v = version + 1; v <= ArchiveSchema.latest(); v++) {
+            exec(c, "BEGIN IMMEDIATE");
             try (Statement s = c.createStatement()) {
                 for (String sql : ArchiveSchema.MIGRATIONS.get(v - 1)) {
                     s.execute(sql);
                 }
                 s.execute("PRAGMA user_version = " + v);
-                c.commit();
+                exec(c, "COMMIT");
             } catch (SQLException e) {
-                c.rollback();
+                exec(c, "ROLLBACK");
                 throw e;
             }
         }
@@ -170,9 +178,23 @@ final class ArchiveFile implements AutoCloseable {
      * entirely when it throws.
      */
     <T> T transaction(Work<T> work) {
+        return inTransaction("BEGIN IMMEDIATE", work);
+    }
+
+    /** Runs {@code work}, which only reads, in one read transaction: it sees one state of the archive. */
+    <T> T read(Work<T> work) {
+        return inTransaction("BEGIN", work);
+    }
+
+    private <T> T inTransaction(String begin, Work<T> work) {
+        try {
+            exec(connection, begin);
+        } catch (SQLException e) {
+            throw refusedOrFailed(file, e);
+        }
         try {
             T result = work.run(connection);
-            connection.commit();
+            exec(connection, "COMMIT");
             return result;
         } catch (SQLException e) {
             rollbackQuietly();
@@ -189,7 +211,7 @@ final class ArchiveFile implements AutoCloseable {
 
     /** @return the result of {@code PRAGMA integrity_check}: {@code [ok]} for a sound file */
     List<String> integrityCheck() {
-        return transaction(c -> textQuery(c, "PRAGMA integrity_check"));
+        return read(c -> textQuery(c, "PRAGMA integrity_check"));
     }
 
     static int intPragma(Connection c, String name) throws SQLException {
@@ -233,7 +255,7 @@ final class ArchiveFile implements AutoCloseable {
 
     private void rollbackQuietly() {
         try {
-            connection.rollback();
+            exec(connection, "ROLLBACK");
         } catch (SQLException ignored) {
             // the connection is failing already; the first error is the one reported
         }

@@ -103,7 +103,7 @@ class LayerRulesTest {
                 .layer("window").definedBy("org.scalewright.app")
                 .layer("tools").definedBy("org.scalewright.app.rescale..", "org.scalewright.app.wirecheck..",
                         "org.scalewright.app.diagnosis..", "org.scalewright.app.stretch..",
-                        "org.scalewright.app.export..")
+                        "org.scalewright.app.export..", "org.scalewright.app.archive..")
                 .layer("tool parts").definedBy("org.scalewright.app.tool..")
                 .layer("table and curves").definedBy("org.scalewright.app.table..", "org.scalewright.app.curves..")
                 .layer("session").definedBy("org.scalewright.app.session..")
@@ -112,7 +112,7 @@ class LayerRulesTest {
                 .whereLayer("tool parts").mayOnlyBeAccessedByLayers("window", "tools")
                 .whereLayer("table and curves").mayOnlyBeAccessedByLayers("window", "tools", "tool parts")
                 .check(classes);
-        for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export"}) {
+        for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export", "archive"}) {
             noClasses().that().resideInAPackage("org.scalewright.app." + tool + "..")
                     .should().dependOnClassesThat().resideInAnyPackage(otherTools(tool))
                     .check(classes);
@@ -120,7 +120,7 @@ class LayerRulesTest {
     }
 
     private static String[] otherTools(String tool) {
-        return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export")
+        return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export", "archive")
                 .filter(t -> !t.equals(tool)).map(t -> "org.scalewright.app." + t + "..").toArray(String[]::new);
     }
 
