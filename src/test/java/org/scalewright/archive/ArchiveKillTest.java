@@ -40,7 +40,9 @@ class ArchiveKillTest {
     private static final int LANES = 2;
 
     @TempDir
-    Path dir;
+    Path tempDir;
+    /** A folder in memory where there is one (/dev/shm), so the test does not wait on a shared disk. */
+    private Path dir;
 
     private record Lane(int kills, int committed, int midTransaction, List<String> problems) {
     }
@@ -49,6 +51,21 @@ class ArchiveKillTest {
 
     @Test
     void killsDuringRandomWritesLoseNothingCommitted() throws Exception {
+        Path shm = Path.of("/dev/shm");
+        dir = Files.isDirectory(shm) && Files.isWritable(shm) ? Files.createTempDirectory(shm, "scalewright-kill")
+                : tempDir;
+        try {
+            killLanes();
+        } finally {
+            if (!dir.equals(tempDir)) {
+                try (var walk = Files.walk(dir)) {
+                    walk.sorted(java.util.Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+                }
+            }
+        }
+    }
+
+    private void killLanes() throws Exception {
         ExecutorService pool = Executors.newFixedThreadPool(LANES);
         try {
             List<Future<Lane>> lanes = new ArrayList<>();
@@ -83,6 +100,7 @@ class ArchiveKillTest {
     private Lane runLane(int lane) throws Exception {
         Path db = dir.resolve("lane-" + lane + ".db");
         Path natives = Files.createDirectories(dir.resolve("natives-" + lane));
+        Files.deleteIfExists(db);
         try (Archive a = Archive.create(db)) {
             a.addInstrument(Instrument.named(ArchiveKillWriter.INSTRUMENT));
         }
@@ -94,16 +112,20 @@ class ArchiveKillTest {
         int midTransaction = 0;
         List<String> problems = new ArrayList<>();
         for (int k = 0; k < TRIES_PER_LANE; k++) {
-            Process p = new ProcessBuilder(javaBinary(), "-XX:TieredStopAtLevel=1", "-Xshare:auto",
-                    "-Dorg.sqlite.tmpdir=" + natives, "-cp", System.getProperty("java.class.path"),
-                    ArchiveKillWriter.class.getName(), db.toString(), Long.toString(random.nextLong()))
-                    .redirectError(ProcessBuilder.Redirect.DISCARD).start();
+            List<String> command = new ArrayList<>(List.of(javaBinary(), "-XX:TieredStopAtLevel=1", "-Xshare:auto",
+                    "-XX:+UseSerialGC", "-XX:-UsePerfData", "-Dorg.sqlite.tmpdir=" + natives));
+            // the native library the first child unpacked is loaded from there by the others
+            nativeLibrary(natives).ifPresent(lib -> command.addAll(List.of("-Dorg.sqlite.lib.path=" + natives,
+                    "-Dorg.sqlite.lib.name=" + lib)));
+            command.addAll(List.of("-cp", System.getProperty("java.class.path"), ArchiveKillWriter.class.getName(),
+                    db.toString(), Long.toString(random.nextLong())));
+            Process p = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.DISCARD).start();
             BufferedReader out = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8));
             CountDownLatch ready = new CountDownLatch(1);
             CompletableFuture<List<String>> lines = CompletableFuture.supplyAsync(() -> readAll(out, ready), readers);
-            // a kill before the archive is open would test only the start-up
+            // the random moment starts with the first committed change: a kill before it would test only start-up
             ready.await(30, TimeUnit.SECONDS);
-            Thread.sleep(random.nextInt(60));
+            Thread.sleep(random.nextInt(100));
             p.destroyForcibly();
             p.waitFor(30, TimeUnit.SECONDS);
             Path journal = db.resolveSibling(db.getFileName() + "-journal");
@@ -182,7 +204,7 @@ class ArchiveKillTest {
         try {
             for (String line = r.readLine(); line != null; line = r.readLine()) {
                 lines.add(line);
-                if (line.equals("ready .")) {
+                if (!line.startsWith("ready") && line.endsWith(" .")) {
                     ready.countDown();
                 }
             }
@@ -192,6 +214,13 @@ class ArchiveKillTest {
             ready.countDown();
         }
         return lines;
+    }
+
+    private static java.util.Optional<String> nativeLibrary(Path natives) throws IOException {
+        try (var files = Files.list(natives)) {
+            return files.map(f -> f.getFileName().toString()).filter(n -> n.matches(
+                    "sqlite-.*sqlitejdbc\\.(so|dylib|dll|jnilib)")).findFirst();
+        }
     }
 
     private static String javaBinary() {
