@@ -14,11 +14,11 @@ import picocli.CommandLine.Command;
                 ArchiveHistoryCommand.class, ArchiveDumpCommand.class, ArchiveLoadCommand.class},
         footer = {"", "Where it lives: archive.db in the user's data folder (Linux: $XDG_DATA_HOME/scalewright or "
                 + "~/.local/share/scalewright; macOS: ~/Library/Application Support/Scalewright; Windows: "
-                + "%APPDATA%\\Scalewright), or the file given with --db.",
+                + "%%APPDATA%%\\Scalewright), or the file given with --db.",
                 "", "Back it up with 'archive dump --out FOLDER' (a folder of CSV files that 'archive load' reads "
                 + "back into a new archive), or copy the file while no program has it open.",
                 "", "Example: archive create; archive add-instrument grand-190; archive import-sheet grand-190 "
-                + "SHEET.csv --label as-measured; archive log-break grand-190 --key 64 --pitch 331; "
+                + "SHEET.csv --label as-measured; archive log-break grand-190 --key 64 --pitch 1052; "
                 + "archive breaks grand-190"})
 public final class ArchiveCommand implements Runnable {
     @CommandLine.Spec
