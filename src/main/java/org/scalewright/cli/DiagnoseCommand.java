@@ -50,6 +50,9 @@ public final class DiagnoseCommand extends ScaleCommand {
     @Mixin
     CsvOutput out;
 
+    @Mixin
+    ArchiveBreaksOption archive;
+
     @Override
     public Integer call() throws Exception {
         if (!(margin > 0 && margin < 100)) {
@@ -67,7 +70,7 @@ public final class DiagnoseCommand extends ScaleCommand {
         }
         DiagnosisRequest request = new DiagnosisRequest(scale, range.keys, settings, tables.tables(), margin,
                 BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire());
-        DiagnosisReport report = SectionDiagnosis.diagnose(request);
+        DiagnosisReport report = SectionDiagnosis.diagnose(request, archive.breaks());
         return out.writeThenPrint(DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report),
                 w -> print(report, w));
     }
@@ -93,6 +96,7 @@ public final class DiagnoseCommand extends ScaleCommand {
         t.print(w);
         w.println(String.format(Locale.ROOT, "out: stands out from the trend of its section by more than %s %%; "
                 + "trend mm: the section's trend of speaking length", Formats.trim(q.marginPct())));
+        ArchiveBreaksOption.print(r.breaks(), w);
         w.println();
         Finding f = r.finding();
         w.println("Finding (" + f.cause().words() + "):");
