@@ -1,22 +1,15 @@
 package org.scalewright.cli;
 
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.Instrument;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code archive add-instrument}: a new instrument with its description. */
 @Command(name = "add-instrument", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Add an instrument to the archive under a short name of your choosing (unique in the "
                 + "archive), with free-text description fields.")
-public final class ArchiveAddInstrumentCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
+public final class ArchiveAddInstrumentCommand extends InstrumentSubcommand {
     @Option(names = "--maker", paramLabel = "TEXT", description = "who built it")
     String maker;
 
@@ -32,19 +25,13 @@ public final class ArchiveAddInstrumentCommand implements Callable<Integer> {
     @Option(names = "--location", paramLabel = "TEXT", description = "where it stands")
     String location;
 
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         Instrument i = new Instrument(instrument.name, maker, model, serial, owner, location);
         try (Archive a = db.open()) {
             a.addInstrument(i);
         }
-        spec.commandLine().getOut().println("added instrument '" + i.name() + "'");
+        terminal().println("added instrument '" + i.name() + "'");
         return ExitStatus.OK;
     }
 }

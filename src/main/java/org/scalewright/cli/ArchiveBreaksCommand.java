@@ -2,7 +2,6 @@ package org.scalewright.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.BreakList;
 import org.scalewright.archive.JudgedBreak;
@@ -20,15 +19,9 @@ import picocli.CommandLine.Mixin;
                 + "table's figure for that diameter: under 1 the wire broke weaker than the table says.",
                 "With --out the CSV columns are key, date, break_hz, stress_at_break_mpa, table_strength_mpa, "
                 + "strength_ratio."})
-public final class ArchiveBreaksCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
+public final class ArchiveBreaksCommand extends InstrumentSubcommand {
     @Mixin
     StrengthOption strength;
-
-    @Mixin
-    ArchiveOption db;
 
     @Mixin
     CsvOutput out;

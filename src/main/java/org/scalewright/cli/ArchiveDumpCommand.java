@@ -3,14 +3,10 @@ package org.scalewright.cli;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.Map;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ArchiveDump;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code archive dump}: the whole archive as a folder of CSV files. */
 @Command(name = "dump", mixinStandardHelpOptions = true,
@@ -18,16 +14,10 @@ import picocli.CommandLine.Spec;
                 + "scale_version, job, string_break) and archive.csv with the archive's version: a backup that "
                 + "'archive load' reads back into a new archive, equal to this one.",
                 "The folder is written whole: it holds the earlier dump or the new one, never a mixture."})
-public final class ArchiveDumpCommand implements Callable<Integer> {
+public final class ArchiveDumpCommand extends ArchiveSubcommand {
     @Option(names = "--out", paramLabel = "FOLDER", required = true,
             description = "the folder to write (new, or holding only an earlier dump)")
     Path out;
-
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
 
     @Override
     public Integer call() {
@@ -37,8 +27,8 @@ public final class ArchiveDumpCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new UserError("cannot write " + out + ": " + e.getMessage());
         }
-        counts.forEach((f, n) -> spec.commandLine().getOut().println("  " + f + ": " + n + " rows"));
-        spec.commandLine().getOut().println("wrote " + out);
+        counts.forEach((f, n) -> terminal().println("  " + f + ": " + n + " rows"));
+        terminal().println("wrote " + out);
         return ExitStatus.OK;
     }
 }

@@ -5,7 +5,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ArchivedBreak;
 import org.scalewright.archive.Instrument;
@@ -14,24 +13,12 @@ import org.scalewright.archive.ScaleVersion;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.StringBreak;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Spec;
 
 /** {@code archive history}: an instrument's versions, jobs and breaks in the order of their days. */
 @Command(name = "history", mixinStandardHelpOptions = true,
         description = "Show an instrument's description and its history: scale versions, jobs and broken strings, "
                 + "day by day.")
-public final class ArchiveHistoryCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
+public final class ArchiveHistoryCommand extends InstrumentSubcommand {
     private record Entry(LocalDate date, int order, String what) {
     }
 
@@ -56,7 +43,7 @@ public final class ArchiveHistoryCommand implements Callable<Integer> {
             }
         }
         entries.sort(Comparator.comparing(Entry::date).thenComparingInt(Entry::order));
-        PrintWriter w = spec.commandLine().getOut();
+        PrintWriter w = terminal();
         w.println(i.name() + describe(i));
         for (Entry e : entries) {
             w.println("  " + e.date() + "  " + e.what());

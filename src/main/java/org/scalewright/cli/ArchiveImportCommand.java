@@ -2,26 +2,20 @@ package org.scalewright.cli;
 
 import java.nio.file.Path;
 import java.util.OptionalInt;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ScaleVersion;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.Scale;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code archive import-sheet}: a scale sheet saved as the instrument's next version. */
 @Command(name = "import-sheet", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Save a scale sheet as the instrument's next version (numbered 1, 2, …). The sheet is read "
                 + "and checked as every command reads it, then kept in the archive as written.")
-public final class ArchiveImportCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
+public final class ArchiveImportCommand extends InstrumentSubcommand {
     @Parameters(index = "1", paramLabel = "SHEET.csv", description = "the scale sheet (CSV, see scales/README.md)")
     Path sheet;
 
@@ -35,12 +29,6 @@ public final class ArchiveImportCommand implements Callable<Integer> {
     @Mixin
     DateOption date;
 
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() throws Exception {
         java.time.LocalDate day = date.day();
@@ -50,7 +38,7 @@ public final class ArchiveImportCommand implements Callable<Integer> {
             v = a.saveVersion(instrument.name, scale, label, from == null ? OptionalInt.empty() : OptionalInt.of(from),
                     day);
         }
-        spec.commandLine().getOut().println("saved " + sheet + " as version " + v.number() + " of '"
+        terminal().println("saved " + sheet + " as version " + v.number() + " of '"
                 + instrument.name + "' (" + v.label() + (v.derivedFrom().isPresent() ? ", from version "
                 + v.derivedFrom().getAsInt() : "") + ", " + v.date() + ")");
         return ExitStatus.OK;

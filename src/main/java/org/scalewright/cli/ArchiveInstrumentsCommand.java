@@ -1,24 +1,14 @@
 package org.scalewright.cli;
 
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.Instrument;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Spec;
 
 /** {@code archive instruments}: every instrument with its description. */
 @Command(name = "instruments", mixinStandardHelpOptions = true,
         description = "List the instruments in the archive with their descriptions.")
-public final class ArchiveInstrumentsCommand implements Callable<Integer> {
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
+public final class ArchiveInstrumentsCommand extends ArchiveSubcommand {
     @Override
     public Integer call() {
         List<Instrument> all;
@@ -29,7 +19,7 @@ public final class ArchiveInstrumentsCommand implements Callable<Integer> {
         for (Instrument i : all) {
             t.row(i.name(), i.maker(), i.model(), i.serial(), i.owner(), i.location());
         }
-        t.print(spec.commandLine().getOut());
+        t.print(terminal());
         return ExitStatus.OK;
     }
 }

@@ -3,7 +3,6 @@ package org.scalewright.cli;
 import java.time.LocalDate;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ArchivedBreak;
 import org.scalewright.model.BreakActivity;
@@ -13,9 +12,7 @@ import org.scalewright.model.KeyNames;
 import org.scalewright.model.StringBreak;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code archive log-break}: a broken string. */
 @Command(name = "log-break", mixinStandardHelpOptions = true, sortOptions = false,
@@ -26,10 +23,7 @@ import picocli.CommandLine.Spec;
         footer = {"", "A string that breaks during a pitch raise or while being brought up can whip and its wire "
                 + "ends cut: wear eye protection, raise a large pitch change in stages, and defer to the maker's "
                 + "specifications and licensed, experienced practice."})
-public final class ArchiveLogBreakCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
+public final class ArchiveLogBreakCommand extends InstrumentSubcommand {
     @Option(names = "--key", paramLabel = "KEY", required = true,
             description = "key number or note name of the broken string (49 or A4)")
     String key;
@@ -62,12 +56,6 @@ public final class ArchiveLogBreakCommand implements Callable<Integer> {
     @Mixin
     DateOption date;
 
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
     @Override
     public Integer call() {
         StringBreak b = parse(date.day());
@@ -75,7 +63,7 @@ public final class ArchiveLogBreakCommand implements Callable<Integer> {
         try (Archive a = db.open()) {
             kept = a.logBreak(instrument.name, b, version == null ? OptionalInt.empty() : OptionalInt.of(version));
         }
-        var w = spec.commandLine().getOut();
+        var w = terminal();
         w.println("logged break " + kept.id() + " on '" + instrument.name + "': key " + b.key() + " "
                 + KeyNames.name(b.key()) + ", " + b.date() + (b.breakHz().isPresent() ? ", at "
                 + Formats.trim(b.breakHz().getAsDouble()) + " Hz" : "") + ", " + b.during().phrase() + ", "

@@ -1,28 +1,15 @@
 package org.scalewright.cli;
 
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ScaleVersion;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
-import picocli.CommandLine.Spec;
 
 /** {@code archive versions}: an instrument's scale versions. */
 @Command(name = "versions", mixinStandardHelpOptions = true,
         description = "List an instrument's scale versions: number, date, label, the version each came from and "
                 + "the sheet's title and keys.")
-public final class ArchiveVersionsCommand implements Callable<Integer> {
-    @Mixin
-    InstrumentName instrument;
-
-    @Mixin
-    ArchiveOption db;
-
-    @Spec
-    CommandSpec spec;
-
+public final class ArchiveVersionsCommand extends InstrumentSubcommand {
     @Override
     public Integer call() {
         TextTable t = new TextTable(">version", "date", "label", ">from", "title", "keys");
@@ -34,7 +21,7 @@ public final class ArchiveVersionsCommand implements Callable<Integer> {
                         s.title(), s.notes().get(0).key() + "-" + s.notes().get(s.notes().size() - 1).key());
             }
         }
-        t.print(spec.commandLine().getOut());
+        t.print(terminal());
         return ExitStatus.OK;
     }
 }

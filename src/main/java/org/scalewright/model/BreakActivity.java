@@ -1,27 +1,17 @@
 package org.scalewright.model;
 
-import java.util.Arrays;
-import java.util.Locale;
+/** What was being done when a string broke; its word is {@link WordChoice#word()} ({@code pitch-raise}). */
+public enum BreakActivity implements WordChoice {
+    PITCH_RAISE("during a pitch raise"),
+    FITTING("while fitting or bringing up a new string"),
+    TUNING("during a tuning"),
+    PLAYING("while being played"),
+    UNKNOWN("at a time not recorded");
 
-/** What was being done when a string broke. */
-public enum BreakActivity {
-    PITCH_RAISE("pitch-raise", "during a pitch raise"),
-    FITTING("fitting", "while fitting or bringing up a new string"),
-    TUNING("tuning", "during a tuning"),
-    PLAYING("playing", "while being played"),
-    UNKNOWN("unknown", "at a time not recorded");
-
-    private final String word;
     private final String phrase;
 
-    BreakActivity(String word, String phrase) {
-        this.word = word;
+    BreakActivity(String phrase) {
         this.phrase = phrase;
-    }
-
-    /** @return the word written in files and typed on the command line ({@code pitch-raise}) */
-    public String word() {
-        return word;
     }
 
     /** @return the activity in a sentence ({@code during a pitch raise}) */
@@ -40,14 +30,11 @@ public enum BreakActivity {
      * @throws InvalidInput naming the accepted words
      */
     public static BreakActivity of(String text) {
-        String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
-        return Arrays.stream(values()).filter(a -> a.word.equals(t)).findFirst()
-                .orElseThrow(() -> new InvalidInput("what the string broke during must be one of "
-                        + words() + ", was '" + text + "'"));
+        return WordChoice.of(BreakActivity.class, text, "what the string broke during");
     }
 
     /** @return the accepted words, comma-separated */
     public static String words() {
-        return String.join(", ", Arrays.stream(values()).map(BreakActivity::word).toList());
+        return WordChoice.words(BreakActivity.class);
     }
 }
