@@ -119,7 +119,7 @@ public final class BuiltInData {
             if (in == null) {
                 throw new IllegalStateException("missing built-in table " + name);
             }
-            return CsvTable.parse(Path.of(name), TextFile.lines(Path.of(name), in.readAllBytes()),
+            return CsvTable.parse(Path.of(name), in.readAllBytes(),
                     CsvTable.RowLimit.TABLE);
         } catch (IOException e) {
             throw new UncheckedIOException(e);

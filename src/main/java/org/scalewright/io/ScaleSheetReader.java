@@ -64,7 +64,7 @@ public final class ScaleSheetReader {
 
     /** Reads a sheet from bytes already in memory; {@code file} names it in messages. */
     public Scale read(Path file, byte[] content) throws BadInputException {
-        return parse(file, CsvTable.parse(file, TextFile.lines(file, content), CsvTable.RowLimit.KEYS));
+        return parse(file, CsvTable.parse(file, content, CsvTable.RowLimit.KEYS));
     }
 
     private Scale parse(Path file, CsvTable table) throws BadInputException {

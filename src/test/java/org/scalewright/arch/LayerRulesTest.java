@@ -132,6 +132,9 @@ class LayerRulesTest {
         noClasses().that().resideOutsideOfPackages("org.scalewright.chart..", "org.scalewright.report..",
                         "org.scalewright.app..")
                 .should().dependOnClassesThat().resideInAPackage("org.jfree..").check(classes);
+        noClasses().that().resideOutsideOfPackage("org.scalewright.io..")
+                .should().dependOnClassesThat().resideInAPackage("org.apache.poi..")
+                .because("spreadsheets are read and written in io alone").check(classes);
         noClasses().should().dependOnClassesThat().resideInAPackage("java.sql..")
                 .because("only the workshop archive, when it comes, may use JDBC").allowEmptyShould(true)
                 .check(classes);
