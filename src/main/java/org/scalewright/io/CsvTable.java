@@ -83,16 +83,13 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
                 }
                 continue;
             }
+            if (r.cells().size() > MAX_CELLS) {
+                throw new BadInputException(List.of(new SheetProblem(file, r.line(), "", "the line has "
+                        + r.cells().size() + " cells; at most " + MAX_CELLS + " are read")));
+            }
             List<String> trimmed = new ArrayList<>(r.cells().size());
             for (String c : r.cells()) {
                 trimmed.add(c.strip());
-            }
-            while (trimmed.size() > MAX_CELLS && trimmed.get(trimmed.size() - 1).isEmpty()) {
-                trimmed.remove(trimmed.size() - 1);
-            }
-            if (trimmed.size() > MAX_CELLS) {
-                throw new BadInputException(List.of(new SheetProblem(file, r.line(), "", "the line has "
-                        + trimmed.size() + " cells; at most " + MAX_CELLS + " are read")));
             }
             if (header != null && rows.size() == limit.maxRows()) {
                 throw new BadInputException(List.of(new SheetProblem(file, r.line(), "", "more than "

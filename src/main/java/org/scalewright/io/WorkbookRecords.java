@@ -80,14 +80,13 @@ final class WorkbookRecords {
     }
 
     private static List<String> cells(Path file, Row row, List<SheetProblem> problems) {
-        int width = Math.max(row.getLastCellNum(), 0);
-        if (width > CsvTable.MAX_CELLS) {
-            // only trailing cells beyond the limit that hold nothing are allowed
-            width = CsvTable.MAX_CELLS + 1;
-        }
-        List<String> out = new ArrayList<>(width);
-        for (int c = 0; c < width; c++) {
+        List<String> out = new ArrayList<>();
+        for (int c = 0; c < Math.max(row.getLastCellNum(), 0); c++) {
             out.add(text(file, row.getCell(c), problems));
+        }
+        // a cell formatted but empty counts in the row's width; it holds nothing
+        while (!out.isEmpty() && out.get(out.size() - 1).isBlank()) {
+            out.remove(out.size() - 1);
         }
         return out;
     }
