@@ -114,6 +114,11 @@ public final class BuiltInData {
         return AnalysisSettings.of(materials(), astmMinimum());
     }
 
+    /** @return a bundled table of {@code data/} as it is read */
+    static CsvTable table(String name) {
+        return resource(name);
+    }
+
     private static CsvTable resource(String name) {
         try (InputStream in = BuiltInData.class.getResourceAsStream(DIR + name)) {
             if (in == null) {
