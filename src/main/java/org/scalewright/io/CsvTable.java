@@ -110,7 +110,7 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
         }
         CsvTable t = dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), List.copyOf(commentLines),
                 header, headerLine, List.copyOf(rows)));
-        return t.withPlainNumbers(DecimalReading.of(file, records.delimiter(), t.header(), t.rows(), TEXT_COLUMNS));
+        return t.withPlainNumbers(DecimalReading.of(file, records.delimiter(), t.header(), t.rows(), t::isText));
     }
 
     /**
@@ -124,7 +124,7 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
             List<String> cells = new ArrayList<>(r.cells());
             for (int c = 0; c < cells.size(); c++) {
                 String name = c < header.size() ? header.get(c) : "";
-                if (!TEXT_COLUMNS.contains(name)) {
+                if (!isText(c)) {
                     String p = reading.plain(cells.get(c), r.line(), name, problems);
                     cells.set(c, p == null ? cells.get(c) : p);
                 }
@@ -139,6 +139,11 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
             plainComments = comments.stream().map(CsvTable::plainSetting).toList();
         }
         return new CsvTable(file, plainComments, commentLines, header, headerLine, List.copyOf(plain));
+    }
+
+    /** @return true when the column at {@code position} holds words, not numbers */
+    private boolean isText(int position) {
+        return position < header.size() && TEXT_COLUMNS.contains(header.get(position));
     }
 
     /** A {@code # name: 442,5} setting of a decimal-comma file, its number with a point. */

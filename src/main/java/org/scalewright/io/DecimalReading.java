@@ -48,19 +48,19 @@ final class DecimalReading {
 
     /**
      * @param delimiter the file's delimiter, 0 for a workbook
-     * @param header    the header names, lower-cased
+     * @param header    the header names, lower-cased, for the messages
      * @param rows      the data rows
-     * @param textColumns header names of the columns that hold words, not numbers (not looked at)
+     * @param textColumn true for the positions of columns that hold words, not numbers (not looked at)
      */
     static DecimalReading of(Path file, char delimiter, List<String> header, List<CsvTable.Row> rows,
-                             List<String> textColumns) {
+                             java.util.function.IntPredicate textColumn) {
         Shown comma = null;
         Shown point = null;
         if (delimiter == ';' || delimiter == '\t') {
             for (CsvTable.Row r : rows) {
                 for (int c = 0; c < r.cells().size(); c++) {
                     String name = c < header.size() ? header.get(c) : "";
-                    if (textColumns.contains(name)) {
+                    if (textColumn.test(c)) {
                         continue;
                     }
                     String cell = r.cells().get(c);
