@@ -90,18 +90,30 @@ final class CsvRecords {
         return s.startsWith("#") || s.startsWith("\"#");
     }
 
-    /** A comment line's text; a stray quote in it (a 6" bolt) leaves the line as it is. */
+    /**
+     * A comment line's text. A comment whose cells a spreadsheet quoted ({@code "# title: Grand"," 1907",,})
+     * or that was written as one quoted cell after the mark ({@code #,"text"}, {@code #;"text"}) is split
+     * as CSV; any other is taken as it stands, without the empty cells a spreadsheet padded it with, so
+     * that quotes typed in it stay as typed.
+     */
     private static String commentOf(String line, char delimiter) {
-        CSVParser parser = parser(delimiter);
-        try {
-            String[] cells = parser.parseLine(line);
-            if (!parser.isPending()) {
-                return SheetRecords.commentText(Arrays.asList(cells));
+        String s = line.strip();
+        if (s.startsWith("\"") || s.startsWith("#" + delimiter + "\"")) {
+            CSVParser parser = parser(delimiter);
+            try {
+                String[] cells = parser.parseLine(s);
+                if (!parser.isPending()) {
+                    return SheetRecords.commentText(Arrays.asList(cells));
+                }
+            } catch (IOException e) {
+                // taken as it stands below
             }
-        } catch (IOException e) {
-            // fall through to the line as it is
         }
-        return CommentLines.textOf(line.strip().replaceAll("[" + delimiter + "\\s]+$", ""));
+        int end = s.length();
+        while (end > 1 && (s.charAt(end - 1) == delimiter || Character.isWhitespace(s.charAt(end - 1)))) {
+            end--;
+        }
+        return CommentLines.textOf(s.substring(0, end));
     }
 
     /**

@@ -84,4 +84,43 @@ class SpreadsheetSheetsTest {
         assertEquals("wire_mm", p.column());
         assertTrue(p.message().contains("'1.143'") && p.message().contains("thousands separator"), p.message());
     }
+
+    @Test
+    void anOpenDocumentSpreadsheetIsRefusedWithWhatToDo() {
+        BadInputException e = assertThrows(BadInputException.class,
+                () -> ScaleSheetReader.standard().read(fixture("grand.ods")));
+        assertEquals("grand.ods: is an OpenDocument spreadsheet (.ods), which this program does not read; "
+                + "save it as .xlsx or .csv", e.getMessage());
+    }
+
+    @Test
+    void aDateInAWorkbookIsRefusedWithItsCell(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path file = dir.resolve("dated.xlsx");
+        try (var book = new org.apache.poi.xssf.usermodel.XSSFWorkbook()) {
+            var sheet = book.createSheet("sheet");
+            String[] head = {"key", "strings", "length_mm", "wire_mm"};
+            var h = sheet.createRow(0);
+            for (int i = 0; i < head.length; i++) {
+                h.createCell(i).setCellValue(head[i]);
+            }
+            var r = sheet.createRow(1);
+            r.createCell(0).setCellValue(40);
+            r.createCell(1).setCellValue(3);
+            r.createCell(2).setCellValue(1200.5);
+            // what a German spreadsheet may make of 1.143 typed into a cell: the first of November
+            var date = r.createCell(3);
+            date.setCellValue(java.time.LocalDate.of(2026, 11, 1));
+            var style = book.createCellStyle();
+            style.setDataFormat(book.createDataFormat().getFormat("dd.mm.yyyy"));
+            date.setCellStyle(style);
+            try (var out = java.nio.file.Files.newOutputStream(file)) {
+                book.write(out);
+            }
+        }
+        BadInputException e = assertThrows(BadInputException.class, () -> ScaleSheetReader.standard().read(file));
+        SheetProblem p = e.problems().get(0);
+        assertEquals(2, p.line());
+        assertEquals("D2", p.column());
+        assertTrue(p.message().contains("formatted as a date"), p.message());
+    }
 }
