@@ -11,8 +11,8 @@ import java.util.List;
 /**
  * Splits the text of a CSV file into comment lines and records (OpenCSV's parser): the delimiter,
  * {@code ,} {@code ;} or tab, is the one the header line holds outside quotes; a quoted cell may span
- * lines; a line whose first non-blank character is {@code #}, outside a quoted cell, is a comment,
- * its trailing empty cells left out ({@link SheetRecords#commentText}).
+ * lines; a line whose first non-blank character is {@code #}, or whose quoted first cell begins with
+ * one, outside a quoted cell, is a comment, its trailing empty cells left out.
  */
 final class CsvRecords {
     private static final String DELIMITERS = ",;\t";

@@ -6,10 +6,12 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * A CSV file split into its comment lines, its header and its data rows, each row keeping its
- * line number. Lines whose first non-blank character is {@code #} are comments (a comment written
- * as {@code #,"quoted text"} is read as its text, {@link CommentLines}); blank lines are skipped.
- * Quoted cells may hold commas and quotes (OpenCSV's parser).
+ * A sheet (CSV file or workbook) split into its comment lines, its header and its data rows, each row
+ * keeping its line number: the one reading path of every input (DESIGN §4). Lines whose first cell
+ * begins with {@code #} are comments (a comment written as {@code #,"quoted text"} is read as its
+ * text, {@link CommentLines}; padding a spreadsheet added is left out); blank lines are skipped.
+ * Quoted cells may hold delimiters, quotes and line breaks (OpenCSV's parser). Number cells are
+ * given as plain decimals with a point ({@link DecimalReading}).
  *
  * @param file     the file read
  * @param comments the text of the comment lines before the header, without the {@code #}

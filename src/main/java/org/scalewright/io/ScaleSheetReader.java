@@ -54,7 +54,7 @@ public final class ScaleSheetReader {
     }
 
     /**
-     * @param file a UTF-8 CSV scale sheet
+     * @param file a scale sheet: CSV (delimiter, encoding and decimal mark as DESIGN §4 allows) or .xlsx
      * @return the scale, with the sheet's layout kept for writing back
      * @throws BadInputException listing every problem (file, line, column, what was expected)
      */
