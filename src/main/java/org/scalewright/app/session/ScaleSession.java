@@ -214,8 +214,8 @@ public final class ScaleSession {
         String told = notes.isEmpty() ? "" : "; " + String.join("; ", notes);
         inform(!saveBack ? "opened the demo sheet " + sheet.getFileName() + " (" + loaded.notes().size()
                 + " notes); Save asks for a new file, so the demo stays as it is"
-                : asWritten ? "opened " + sheet + " (" + loaded.notes().size() + " notes)" + told + "; Save asks for "
-                + "a new CSV file, so the spreadsheet's file stays as it is"
+                : asWritten ? "opened " + sheet.getFileName() + " (" + loaded.notes().size() + " notes)" + told
+                + "; Save asks for a new CSV file, so the spreadsheet's file stays as it is"
                 : "opened " + sheet + " (" + loaded.notes().size() + " notes)");
     }
 
