@@ -30,10 +30,9 @@ import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.StrengthTable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.Spec;
 
 /** {@code check-wire}: what replacement wire, a pitch standard and a pitch raise do to every string. */
 @Command(name = "check-wire", mixinStandardHelpOptions = true, sortOptions = false,
@@ -102,21 +101,15 @@ public final class CheckWireCommand implements Callable<Integer> {
                     + "practice, no source); a decimal comma is taken too (7,5kN)")
     String stageAbove;
 
-    @Option(names = "--out", paramLabel = "FILE.csv", description = "write the per-note results as CSV (SI units)")
-    Path out;
-
-    @Spec
-    CommandSpec spec;
+    @Mixin
+    CsvOutput out;
 
     @Override
     public Integer call() throws Exception {
         WireCheckRequest request = request();
         WireCheckReport report = WireCheck.run(request);
-        PrintWriter w = spec.commandLine().getOut();
-        String closing = Outputs.csvIfAsked(out, WireCheckCsv.comments(report), WireCheckCsv.HEADER, WireCheckCsv.rows(report));
-        print(report, w);
-        Outputs.printClosing(w, closing);
-        return ExitStatus.OK;
+        return out.writeThenPrint(WireCheckCsv.comments(report), WireCheckCsv.HEADER, WireCheckCsv.rows(report),
+                w -> print(report, w));
     }
 
     private WireCheckRequest request() throws BadInputException {

@@ -16,7 +16,8 @@ import picocli.CommandLine.Parameters;
 
 /** The inputs most commands share: the scale sheet, the pitch standard and the strength table. */
 public final class Inputs {
-    @Parameters(index = "0", paramLabel = "SCALE.csv", description = "the scale sheet (CSV, see scales/README.md)")
+    @Parameters(index = "0", paramLabel = "SCALE.csv", description = "the scale sheet: CSV (',' ';' or tab between cells; UTF-8, UTF-16 or "
+            + "Windows-1252) or an .xlsx workbook, see scales/README.md")
     Path scaleFile;
 
     @Option(names = "--a4", paramLabel = "HZ",

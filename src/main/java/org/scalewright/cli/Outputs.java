@@ -4,7 +4,8 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import org.scalewright.io.AtomicFiles;
-import org.scalewright.io.CsvReportWriter;
+import org.scalewright.io.CsvDialect;
+import org.scalewright.io.TableFiles;
 import org.scalewright.io.OutputRefused;
 import org.scalewright.io.ScaleSheetWriter;
 import org.scalewright.model.Scale;
@@ -19,11 +20,19 @@ public final class Outputs {
     private Outputs() {
     }
 
-    /** Writes a results CSV atomically, keeping a file it replaces as {@code NAME.bak}. */
-    public static void csv(Path file, List<String> comments, List<String> header, List<List<String>> rows) {
+    /**
+     * Writes a table of results atomically, keeping a file it replaces as {@code NAME.bak}: an .xlsx
+     * workbook when the name ends in .xlsx, else CSV in {@code dialect} ({@link TableFiles}).
+     */
+    public static void table(Path file, CsvDialect dialect, List<String> comments, List<String> header,
+                             List<List<String>> rows) {
         checkTarget(file);
+        String refusal = TableFiles.refusal(file);
+        if (refusal != null) {
+            throw new UserError("--out: " + refusal);
+        }
         try {
-            CsvReportWriter.write(file, comments, header, rows, true);
+            TableFiles.write(file, "results", comments, header, rows, dialect, true);
         } catch (OutputRefused e) {
             throw refused(file, e);
         } catch (IOException e) {
@@ -37,11 +46,12 @@ public final class Outputs {
      *
      * @return a closing line to print after the results ("wrote FILE"), or "" when no file was asked for
      */
-    public static String csvIfAsked(Path out, List<String> comments, List<String> header, List<List<String>> rows) {
+    public static String tableIfAsked(Path out, CsvDialect dialect, List<String> comments, List<String> header,
+                                      List<List<String>> rows) {
         if (out == null) {
             return "";
         }
-        csv(out, comments, header, rows);
+        table(out, dialect, comments, header, rows);
         return "wrote " + out;
     }
 
@@ -56,6 +66,10 @@ public final class Outputs {
     /** Writes a scale sheet atomically, keeping the input's units and a file it replaces as {@code NAME.bak}. */
     public static void sheet(Path file, Scale scale) {
         checkTarget(file);
+        if (TableFiles.isWorkbook(file) || TableFiles.refusal(file) != null) {
+            throw new UserError("--out: a scale sheet is written as CSV (it is read back by this program and by "
+                    + "any spreadsheet); name it .csv");
+        }
         try {
             ScaleSheetWriter.write(scale, file, true);
         } catch (OutputRefused e) {

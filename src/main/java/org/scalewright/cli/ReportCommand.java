@@ -34,7 +34,8 @@ import picocli.CommandLine.Spec;
         description = {"Write a report of a scale into a directory.",
                 "Writes report.pdf; the curves as PNG and SVG (tension, break-percent, inharmonicity, "
                         + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv "
-                        + "(stretch_cents for the --octave type; the PDF gives all three). "
+                        + "(stretch_cents for the --octave type; the PDF gives all three), and the same tables "
+                        + "as one workbook, tables.xlsx, for spreadsheets. "
                         + "Nothing is written if any input is bad."})
 public final class ReportCommand extends ScaleCommand {
     @Option(names = "--out", paramLabel = "DIR", required = true,
@@ -74,6 +75,9 @@ public final class ReportCommand extends ScaleCommand {
     @Spec
     CommandSpec spec;
 
+    @Mixin
+    DecimalCommaOption dialect;
+
     /** Draws the report's charts (tests put a failing one here). */
     Reports.ChartDrawer charts = ReportCharts::reportCharts;
 
@@ -101,7 +105,7 @@ public final class ReportCommand extends ScaleCommand {
         }
         ReportContent content = ReportContent.compute(inputs.scaleFile.getFileName().toString(), a, ref, u, type,
                 allowances).withPaper(pp);
-        ReportFiles files = Reports.make(content, charts);
+        ReportFiles files = Reports.make(content, charts, dialect.dialect());
         List<Path> written;
         try {
             written = files.writeTo(out);

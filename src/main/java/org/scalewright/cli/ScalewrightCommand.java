@@ -1,6 +1,7 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
+import org.scalewright.io.ReadNotes;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -65,7 +66,11 @@ public final class ScalewrightCommand implements Runnable {
                 err.flush();
                 return ExitStatus.BAD_INPUT;
             }
-            return new CommandLine.RunLast().execute(parsed);
+            // how an input file was read (its encoding, delimiter, decimal comma) is told before the results
+            return ReadNotes.toldTo(note -> {
+                err.println("note: " + note);
+                err.flush();
+            }, () -> new CommandLine.RunLast().execute(parsed));
         });
         if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
             err.println("error: unknown command '" + args[0] + "'; commands: "

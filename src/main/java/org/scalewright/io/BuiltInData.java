@@ -114,12 +114,17 @@ public final class BuiltInData {
         return AnalysisSettings.of(materials(), astmMinimum());
     }
 
+    /** @return a bundled table of {@code data/} as it is read */
+    static CsvTable table(String name) {
+        return resource(name);
+    }
+
     private static CsvTable resource(String name) {
         try (InputStream in = BuiltInData.class.getResourceAsStream(DIR + name)) {
             if (in == null) {
                 throw new IllegalStateException("missing built-in table " + name);
             }
-            return CsvTable.parse(Path.of(name), TextFile.lines(Path.of(name), in.readAllBytes()),
+            return CsvTable.parse(Path.of(name), in.readAllBytes(),
                     CsvTable.RowLimit.TABLE);
         } catch (IOException e) {
             throw new UncheckedIOException(e);

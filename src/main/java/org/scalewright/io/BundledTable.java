@@ -25,7 +25,7 @@ final class BundledTable {
                 throw new IllegalStateException("missing built-in table " + resource);
             }
             Path name = Path.of(resource.substring(resource.lastIndexOf('/') + 1));
-            return parser.parse(name, CsvTable.parse(name, TextFile.lines(name, in.readAllBytes()),
+            return parser.parse(name, CsvTable.parse(name, in.readAllBytes(),
                     CsvTable.RowLimit.TABLE));
         } catch (IOException e) {
             throw new UncheckedIOException(e);

@@ -35,23 +35,39 @@ public final class CsvReportWriter {
      */
     public static void write(Path file, List<String> comments, List<String> header, List<List<String>> rows,
                              boolean keepBackup) throws IOException {
-        AtomicFiles.write(file, toText(comments, header, rows).getBytes(StandardCharsets.UTF_8), keepBackup);
+        AtomicFiles.write(file, toBytes(comments, header, rows, CsvDialect.PLAIN), keepBackup);
+    }
+
+    /** @return the file's bytes in {@code dialect}: a byte-order mark where it has one, then the UTF-8 text */
+    public static byte[] toBytes(List<String> comments, List<String> header, List<List<String>> rows,
+                                 CsvDialect dialect) {
+        byte[] start = dialect.start();
+        byte[] text = toText(comments, header, rows, dialect).getBytes(StandardCharsets.UTF_8);
+        byte[] all = java.util.Arrays.copyOf(start, start.length + text.length);
+        System.arraycopy(text, 0, all, start.length, text.length);
+        return all;
     }
 
     /** @return the CSV text */
     public static String toText(List<String> comments, List<String> header, List<List<String>> rows) {
+        return toText(comments, header, rows, CsvDialect.PLAIN);
+    }
+
+    /** @return the CSV text in {@code dialect} */
+    public static String toText(List<String> comments, List<String> header, List<List<String>> rows,
+                                CsvDialect dialect) {
         StringWriter out = new StringWriter();
         for (String c : comments) {
-            out.write(CommentLines.line(c) + "\n");
+            out.write(dialect.comment(c) + "\n");
         }
-        try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.DEFAULT_QUOTE_CHARACTER,
+        try (CSVWriter csv = new CSVWriter(out, dialect.separator(), ICSVWriter.DEFAULT_QUOTE_CHARACTER,
                 ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n")) {
             csv.writeNext(header.toArray(String[]::new), false);
             for (List<String> row : rows) {
                 if (row.size() != header.size()) {
                     throw new IllegalArgumentException("row has " + row.size() + " cells, header " + header.size());
                 }
-                csv.writeNext(row.stream().map(CsvCells::safeText).toArray(String[]::new), false);
+                csv.writeNext(row.stream().map(CsvCells::safeText).map(dialect::number).toArray(String[]::new), false);
             }
         } catch (IOException e) {
             throw new IllegalStateException("writing to memory failed", e);

@@ -1,18 +1,17 @@
 package org.scalewright.io;
 
-import com.opencsv.CSVParser;
-import com.opencsv.CSVParserBuilder;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
 /**
- * A CSV file split into its comment lines, its header and its data rows, each row keeping its
- * line number. Lines whose first non-blank character is {@code #} are comments (a comment written
- * as {@code #,"quoted text"} is read as its text, {@link CommentLines}); blank lines are skipped.
- * Quoted cells may hold commas and quotes (OpenCSV's parser).
+ * A sheet (CSV file or workbook) split into its comment lines, its header and its data rows, each row
+ * keeping its line number: the one reading path of every input (DESIGN §4). Lines whose first cell
+ * begins with {@code #} are comments (a comment written as {@code #,"quoted text"} is read as its
+ * text, {@link CommentLines}; padding a spreadsheet added is left out); blank lines are skipped.
+ * Quoted cells may hold delimiters, quotes and line breaks (OpenCSV's parser). Number cells are
+ * given as plain decimals with a point ({@link DecimalReading}).
  *
  * @param file     the file read
  * @param comments the text of the comment lines before the header, without the {@code #}
@@ -42,68 +41,116 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
         static final RowLimit TABLE = new RowLimit(InputLimits.MAX_TABLE_ROWS, "one row per diameter");
     }
 
+    /** Header names of the columns that hold words, not numbers, in any file the program reads. */
+    static final List<String> TEXT_COLUMNS = List.of("remark", "section", "wrap_metal", "metal", "note");
+
+    /**
+     * Reads a CSV file or a workbook (DESIGN §4, "Sheets come from spreadsheets"): the encoding from the
+     * bytes ({@link TextFile}), the delimiter from the header ({@link CsvRecords}), a workbook's first
+     * sheet ({@link WorkbookRecords}); number cells are given back as plain decimals with a point
+     * ({@link DecimalReading}). How the file was read is told to {@link ReadNotes} where it is worth
+     * telling.
+     */
     static CsvTable read(Path file, RowLimit limit) throws BadInputException {
-        return parse(file, TextFile.lines(file), limit);
+        return parse(file, TextFile.bytes(file), limit);
     }
 
-    static CsvTable parse(Path file, List<String> lines, RowLimit limit) throws BadInputException {
-        CSVParser parser = new CSVParserBuilder().withIgnoreLeadingWhiteSpace(true).build();
+    /** As {@link #read}, from bytes already in memory; {@code file} names them in messages. */
+    static CsvTable parse(Path file, byte[] bytes, RowLimit limit) throws BadInputException {
+        SheetRecords records;
+        if (WorkbookRecords.isWorkbook(bytes)) {
+            records = WorkbookRecords.read(file, bytes);
+        } else {
+            TextFile.Text text = TextFile.decode(file, bytes);
+            records = CsvRecords.split(file, text.text(), text.note());
+        }
+        CsvTable table = build(file, records, limit);
+        for (String note : records.notes()) {
+            ReadNotes.tell(file, note);
+        }
+        return table;
+    }
+
+    private static CsvTable build(Path file, SheetRecords records, RowLimit limit) throws BadInputException {
         List<String> comments = new ArrayList<>();
         List<Integer> commentLines = new ArrayList<>();
         List<String> header = null;
         int headerLine = 0;
         List<Row> rows = new ArrayList<>();
-        for (int i = 0; i < lines.size(); i++) {
-            String line = lines.get(i);
-            String stripped = line.strip();
-            if (stripped.isEmpty()) {
-                continue;
-            }
-            String comment = CommentLines.textOf(stripped);
-            if (comment != null) {
+        for (SheetRecords.Record r : records.records()) {
+            if (r.isComment()) {
                 if (header == null) {
-                    comments.add(comment);
-                    commentLines.add(i + 1);
+                    comments.add(r.comment());
+                    commentLines.add(r.line());
                 }
                 continue;
             }
-            String[] cells;
-            try {
-                cells = parser.parseLine(line);
-            } catch (IOException e) {
-                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "",
-                        "cannot be split into cells: " + e.getMessage())));
+            if (r.cells().size() > MAX_CELLS) {
+                throw new BadInputException(List.of(new SheetProblem(file, r.line(), "", "the line has "
+                        + r.cells().size() + " cells; at most " + MAX_CELLS + " are read")));
             }
-            if (parser.isPending()) {
-                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "",
-                        "a quoted cell is not closed on this line")));
-            }
-            if (cells.length > MAX_CELLS) {
-                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "", "the line has "
-                        + cells.length + " cells; at most " + MAX_CELLS + " are read")));
+            List<String> trimmed = new ArrayList<>(r.cells().size());
+            for (String c : r.cells()) {
+                trimmed.add(c.strip());
             }
             if (header != null && rows.size() == limit.maxRows()) {
-                throw new BadInputException(List.of(new SheetProblem(file, i + 1, "", "more than "
+                throw new BadInputException(List.of(new SheetProblem(file, r.line(), "", "more than "
                         + limit.maxRows() + " rows; at most " + limit.maxRows() + " are read (" + limit.what()
                         + ")")));
             }
-            List<String> trimmed = new ArrayList<>(cells.length);
-            for (String c : cells) {
-                trimmed.add(c.strip());
-            }
             if (header == null) {
                 header = trimmed.stream().map(h -> h.toLowerCase(Locale.ROOT)).toList();
-                headerLine = i + 1;
+                headerLine = r.line();
             } else {
-                rows.add(new Row(i + 1, trimmed));
+                rows.add(new Row(r.line(), trimmed));
             }
         }
         if (header == null) {
-            throw BadInputException.of(file, lines.isEmpty() ? "the file is empty; expected a header line and rows"
+            throw BadInputException.of(file, records.records().isEmpty()
+                    ? "the file is empty; expected a header line and rows"
                     : "has no header line; expected a line of column names such as key,strings,length_mm,wire");
         }
-        return dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), List.copyOf(commentLines), header,
-                headerLine, List.copyOf(rows)));
+        CsvTable t = dropBlankTrailingColumns(new CsvTable(file, List.copyOf(comments), List.copyOf(commentLines),
+                header, headerLine, List.copyOf(rows)));
+        return t.withPlainNumbers(DecimalReading.of(file, records.delimiter(), t.header(), t.rows(), t::isText));
+    }
+
+    /**
+     * @return this table with every cell of a number column written as a plain decimal with a point
+     * @throws BadInputException naming every cell whose reading depends on the locale
+     */
+    private CsvTable withPlainNumbers(DecimalReading reading) throws BadInputException {
+        List<SheetProblem> problems = new ArrayList<>();
+        List<Row> plain = new ArrayList<>(rows.size());
+        for (Row r : rows) {
+            List<String> cells = new ArrayList<>(r.cells());
+            for (int c = 0; c < cells.size(); c++) {
+                String name = c < header.size() ? header.get(c) : "";
+                if (!isText(c)) {
+                    String p = reading.plain(cells.get(c), r.line(), name, problems);
+                    cells.set(c, p == null ? cells.get(c) : p);
+                }
+            }
+            plain.add(new Row(r.line(), List.copyOf(cells)));
+        }
+        if (!problems.isEmpty()) {
+            throw new BadInputException(problems);
+        }
+        List<String> plainComments = comments;
+        if (reading.commaIsDecimal()) {
+            plainComments = comments.stream().map(CsvTable::plainSetting).toList();
+        }
+        return new CsvTable(file, plainComments, commentLines, header, headerLine, List.copyOf(plain));
+    }
+
+    /** @return true when the column at {@code position} holds words, not numbers */
+    private boolean isText(int position) {
+        return position < header.size() && TEXT_COLUMNS.contains(header.get(position));
+    }
+
+    /** A {@code # name: 442,5} setting of a decimal-comma file, its number with a point. */
+    private static String plainSetting(String comment) {
+        return comment.matches("[^:]+:\\s*[+-]?\\d+,\\d+\\s*") ? comment.replace(',', '.') : comment;
     }
 
     /**

@@ -54,7 +54,7 @@ public final class ScaleSheetReader {
     }
 
     /**
-     * @param file a UTF-8 CSV scale sheet
+     * @param file a scale sheet: CSV (delimiter, encoding and decimal mark as DESIGN §4 allows) or .xlsx
      * @return the scale, with the sheet's layout kept for writing back
      * @throws BadInputException listing every problem (file, line, column, what was expected)
      */
@@ -64,7 +64,7 @@ public final class ScaleSheetReader {
 
     /** Reads a sheet from bytes already in memory; {@code file} names it in messages. */
     public Scale read(Path file, byte[] content) throws BadInputException {
-        return parse(file, CsvTable.parse(file, TextFile.lines(file, content), CsvTable.RowLimit.KEYS));
+        return parse(file, CsvTable.parse(file, content, CsvTable.RowLimit.KEYS));
     }
 
     private Scale parse(Path file, CsvTable table) throws BadInputException {

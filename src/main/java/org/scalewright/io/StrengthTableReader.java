@@ -19,7 +19,7 @@ public final class StrengthTableReader {
     }
 
     /**
-     * @param file a UTF-8 CSV strength table
+     * @param file a strength table, read as a scale sheet is (DESIGN §4)
      * @return the table, named after its first comment line (or the file name)
      * @throws BadInputException listing every problem with line and column
      */

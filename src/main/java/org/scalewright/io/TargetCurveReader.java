@@ -22,7 +22,7 @@ public final class TargetCurveReader {
     }
 
     /**
-     * @param file a UTF-8 CSV file
+     * @param file a CSV file or workbook, read as a scale sheet is (DESIGN §4)
      * @return the curve from the lowest key given to the highest, N
      * @throws BadInputException listing every problem with line and column
      */

@@ -22,7 +22,7 @@ public final class WrapCatalogueReader {
     }
 
     /**
-     * @param file a UTF-8 CSV wrap-wire catalogue
+     * @param file a wrap-wire catalogue, read as a scale sheet is (DESIGN §4)
      * @return the wire by metal
      * @throws BadInputException listing every problem with line and column
      */

@@ -23,6 +23,11 @@ public record CsvSheet(List<String> comments, List<String> header, List<List<Str
         }
     }
 
+    /** @return the CSV file's bytes in {@code dialect}, spreadsheet-safe */
+    public byte[] toBytes(org.scalewright.io.CsvDialect dialect) {
+        return org.scalewright.io.CsvReportWriter.toBytes(comments, header, rows, dialect);
+    }
+
     /** @return the CSV text, spreadsheet-safe */
     public String toText() {
         return org.scalewright.io.CsvReportWriter.toText(comments, header, rows);

@@ -1,6 +1,7 @@
 package org.scalewright.report;
 
 import java.util.List;
+import org.scalewright.io.CsvDialect;
 
 /**
  * The one entry point of the report layer: from the computed content to every file of a
@@ -31,8 +32,13 @@ public final class Reports {
      *                        what to install
      */
     public static ReportFiles make(ReportContent content, ChartDrawer charts) {
+        return make(content, charts, CsvDialect.PLAIN);
+    }
+
+    /** As {@link #make(ReportContent, ChartDrawer)}, the CSV files in {@code dialect}. */
+    public static ReportFiles make(ReportContent content, ChartDrawer charts, CsvDialect dialect) {
         List<ReportChart> drawn = ChartsNotDrawn.guard(() -> charts.draw(content));
-        return ReportPackage.files(content, drawn);
+        return ReportPackage.files(content, drawn, dialect);
     }
 
     /** Draws the charts of a report ({@link ReportCharts#reportCharts} in the program). */

@@ -138,6 +138,9 @@ class LayerRulesTest {
         noClasses().that().resideOutsideOfPackage("org.scalewright.archive..")
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
                 .because("only the workshop archive uses JDBC and SQLite").check(classes);
+        noClasses().that().resideOutsideOfPackage("org.scalewright.io..")
+                .should().dependOnClassesThat().resideInAPackage("org.apache.poi..")
+                .because("spreadsheets are read and written in io alone").check(classes);
     }
 
     @Test

@@ -68,10 +68,10 @@ class ReportCommandTest {
         Run r = run("report", sheet, "--out", dir.toString());
         assertEquals(0, r.status(), r.err());
         assertEquals("", r.err());
-        assertTrue(r.out().contains("wrote 14 files"), r.out());
+        assertTrue(r.out().contains("wrote 15 files"), r.out());
         assertTrue(count(dir, ".png") >= 3 && count(dir, ".svg") >= 3);
         for (String f : List.of("report.pdf", "results.csv", "schedule.csv", "wound-order.csv", "wire-order.csv",
-                "stretch.csv")) {
+                "stretch.csv", "tables.xlsx")) {
             assertTrue(Files.size(dir.resolve(f)) > 0, f);
         }
         try (PDDocument doc = Loader.loadPDF(dir.resolve("report.pdf").toFile())) {

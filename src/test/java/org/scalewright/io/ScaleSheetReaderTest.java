@@ -262,9 +262,14 @@ class ScaleSheetReaderTest {
         BadInputException e = assertThrows(BadInputException.class, () -> ScaleSheetReader.standard().read(f));
         assertEquals(1, e.problems().size());
         assertTrue(e.getMessage().startsWith("bad.csv: is not a text file"), e.getMessage());
+        // not UTF-8: read as Windows-1252, and said so (DESIGN §4)
         Files.write(f, new byte[] {'k', 'e', 'y', (byte) 0xC3, 0x28, '\n'});
-        e = assertThrows(BadInputException.class, () -> ScaleSheetReader.standard().read(f));
-        assertTrue(e.getMessage().contains("not UTF-8"), e.getMessage());
+        List<String> notes = new java.util.ArrayList<>();
+        e = assertThrows(BadInputException.class, () -> ReadNotes.toldTo(notes::add,
+                () -> ScaleSheetReader.standard().read(f)));
+        assertTrue(e.getMessage().contains("column keyã(: unknown column"), e.getMessage());
+        assertEquals(1, notes.size());
+        assertTrue(notes.get(0).startsWith("bad.csv: read as Windows-1252 text (the file is not UTF-8)"), notes.get(0));
     }
 
     @Test
@@ -278,7 +283,7 @@ class ScaleSheetReaderTest {
     void otherBadCells() throws IOException {
         only("key,strings,length_mm,wire_mm,wrap1_mm,wrap_metal\n1,1,1500,1.5,1.0,brass\n", 2, "wrap_metal",
                 "wrap metal must be copper, iron or steel, was 'brass'");
-        only(HEADER + "1,1,\"1500,1.5\n", 2, "", "cannot be split into cells");
+        only(HEADER + "1,1,\"1500,1.5\n", 2, "", "a quoted cell that begins on this line is not closed");
         only("# title: x\n# a4_hz: high\n" + HEADER + "1,1,1500,1.5\n", 2, "", "a4_hz");
         only("# title: x\n# a4_hz: 1200\n" + HEADER + "1,1,1500,1.5\n", 2, "",
                 "the '# a4_hz:' comment: pitch standard A4 must be 300 to 600 Hz, was 1200");

@@ -44,11 +44,11 @@ class ReportFilesTest {
     }
 
     @Test
-    void aReportPackageHasThePdfTheChartsAndTheFiveCsvFiles() {
+    void aReportPackageHasThePdfTheChartsTheFiveCsvFilesAndTheirWorkbook() {
         ReportFiles f = ReportPackage.files(ReportFixtures.content(ReportUnits.METRIC), ReportFixtures.charts());
         assertEquals(List.of("report.pdf", "tension.png", "tension.svg", "break-percent.png", "break-percent.svg",
                 "inharmonicity.png", "inharmonicity.svg", "stretch.png", "stretch.svg", "results.csv",
-                "schedule.csv", "wound-order.csv", "wire-order.csv", "stretch.csv"), f.names());
+                "schedule.csv", "wound-order.csv", "wire-order.csv", "stretch.csv", "tables.xlsx"), f.names());
         assertTrue(new String(f.content("report.pdf"), 0, 5).startsWith("%PDF-"));
     }
 }

@@ -33,7 +33,8 @@ import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.AtomicFiles;
-import org.scalewright.io.CsvReportWriter;
+import org.scalewright.io.CsvDialect;
+import org.scalewright.io.TableFiles;
 import org.scalewright.model.NumberText;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.report.ChartsNotDrawn;
@@ -324,8 +325,8 @@ public final class ExportViewModel {
             case WOUND_ORDER -> csv(file, WoundOrderCsv.sheet(c.woundOrder(), c.units(), head));
             case WIRE_ORDER -> csv(file, WireOrderCsv.sheet(c.wireOrder(), c.units(), head));
             case STRETCH_TABLE -> csv(file, StretchCsv.sheet(c.chosenStretch(), c.stretchInOrder(), head));
-            case RESULTS -> CsvReportWriter.write(file, AnalysisCsv.comments(c.analysis()), AnalysisCsv.HEADER,
-                    AnalysisCsv.rows(c.analysis()));
+            case RESULTS -> csv(file, new CsvSheet(AnalysisCsv.comments(c.analysis()), AnalysisCsv.HEADER,
+                    AnalysisCsv.rows(c.analysis())));
             case REPORT -> AtomicFiles.write(file, Reports.make(c, charts)
                     .content(ReportPackage.PDF), false);
             default -> {
@@ -341,8 +342,9 @@ public final class ExportViewModel {
         }
     }
 
+    /** A table: a workbook when the name chosen ends in .xlsx (io.TableFiles), else CSV. */
     private static void csv(Path file, CsvSheet s) throws IOException {
-        CsvReportWriter.write(file, s.comments(), s.header(), s.rows());
+        TableFiles.write(file, "results", s.comments(), s.header(), s.rows(), CsvDialect.PLAIN, false);
     }
 
     /** @return the chart of a chart piece, drawn in the display's units with the reference beside */

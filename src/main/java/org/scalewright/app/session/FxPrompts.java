@@ -41,7 +41,7 @@ public final class FxPrompts implements UserPrompts {
     @Override
     public Optional<Path> chooseSheetToOpen(String title) {
         FileChooser c = chooser(title);
-        c.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("Scale sheets (*.csv)", "*.csv"),
+        c.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("Sheets (*.csv, *.xlsx)", "*.csv", "*.xlsx", "*.txt"),
                 new FileChooser.ExtensionFilter("All files", "*"));
         return remember(c.showOpenDialog(owner));
     }

@@ -2,7 +2,9 @@ package org.scalewright.app.session;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.function.UnaryOperator;
 import javafx.beans.property.BooleanProperty;
@@ -18,6 +20,7 @@ import javafx.beans.property.SimpleObjectProperty;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
+import org.scalewright.io.ReadNotes;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.io.ScaleSheetWriter;
 import org.scalewright.model.PitchStandard;
@@ -195,19 +198,25 @@ public final class ScaleSession {
      * @throws BadInputException with every problem of the sheet
      */
     public void open(Path sheet, boolean saveBack) throws BadInputException {
-        Scale loaded = ScaleSheetReader.standard().read(sheet);
+        List<String> notes = new ArrayList<>();
+        Scale loaded = ReadNotes.toldTo(notes::add, () -> ScaleSheetReader.standard().read(sheet));
         // analysed once before anything changes, so that a fault leaves the session as it was
         ScaleAnalyzer.analyze(loaded, settings.get());
+        // a workbook, or a CSV file a spreadsheet wrote in its own way (notes), is not saved over with our CSV
+        boolean asWritten = !notes.isEmpty() || !sheet.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv");
         history.reset(loaded);
-        file.set(saveBack ? sheet : null);
+        file.set(saveBack && !asWritten ? sheet : null);
         documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo)"));
         selectedKey.set(null);
         reference.set(loaded);
         referenceName.set("as opened: " + sheet.getFileName());
         setScale(loaded);
-        inform(saveBack ? "opened " + sheet + " (" + loaded.notes().size() + " notes)"
-                : "opened the demo sheet " + sheet.getFileName() + " (" + loaded.notes().size()
-                + " notes); Save asks for a new file, so the demo stays as it is");
+        String told = notes.isEmpty() ? "" : "; " + String.join("; ", notes);
+        inform(!saveBack ? "opened the demo sheet " + sheet.getFileName() + " (" + loaded.notes().size()
+                + " notes); Save asks for a new file, so the demo stays as it is"
+                : asWritten ? "opened " + sheet.getFileName() + " (" + loaded.notes().size() + " notes)" + told
+                + "; Save asks for a new CSV file, so the spreadsheet's file stays as it is"
+                : "opened " + sheet + " (" + loaded.notes().size() + " notes)");
     }
 
     /**
@@ -284,8 +293,10 @@ public final class ScaleSession {
     }
 
     public void openReference(Path sheet) throws BadInputException {
-        setReference(ScaleSheetReader.standard().read(sheet), "from " + sheet.getFileName());
-        inform("reference scale read from " + sheet);
+        List<String> notes = new ArrayList<>();
+        setReference(ReadNotes.toldTo(notes::add, () -> ScaleSheetReader.standard().read(sheet)),
+                "from " + sheet.getFileName());
+        inform("reference scale read from " + sheet + (notes.isEmpty() ? "" : "; " + String.join("; ", notes)));
     }
 
     public BooleanProperty showReferenceProperty() {

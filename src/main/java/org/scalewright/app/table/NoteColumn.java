@@ -66,6 +66,11 @@ public enum NoteColumn {
         return group == Group.SPEC;
     }
 
+    /** @return true for a column whose entries are numbers (a pasted decimal comma is read there) */
+    boolean takesNumbers() {
+        return this != SECTION && this != REMARK && this != METAL && this != NOTE && this != FLAGS;
+    }
+
     Group group() {
         return group;
     }

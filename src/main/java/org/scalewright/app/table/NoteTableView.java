@@ -2,6 +2,7 @@ package org.scalewright.app.table;
 
 import java.util.Comparator;
 import java.util.EnumMap;
+import java.util.List;
 import java.util.Map;
 import javafx.beans.binding.Bindings;
 import javafx.beans.value.ChangeListener;
@@ -12,7 +13,11 @@ import javafx.scene.control.TablePosition;
 import javafx.scene.control.TableRow;
 import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
+import javafx.scene.input.Clipboard;
+import javafx.scene.input.ClipboardContent;
 import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
 import javafx.scene.input.KeyEvent;
 import org.scalewright.physics.FlagKind;
 
@@ -35,7 +40,8 @@ public final class NoteTableView {
         table.setItems(model.rows());
         table.setEditable(true);
         table.getSelectionModel().setCellSelectionEnabled(true);
-        table.getSelectionModel().setSelectionMode(SelectionMode.SINGLE);
+        // blocks of cells are chosen with Shift or the mouse, for the clipboard
+        table.getSelectionModel().setSelectionMode(SelectionMode.MULTIPLE);
         table.setPlaceholder(new Label("No sheet open: File > Open… (Ctrl+O)"));
         table.setTableMenuButtonVisible(true);
         table.setFixedCellSize(22); // every row one line: no per-row height measuring
@@ -121,6 +127,15 @@ public final class NoteTableView {
         if (table.getEditingCell() != null) {
             return;
         }
+        if (COPY.match(e) || PASTE.match(e)) {
+            if (COPY.match(e)) {
+                copyBlock();
+            } else {
+                pasteBlock();
+            }
+            e.consume();
+            return;
+        }
         TablePosition<NoteRow, ?> p = SheetCell.focused(table);
         if (p == null) {
             return;
@@ -157,6 +172,55 @@ public final class NoteTableView {
             table.edit(p.getRow(), castColumn(p));
             e.consume();
         }
+    }
+
+    private static final KeyCodeCombination COPY = new KeyCodeCombination(KeyCode.C, KeyCombination.SHORTCUT_DOWN);
+    private static final KeyCodeCombination PASTE = new KeyCodeCombination(KeyCode.V, KeyCombination.SHORTCUT_DOWN);
+
+    /** Ctrl+C: the chosen block (its bounding rectangle) as tab-separated text; headings when every row is chosen. */
+    private void copyBlock() {
+        List<TablePosition> cells = table.getSelectionModel().getSelectedCells();
+        if (cells.isEmpty()) {
+            return;
+        }
+        List<TableColumn<NoteRow, ?>> shown = table.getVisibleLeafColumns();
+        int r0 = Integer.MAX_VALUE;
+        int r1 = -1;
+        int c0 = Integer.MAX_VALUE;
+        int c1 = -1;
+        for (TablePosition p : cells) {
+            int c = shown.indexOf(p.getTableColumn());
+            r0 = Math.min(r0, p.getRow());
+            r1 = Math.max(r1, p.getRow());
+            c0 = Math.min(c0, c);
+            c1 = Math.max(c1, c);
+        }
+        if (c0 < 0) {
+            return;
+        }
+        List<Integer> rows = java.util.stream.IntStream.rangeClosed(r0, r1).boxed().toList();
+        boolean wholeColumns = r0 == 0 && r1 == table.getItems().size() - 1 && table.getItems().size() > 1;
+        char mark = java.text.DecimalFormatSymbols.getInstance(java.util.Locale.getDefault(
+                java.util.Locale.Category.FORMAT)).getDecimalSeparator();
+        ClipboardContent content = new ClipboardContent();
+        content.putString(model.clipboard().copy(rows, noteColumns(shown.subList(c0, c1 + 1)), wholeColumns, mark));
+        Clipboard.getSystemClipboard().setContent(content);
+    }
+
+    /** Ctrl+V: a block from the clipboard, its top left at the focused cell, as one edit. */
+    private void pasteBlock() {
+        TablePosition<NoteRow, ?> p = SheetCell.focused(table);
+        String text = Clipboard.getSystemClipboard().getString();
+        if (p == null) {
+            return;
+        }
+        List<TableColumn<NoteRow, ?>> shown = table.getVisibleLeafColumns();
+        int c = shown.indexOf(p.getTableColumn());
+        model.clipboard().paste(p.getRow(), noteColumns(shown.subList(Math.max(c, 0), shown.size())), text);
+    }
+
+    private static List<NoteColumn> noteColumns(List<TableColumn<NoteRow, ?>> shown) {
+        return shown.stream().map(t -> (NoteColumn) t.getUserData()).toList();
     }
 
     @SuppressWarnings("unchecked")

@@ -30,9 +30,11 @@ public final class NoteTableViewModel {
     private final NoteEdits edits = new NoteEdits(BuiltInData.musicWireSizes());
     private final ObservableList<NoteRow> rows = FXCollections.observableArrayList();
     private final Map<NoteColumn, StringBinding> headers = new EnumMap<>(NoteColumn.class);
+    private final NoteClipboard clipboard;
 
     public NoteTableViewModel(ScaleSession session) {
         this.session = session;
+        this.clipboard = new NoteClipboard(session, this, edits);
         session.analysisProperty().addListener((o, a, b) -> refresh());
         session.referenceAnalysisProperty().addListener((o, a, b) -> refresh());
         for (NoteColumn c : NoteColumn.values()) {
@@ -49,6 +51,11 @@ public final class NoteTableViewModel {
     /** @return whether the difference-from-reference columns are shown */
     public ObservableBooleanValue showDifferencesProperty() {
         return session.showDifferencesProperty();
+    }
+
+    /** @return copying and pasting blocks of cells */
+    public NoteClipboard clipboard() {
+        return clipboard;
     }
 
     /** @return the display units, which the cells follow */

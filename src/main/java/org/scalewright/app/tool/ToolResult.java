@@ -16,7 +16,8 @@ import org.scalewright.app.session.CsvFileNames;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.chart.CurveOverlay;
-import org.scalewright.io.CsvReportWriter;
+import org.scalewright.io.CsvDialect;
+import org.scalewright.io.TableFiles;
 
 /**
  * The life of one tool's result in the window, the same for every tool that computes a report
@@ -131,7 +132,9 @@ public final class ToolResult<R> {
         }
         Path file = CsvFileNames.withCsvExtension(chosen.get());
         try {
-            CsvReportWriter.write(file, form.comments().apply(r), form.header(), form.rows().apply(r));
+            // a name ending in .xlsx gives a workbook (io.TableFiles), any other CSV
+            TableFiles.write(file, "results", form.comments().apply(r), form.header(), form.rows().apply(r),
+                    CsvDialect.PLAIN, false);
             session.inform("wrote the " + toolName + " to " + file);
             return true;
         } catch (IOException | RuntimeException e) {

@@ -51,19 +51,19 @@ class ExportViewModelTest {
         prompts.files.add(out);
         assertTrue(vm.exportReport());
         List<String> expected = Stream.of("report.pdf", "results.csv", "schedule.csv", "wound-order.csv",
-                "wire-order.csv", "stretch.csv", "tension.png", "tension.svg", "break-percent.png",
+                "wire-order.csv", "stretch.csv", "tables.xlsx", "tension.png", "tension.svg", "break-percent.png",
                 "break-percent.svg", "inharmonicity.png", "inharmonicity.svg", "stretch.png", "stretch.svg")
                 .sorted().toList();
         assertEquals(expected, names(out));
         byte[] pdf = Files.readAllBytes(out.resolve("report.pdf"));
         assertEquals("%PDF", new String(pdf, 0, 4, StandardCharsets.US_ASCII));
-        assertEquals(14, vm.written().size());
+        assertEquals(15, vm.written().size());
         for (ExportViewModel.Written w : vm.written()) {
             assertEquals(Files.size(w.path()), w.bytes(), w.path().toString());
             assertTrue(w.bytes() > 0, w.path().toString());
         }
         assertFalse(vm.noteIsProblemProperty().get());
-        assertTrue(vm.noteProperty().get().startsWith("Wrote the report into " + out.toAbsolutePath() + ": 14 files"),
+        assertTrue(vm.noteProperty().get().startsWith("Wrote the report into " + out.toAbsolutePath() + ": 15 files"),
                 vm.noteProperty().get());
         assertTrue(session.messageProperty().get().startsWith("wrote the report into"), session.messageProperty().get());
         assertTrue(prompts.errors.isEmpty(), prompts.errors.toString());
