@@ -19,7 +19,8 @@ public final class DesktopLauncher {
     /**
      * Opens the window and returns when it is closed.
      *
-     * @param args none (the demo grand), or {@code open FILE}
+     * @param args none (the demo grand), {@code open FILE} or a bare {@code FILE} (see
+     *             {@link LaunchRequest#wantsWindow})
      * @return 0 when the window ran, 1 when it could not be opened (e.g. no display)
      */
     public static int run(String[] args) {
@@ -27,6 +28,7 @@ public final class DesktopLauncher {
         JAVAFX_LOG.setLevel(java.util.logging.Level.SEVERE);
         try {
             Warmup.start(LaunchRequest.parse(args));
+            OpenFileEvents.listenOnMacOs();
             Application.launch(ScalewrightApp.class, args);
             return 0;
         } catch (RuntimeException e) {

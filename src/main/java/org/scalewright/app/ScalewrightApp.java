@@ -26,6 +26,12 @@ public final class ScalewrightApp extends Application {
         WorkstationViewModel model = new WorkstationViewModel(session, prompts);
         WorkstationView view = new WorkstationView(stage, model);
         openAtStart(model, request);
+        // a sheet double-clicked in the macOS Finder, at launch or later
+        OpenFileEvents.shared().attach(sheet -> {
+            if (model.settleUnsavedChanges()) {
+                model.openSheet(sheet, true);
+            }
+        }, Platform::runLater);
         long[] shown = new long[1];
         Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart(), shown);
         stage.show();

@@ -16,8 +16,8 @@ import picocli.CommandLine.Mixin;
 
 /** {@code analyze}: every string's tension, stress, percent of breaking strength and inharmonicity. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
-        description = {"Analyse a scale: per string tension, stress, percent of breaking strength,",
-                "inharmonicity and headroom, with flagged notes and section totals."})
+        description = "Analyse a scale: per string tension, stress, percent of breaking strength, inharmonicity "
+                + "and headroom, with flagged notes and section totals.")
 public final class AnalyzeCommand extends ScaleCommand {
     @Mixin
     CsvOutput out;

@@ -8,9 +8,11 @@ import picocli.CommandLine.Command;
 /** The headless command line: {@code scalewright COMMAND …}. */
 @Command(name = "scalewright", mixinStandardHelpOptions = true, version = "Scalewright 0.1",
         description = {"Piano scaling workstation: string tension, stress and inharmonicity.",
-                "Without a command the desktop window opens; 'open FILE' opens a sheet in it."},
-        subcommands = {AnalyzeCommand.class, PlanPlainCommand.class, PlanWoundCommand.class, CheckWireCommand.class,
-                DiagnoseCommand.class, ReportCommand.class, StretchCommand.class, ArchiveCommand.class})
+                "Without a command the desktop window opens on the demo grand; a sheet file alone or "
+                        + "'open FILE' opens that sheet in it."},
+        subcommands = {OpenCommand.class, AnalyzeCommand.class, PlanPlainCommand.class, PlanWoundCommand.class,
+                CheckWireCommand.class, DiagnoseCommand.class, ReportCommand.class, StretchCommand.class,
+                ArchiveCommand.class, CommandLine.HelpCommand.class})
 public final class ScalewrightCommand implements Runnable {
 
     @CommandLine.Spec
@@ -19,6 +21,11 @@ public final class ScalewrightCommand implements Runnable {
     @Override
     public void run() {
         spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** @return whether {@code word} is one of the commands ({@code analyze}, {@code help}, …) */
+    public static boolean isCommand(String word) {
+        return new CommandLine(new ScalewrightCommand()).getSubcommands().containsKey(word);
     }
 
     /** Runs the command line on the process's standard output and error; returns the exit status. */
@@ -74,7 +81,7 @@ public final class ScalewrightCommand implements Runnable {
         });
         if (args.length > 0 && !args[0].startsWith("-") && !cl.getSubcommands().containsKey(args[0])) {
             err.println("error: unknown command '" + args[0] + "'; commands: "
-                    + String.join(", ", cl.getSubcommands().keySet()));
+                    + String.join(", ", cl.getSubcommands().keySet()) + "; or a sheet file to open in the window");
             err.flush();
             return ExitStatus.BAD_INPUT;
         }

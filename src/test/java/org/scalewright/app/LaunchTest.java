@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
@@ -20,6 +21,7 @@ import org.scalewright.app.session.TestSheets;
 
 /** What the window opens at start, and the once-only cautions. */
 class LaunchTest {
+    private static final java.util.function.Predicate<String> NO_COMMANDS = w -> false;
     @TempDir
     Path dir;
 
@@ -31,6 +33,77 @@ class LaunchTest {
         LaunchRequest two = LaunchRequest.parse(new String[] {"open", "a.csv", "b.csv"});
         assertEquals(Optional.of(Path.of("a.csv")), two.sheet());
         assertTrue(two.problem().contains("one sheet file"));
+    }
+
+    @Test
+    @DisplayName("a bare sheet path, as a file manager passes it, opens the window on that sheet")
+    void aBarePathOpensTheWindowOnIt() throws Exception {
+        Path sheet = Files.copy(TestSheets.demoGrand(), dir.resolve("my grand.csv"));
+        String[] args = {sheet.toString()};
+        assertTrue(LaunchRequest.wantsWindow(args, NO_COMMANDS));
+        assertEquals(new LaunchRequest(Optional.of(sheet), ""), LaunchRequest.parse(args));
+        LaunchRequest two = LaunchRequest.parse(new String[] {sheet.toString(), "b.csv"});
+        assertEquals(Optional.of(sheet), two.sheet());
+        assertEquals("the window opens one sheet file; only " + sheet + " was opened", two.problem());
+
+        ScriptedPrompts prompts = new ScriptedPrompts();
+        WorkstationViewModel vm = new WorkstationViewModel(new ScaleSession(), prompts);
+        ScalewrightApp.openAtStart(vm, LaunchRequest.parse(args));
+        assertTrue(prompts.problems.isEmpty(), prompts.problems.toString());
+        assertEquals(Optional.of(sheet), vm.session().file(), "saved back to the sheet opened");
+        assertEquals(88, vm.session().scale().notes().size());
+    }
+
+    @ParameterizedTest(name = "{0} -> window {1}")
+    @DisplayName("which arguments open the window and which go to the command line")
+    @CsvSource(delimiter = '|', value = {
+        "''|true",                         // no arguments: the demo grand
+        "open|true",
+        "open SHEET|true",
+        "open SHEET --help|false",          // help is printed, the window stays shut
+        "open --help|false",
+        "open -h|false",
+        "open --version|false",
+        "SHEET|true",                       // a bare path to an existing file
+        "SHEET SHEET|true",
+        "missing.csv|false",                // no such file: the command line says what is wrong
+        "analyze SHEET|false",
+        "--help|false",
+        "-V|false",
+        "COMMANDFILE|false"})               // a file named like a command: the command wins
+    void theArgumentsDecide(String line, boolean window) throws Exception {
+        Path sheet = Files.copy(TestSheets.demoGrand(), dir.resolve("grand.csv"));
+        Path commandFile = Files.writeString(dir.resolve("report"), "key\n");
+        String[] args = line.isEmpty() ? new String[0] : line.replace("COMMANDFILE", commandFile.toString())
+                .replace("SHEET", sheet.toString()).split(" ");
+        assertEquals(window, LaunchRequest.wantsWindow(args, w -> w.equals(commandFile.toString())
+                || List.of("open", "analyze", "report").contains(w)));
+    }
+
+    @Test
+    @DisplayName("a folder or a path the system cannot have is no sheet: the command line answers")
+    void aFolderIsNoSheet() {
+        assertFalse(LaunchRequest.wantsWindow(new String[] {dir.toString()}, NO_COMMANDS));
+        assertFalse(LaunchRequest.wantsWindow(new String[] {"a\0b.csv"}, NO_COMMANDS));
+    }
+
+    @Test
+    @DisplayName("sheets the system asks to open before the window is ready wait for it, later ones go straight")
+    void openFileEventsWaitForTheWindow() {
+        OpenFileEvents events = new OpenFileEvents();
+        events.arrived(Path.of("a.csv"));
+        events.arrived(Path.of("b.csv"));
+        List<Path> opened = new java.util.ArrayList<>();
+        List<Runnable> onWindowThread = new java.util.ArrayList<>();
+        events.attach(opened::add, onWindowThread::add);
+        assertTrue(opened.isEmpty(), "only on the window's thread");
+        onWindowThread.forEach(Runnable::run);
+        assertEquals(List.of(Path.of("a.csv"), Path.of("b.csv")), opened);
+        onWindowThread.clear();
+        events.arrived(Path.of("c.csv"));
+        onWindowThread.forEach(Runnable::run);
+        assertEquals(Path.of("c.csv"), opened.get(2));
+        OpenFileEvents.listenOnMacOs(); // harmless here: not macOS, nothing started
     }
 
     @Test

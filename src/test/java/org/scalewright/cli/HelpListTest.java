@@ -1,0 +1,80 @@
+package org.scalewright.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.Map;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import picocli.CommandLine;
+
+/** The top-level help lists every command with its whole summary; {@code open --help} prints. */
+class HelpListTest {
+    private record Run(int status, String out, String err) {
+    }
+
+    private static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = ScalewrightCommand.run(args, new PrintWriter(out), new PrintWriter(err));
+        return new Run(status, out.toString(), err.toString());
+    }
+
+    private static String oneLine(String s) {
+        return s.replaceAll("\\s+", " ").trim();
+    }
+
+    @Test
+    @DisplayName("every command is listed with its summary whole: one description line, a finished sentence")
+    void everyCommandsSummaryIsWholeInTheList() {
+        Run help = run("--help");
+        assertEquals(0, help.status(), help.err());
+        String listed = oneLine(help.out());
+        Map<String, CommandLine> commands = new CommandLine(new ScalewrightCommand()).getSubcommands();
+        assertTrue(commands.keySet().containsAll(java.util.List.of("open", "analyze", "report", "help")),
+                commands.keySet().toString());
+        for (var c : commands.entrySet()) {
+            var usage = c.getValue().getCommandSpec().usageMessage();
+            // the list shows the first line of the header, else of the description: it must be the whole summary
+            String summary = oneLine(usage.header().length > 0 ? usage.header()[0] : usage.description()[0]);
+            assertTrue(summary.endsWith("."), c.getKey() + "'s first description line is cut: " + summary);
+            assertTrue(listed.contains(c.getKey() + " " + summary.replace("%%", "%")),
+                    c.getKey() + " not listed whole:\n" + help.out());
+        }
+    }
+
+    @Test
+    @DisplayName("open --help prints open's help; help COMMAND prints that command's")
+    void openHelpPrints() {
+        Run open = run("open", "--help");
+        assertEquals(0, open.status(), open.err());
+        assertTrue(open.out().startsWith("Usage: scalewright open [-hV] [FILE]"), open.out());
+        assertTrue(oneLine(open.out()).contains("as a double-click or \"Open with\" in a file manager does."),
+                open.out());
+        Run analyze = run("help", "analyze");
+        assertEquals(0, analyze.status(), analyze.err());
+        assertTrue(analyze.out().startsWith("Usage: scalewright analyze"), analyze.out());
+    }
+
+    @Test
+    @DisplayName("open reaching the command line (not through the launcher) says so, exit 2")
+    void openWithoutTheLauncherSaysSo() {
+        Run r = run("open", "a.csv");
+        assertEquals(ExitStatus.BAD_INPUT, r.status());
+        assertTrue(r.err().startsWith("error: open starts the desktop window"), r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    @Test
+    void anUnknownWordNamesTheCommandsAndTheSheetPath() {
+        Run r = run("missing.csv");
+        assertEquals(ExitStatus.BAD_INPUT, r.status());
+        assertTrue(r.err().startsWith("error: unknown command 'missing.csv'; commands: open, analyze,"), r.err());
+        assertTrue(r.err().contains("or a sheet file to open in the window"), r.err());
+        assertTrue(ScalewrightCommand.isCommand("analyze"));
+        assertFalse(ScalewrightCommand.isCommand("missing.csv"));
+    }
+}
