@@ -28,9 +28,13 @@ final class StatusView {
                 message.getStyleClass().add("problem");
             }
         });
-        message.setMinWidth(0);
+        // a long message wraps onto a second line rather than being cut short
+        message.setMinWidth(120);
         message.setMaxWidth(Double.MAX_VALUE);
+        message.setWrapText(true);
+        message.setMinHeight(Region.USE_PREF_SIZE);
         message.setAlignment(Pos.CENTER_RIGHT);
+        message.setTextAlignment(javafx.scene.text.TextAlignment.RIGHT);
         HBox.setHgrow(message, Priority.ALWAYS);
         ToggleButton sectionsButton = new ToggleButton("Section totals");
         sectionsButton.setId("status-sections-button");

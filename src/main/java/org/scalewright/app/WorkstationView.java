@@ -232,15 +232,11 @@ final class WorkstationView {
         ChoiceBox<Choice<DisplayUnits>> units = new ChoiceBox<>();
         units.setId("units-choice");
         units.getItems().setAll(WorkstationViewModel.UnitChoice.values());
-        units.setValue(WorkstationViewModel.UnitChoice.METRIC);
+        java.util.function.Consumer<DisplayUnits> show = u -> WorkstationViewModel.UnitChoice.values().stream()
+                .filter(c -> c.value().equals(u)).findFirst().ifPresent(units::setValue);
+        show.accept(model.unitsProperty().get()); // as remembered from the last start
         units.setOnAction(e -> model.setUnits(units.getValue()));
-        model.unitsProperty().addListener((o, a, b) -> {
-            for (var c : WorkstationViewModel.UnitChoice.values()) {
-                if (c.value().equals(b)) {
-                    units.setValue(c);
-                }
-            }
-        });
+        model.unitsProperty().addListener((o, a, b) -> show.accept(b));
         units.setTooltip(new Tooltip("units for display and entry; sheets keep their own column units"));
 
         TextField a4 = new TextField();

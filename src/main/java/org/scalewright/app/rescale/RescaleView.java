@@ -133,7 +133,7 @@ public final class RescaleView implements Tool {
         bindShown(model, RescaleViewModel.Kind.PLAIN, plainLabel, plain);
         row++;
 
-        TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 4,
+        TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 6,
                 "wrap wire available in steps of, mm; empty: the wrap-wire catalogue (0.01 mm steps)");
         step.setPromptText("catalogue");
         TextField dbl = field("rescale-double-above", model.doubleAboveProperty(), 4,
@@ -171,7 +171,7 @@ public final class RescaleView implements Tool {
                 .otherwise("-fx-text-fill: #a4161a;"));
         ScrollPane summaryScroll = new ScrollPane(summary);
         summaryScroll.setFitToWidth(true);
-        summaryScroll.setPrefViewportHeight(58);
+        summaryScroll.setPrefViewportHeight(96);
         summaryScroll.setMinViewportHeight(40);
 
         TableView<RescaleChangeRow> table = new TableView<>(model.changes());
@@ -188,6 +188,7 @@ public final class RescaleView implements Tool {
         table.getColumns().add(column("dev. %", 48, RescaleChangeRow::deviation));
         table.setFixedCellSize(20);
         table.setStyle("-fx-font-size: 11px;");
+        org.scalewright.app.session.ColumnFit.keepFitted(table, 11);
         VBox.setVgrow(table, Priority.ALWAYS);
 
         Button propose = button("Propose", "rescale-propose", model::propose,
