@@ -74,6 +74,9 @@ class ScreenFitWindowTest {
         List<String> clipped = new ArrayList<>();
         // the table with a selected row in the flagged treble group
         robot.interact(() -> view.model().session().selectedKeyProperty().set(66));
+        robot.interact(() -> view.table().node().getSelectionModel().select(view.model().table().indexOf(66),
+                view.table().tableColumn(NoteColumn.TENSION)));
+        robot.interact(() -> robot.lookup("#flags-list").queryListView().getSelectionModel().select(4));
         WaitForAsyncUtils.waitForFxEvents();
         look(robot, "table-selected", clipped);
 
@@ -89,6 +92,11 @@ class ScreenFitWindowTest {
         type(robot, "#wire-check-flat", "40");
         type(robot, "#wire-check-overpull", "25");
         click(robot, "#wire-check-run");
+        robot.interact(() -> {
+            TableView<?> t = robot.lookup("#wire-check-table").queryAs(TableView.class);
+            t.getSelectionModel().select(1);
+            t.requestFocus();
+        });
         look(robot, "wirecheck-tab", clipped);
 
         openTab(robot, "diagnosis-tab");
@@ -107,7 +115,7 @@ class ScreenFitWindowTest {
         robot.interact(() -> view.table().node().scrollToColumn(view.table().tableColumn(NoteColumn.HEADROOM)));
         look(robot, "imperial-table", clipped);
 
-        assertEquals(List.of(), clipped, "cut short at " + WIDTH + "×" + HEIGHT);
+        assertEquals(List.of(), clipped, "cut short or illegible at " + WIDTH + "×" + HEIGHT);
     }
 
     /** Saves a picture when asked and notes every text on screen that is cut short. */
@@ -122,6 +130,66 @@ class ScreenFitWindowTest {
             javax.imageio.ImageIO.write(png(taken[0]), "png", out.toFile());
         }
         robot.interact(() -> collectClipped(stage.getScene().getRoot(), name, clipped));
+        robot.interact(() -> collectIllegible(stage.getScene().getRoot(), name, clipped));
+    }
+
+    private static final javafx.css.PseudoClass SELECTED = javafx.css.PseudoClass.getPseudoClass("selected");
+
+    /**
+     * Notes every selected table or list cell whose text has less contrast with what is behind it
+     * than 4.5:1, the least WCAG 2.1 (success criterion 1.4.3, contrast minimum) asks of body text.
+     */
+    private static void collectIllegible(Node node, String where, List<String> out) {
+        if (!node.isVisible()) {
+            return;
+        }
+        if ((node instanceof javafx.scene.control.IndexedCell<?> cell) && !cell.isEmpty() && cell.getText() != null
+                && !cell.getText().isBlank() && (node.getPseudoClassStates().contains(SELECTED)
+                || cell.getParent() != null && cell.getParent().getPseudoClassStates().contains(SELECTED)
+                && cell instanceof javafx.scene.control.TableCell<?, ?>)) {
+            javafx.scene.paint.Color text = (javafx.scene.paint.Color) cell.getTextFill();
+            javafx.scene.paint.Color behind = background(cell);
+            double ratio = contrast(text, behind);
+            if (ratio < 4.5) {
+                out.add(where + ": selected " + cell.getClass().getSimpleName() + " '" + cell.getText() + "' "
+                        + text + " on " + behind + ", contrast " + String.format(java.util.Locale.ROOT, "%.1f", ratio));
+            }
+        }
+        if (node instanceof Parent p) {
+            for (Node child : p.getChildrenUnmodifiable()) {
+                collectIllegible(child, where, out);
+            }
+        }
+    }
+
+    /** @return the last opaque fill of the node or, when it has none, of the nearest parent that has one */
+    private static javafx.scene.paint.Color background(Node n) {
+        for (Node at = n; at != null; at = at.getParent()) {
+            if (at instanceof javafx.scene.layout.Region r && r.getBackground() != null) {
+                var fills = r.getBackground().getFills();
+                for (int i = fills.size() - 1; i >= 0; i--) {
+                    if (fills.get(i).getFill() instanceof javafx.scene.paint.Color c && c.getOpacity() > 0.9) {
+                        return c;
+                    }
+                }
+            }
+        }
+        return javafx.scene.paint.Color.WHITE;
+    }
+
+    /** WCAG 2.1 contrast ratio (relative luminance, sRGB), 1 to 21. */
+    static double contrast(javafx.scene.paint.Color a, javafx.scene.paint.Color b) {
+        double la = luminance(a);
+        double lb = luminance(b);
+        return (Math.max(la, lb) + 0.05) / (Math.min(la, lb) + 0.05);
+    }
+
+    private static double luminance(javafx.scene.paint.Color c) {
+        return 0.2126 * channel(c.getRed()) + 0.7152 * channel(c.getGreen()) + 0.0722 * channel(c.getBlue());
+    }
+
+    private static double channel(double v) {
+        return v <= 0.03928 ? v / 12.92 : Math.pow((v + 0.055) / 1.055, 2.4);
     }
 
     private static java.awt.image.BufferedImage png(javafx.scene.image.Image image) {

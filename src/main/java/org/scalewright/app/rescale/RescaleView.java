@@ -171,8 +171,8 @@ public final class RescaleView implements Tool {
                 .otherwise("-fx-text-fill: #a4161a;"));
         ScrollPane summaryScroll = new ScrollPane(summary);
         summaryScroll.setFitToWidth(true);
-        summaryScroll.setPrefViewportHeight(96);
-        summaryScroll.setMinViewportHeight(40);
+        summaryScroll.setPrefViewportHeight(112);
+        summaryScroll.setMinViewportHeight(112);
 
         TableView<RescaleChangeRow> table = new TableView<>(model.changes());
         table.setId("rescale-changes");
@@ -188,7 +188,7 @@ public final class RescaleView implements Tool {
         table.getColumns().add(column("dev. %", 48, RescaleChangeRow::deviation));
         table.setFixedCellSize(20);
         table.setStyle("-fx-font-size: 11px;");
-        org.scalewright.app.session.ColumnFit.keepFitted(table, 11);
+        org.scalewright.app.session.ColumnFit.keepFitted(table, 11, 11);
         VBox.setVgrow(table, Priority.ALWAYS);
 
         Button propose = button("Propose", "rescale-propose", model::propose,

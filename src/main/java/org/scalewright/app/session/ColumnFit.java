@@ -13,38 +13,41 @@ import javafx.scene.text.Text;
  * is cut short with an ellipsis; a table wider than its place scrolls sideways instead.
  */
 public final class ColumnFit {
-    /** Room for the cell's padding and the column lines beside the text, px. */
-    static final double PADDING = 20;
+    /** Room for a cell's padding and the column line beside its text, px (modena: 2 px a side). */
+    static final double CELL_PADDING = 10;
+    /** Room for a header label's padding and lines, px (modena: 6 px a side). */
+    static final double HEADER_PADDING = 16;
 
     private ColumnFit() {
     }
 
     /** Fits the columns now and whenever the table's rows are replaced or added to. */
-    public static <R> void keepFitted(TableView<R> table, double fontSize) {
-        table.getItems().addListener((javafx.collections.ListChangeListener<R>) c -> fit(table, fontSize));
-        fit(table, fontSize);
+    public static <R> void keepFitted(TableView<R> table, double fontSize, double headerSize) {
+        table.getItems().addListener((javafx.collections.ListChangeListener<R>) c -> fit(table, fontSize, headerSize));
+        fit(table, fontSize, headerSize);
     }
 
     /**
      * Sets each visible column's width to at least what its header and cells need (never
      * narrower than it was made).
      *
-     * @param fontSize the size of the cells' text, px (the window's CSS sets 12 px, result tables 11 px)
+     * @param fontSize   the size of the cells' text, px (the window's CSS sets 12 px)
+     * @param headerSize the size of the headers' bold text, px (the note table's CSS sets 11 px)
      */
-    public static <R> void fit(TableView<R> table, double fontSize) {
+    public static <R> void fit(TableView<R> table, double fontSize, double headerSize) {
         Text probe = new Text();
         Font cells = Font.font(Font.getDefault().getFamily(), fontSize);
-        Font header = Font.font(Font.getDefault().getFamily(), FontWeight.BOLD, Math.max(fontSize, 12));
+        Font header = Font.font(Font.getDefault().getFamily(), FontWeight.BOLD, headerSize);
         for (TableColumn<R, ?> c : table.getColumns()) {
-            double wanted = Math.max(width(probe, header, c.getText()), headerWidth(probe, header, c.getGraphic()));
-            probe.setFont(cells);
+            // a column drawn with a header label of its own is as wide as that label needs
+            double wanted = HEADER_PADDING + (c.getGraphic() != null ? headerWidth(probe, header, c.getGraphic())
+                    : width(probe, header, c.getText()));
             for (int i = 0; i < table.getItems().size(); i++) {
                 Object v = c.getCellData(i);
                 if (v != null) {
-                    wanted = Math.max(wanted, width(probe, cells, v.toString()));
+                    wanted = Math.max(wanted, CELL_PADDING + width(probe, cells, v.toString()));
                 }
             }
-            wanted += PADDING;
             Object made = c.getProperties().computeIfAbsent("scalewright.madeWidth", k -> c.getPrefWidth());
             c.setPrefWidth(Math.max((Double) made, Math.ceil(wanted)));
         }

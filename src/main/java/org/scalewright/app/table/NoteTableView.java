@@ -55,9 +55,9 @@ public final class NoteTableView {
         table.addEventHandler(KeyEvent.KEY_TYPED, this::onKeyTyped);
         model.unitsProperty().addListener((o, a, b) -> {
             table.refresh();
-            ColumnFit.fit(table, 12);
+            ColumnFit.fit(table, 12, 11);
         });
-        ColumnFit.keepFitted(table, 12);
+        ColumnFit.keepFitted(table, 12, 11);
         table.getSelectionModel().selectedIndexProperty().addListener((o, a, b) -> selectionChanged());
         model.selectedKeyProperty().addListener((o, a, b) -> selectKey(b));
     }
