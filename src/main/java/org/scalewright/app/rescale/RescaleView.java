@@ -134,10 +134,12 @@ public final class RescaleView implements Tool {
         row++;
 
         TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 6,
-                "wrap wire available in steps of, mm; empty: the wrap-wire catalogue (0.01 mm steps)");
+                "wrap wire available in steps of this size (in the display unit, or write mm or in after it); "
+                        + "empty: the wrap-wire catalogue (0.01 mm steps)");
         step.setPromptText("catalogue");
         TextField dbl = field("rescale-double-above", model.doubleAboveProperty(), 4,
-                "double-wind where a single wrap would be thicker than this, mm; blank keeps each string's winding");
+                "double-wind where a single wrap would be thicker than this (in the display unit, or write mm or in "
+                        + "after it); blank keeps each string's winding");
         CheckBox join = new CheckBox("join the break over");
         join.setId("rescale-join");
         join.selectedProperty().bindBidirectional(model.joinBreakProperty());
@@ -147,7 +149,12 @@ public final class RescaleView implements Tool {
         join.setMinWidth(Region.USE_PREF_SIZE);
         HBox joinRow = new HBox(6, join, joinKeys, label("keys"));
         joinRow.setAlignment(Pos.CENTER_LEFT);
-        VBox wound = new VBox(4, labelled("wrap step mm", step), labelled("double-wind above mm", dbl), joinRow);
+        HBox stepRow = labelled("wrap step mm", step);
+        HBox dblRow = labelled("double-wind above mm", dbl);
+        var symbol = model.lengthSymbol();
+        ((Label) stepRow.getChildren().get(0)).textProperty().bind(Bindings.concat("wrap step ", symbol));
+        ((Label) dblRow.getChildren().get(0)).textProperty().bind(Bindings.concat("double-wind above ", symbol));
+        VBox wound = new VBox(4, stepRow, dblRow, joinRow);
         Label woundLabel = label("Wound");
         g.addRow(row, woundLabel, wound);
         bindShown(model, RescaleViewModel.Kind.WOUND, woundLabel, wound);
