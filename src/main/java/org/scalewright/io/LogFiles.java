@@ -98,6 +98,7 @@ public final class LogFiles {
             h.setFormatter(new OneLine());
             h.setLevel(Level.INFO);
             logger.addHandler(h);
+            logger.setUseParentHandlers(false); // the log file has it; the terminal stays quiet
             if (logger.getLevel() == null || logger.getLevel().intValue() > Level.INFO.intValue()) {
                 logger.setLevel(Level.INFO);
             }
