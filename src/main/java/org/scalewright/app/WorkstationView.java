@@ -83,6 +83,27 @@ final class WorkstationView {
         if (tools.getSelectionModel().getSelectedIndex() == 0) {
             layout.restore("left", left);
         }
+        // the window may be laid out at several sizes while it opens (the tools pane keeps its
+        // height on a resize), so the start positions are put back after each size change
+        // until the user presses on a divider or picks a tab (a tool tab chosen at start gets
+        // the lower half, as on a click)
+        double[] leftAtStart = left.getDividerPositions();
+        double[] centreAtStart = centre.getDividerPositions();
+        boolean[] settled = new boolean[1];
+        centre.addEventFilter(javafx.scene.input.MouseEvent.MOUSE_PRESSED, e -> settled[0] = true);
+        tools.getSelectionModel().selectedIndexProperty().addListener((o, was, now) -> settled[0] = true);
+        javafx.beans.InvalidationListener startPositions = o -> {
+            if (!settled[0]) {
+                javafx.application.Platform.runLater(() -> {
+                    if (!settled[0]) {
+                        left.setDividerPositions(leftAtStart);
+                        centre.setDividerPositions(centreAtStart);
+                    }
+                });
+            }
+        };
+        left.heightProperty().addListener(startPositions);
+        centre.widthProperty().addListener(startPositions);
 
         BorderPane root = new BorderPane();
         root.getStyleClass().add("workstation");
