@@ -242,6 +242,16 @@ class DeskHabitsTest {
     }
 
     @Test
+    void aboutNamesTheVersionTheLogAndTheSettings() {
+        start().showAbout();
+        String about = prompts.shown.get(0);
+        assertTrue(about.startsWith("About Scalewright: Scalewright "), about);
+        assertTrue(about.contains("Log folder: " + org.scalewright.io.LogFiles.userLogFolder()), about);
+        assertTrue(about.contains("node /org/scalewright/app"), about);
+        assertTrue(about.contains("Safety cautions"), about);
+    }
+
+    @Test
     void settingsThatCannotBeReadBackCountAsNotKept() {
         node.put("units", "FURLONG,N");
         node.put("window-size", "wide,tall");
