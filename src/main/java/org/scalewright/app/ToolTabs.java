@@ -5,6 +5,9 @@ import java.util.List;
 import javafx.beans.binding.Bindings;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
+import org.scalewright.app.archive.ArchiveChoice;
+import org.scalewright.app.archive.ArchiveView;
+import org.scalewright.app.archive.ArchiveViewModel;
 import org.scalewright.app.diagnosis.DiagnosisView;
 import org.scalewright.app.diagnosis.DiagnosisViewModel;
 import org.scalewright.app.export.ExportView;
@@ -62,6 +65,8 @@ final class ToolTabs {
         tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
         tools.add(new StretchView(new StretchViewModel(model.session())));
         tools.add(new ExportView(ExportViewModel.of(model.session(), model.prompts())));
+        tools.add(new ArchiveView(new ArchiveViewModel(model.session(), model.prompts(), ArchiveChoice.file(),
+                model::settleUnsavedChanges, ArchiveChoice::remember)));
         return tools;
     }
 }

@@ -1,7 +1,6 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
-import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.scalewright.io.AnalysisCsv;
 import org.scalewright.io.BuiltInData;
@@ -11,7 +10,6 @@ import org.scalewright.model.UnitConversions;
 import org.scalewright.physics.Flag;
 import org.scalewright.physics.NoteResult;
 import org.scalewright.physics.ScaleAnalysis;
-import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.physics.SectionTotal;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -20,17 +18,13 @@ import picocli.CommandLine.Mixin;
 @Command(name = "analyze", mixinStandardHelpOptions = true,
         description = {"Analyse a scale: per string tension, stress, percent of breaking strength,",
                 "inharmonicity and headroom, with flagged notes and section totals."})
-public final class AnalyzeCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class AnalyzeCommand extends ScaleCommand {
     @Mixin
     CsvOutput out;
 
     @Override
     public Integer call() throws Exception {
-        Scale scale = inputs.scale();
-        ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
+        ScaleAnalysis a = inputs.analysis();
         return out.writeThenPrint(AnalysisCsv.comments(a), AnalysisCsv.HEADER, AnalysisCsv.rows(a), w -> print(a, w));
     }
 

@@ -5,7 +5,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.concurrent.Callable;
 import org.scalewright.design.diagnosis.DiagnosedNote;
 import org.scalewright.design.diagnosis.DiagnosisReport;
 import org.scalewright.design.diagnosis.DiagnosisRequest;
@@ -35,10 +34,7 @@ import picocli.CommandLine.Option;
                 + "(plain or wound); its trend is fitted over the whole section, also outside --keys.",
                 "", "Figures are estimates from nominal data: confirm with the maker's certified strength data. "
                 + "A breaking string can whip: wear eye protection."})
-public final class DiagnoseCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class DiagnoseCommand extends ScaleCommand {
     @Mixin
     KeysOption range;
 
@@ -53,6 +49,9 @@ public final class DiagnoseCommand implements Callable<Integer> {
 
     @Mixin
     CsvOutput out;
+
+    @Mixin
+    ArchiveBreaksOption archive;
 
     @Override
     public Integer call() throws Exception {
@@ -71,7 +70,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         }
         DiagnosisRequest request = new DiagnosisRequest(scale, range.keys, settings, tables.tables(), margin,
                 BuiltInData.musicWireSizes(), BuiltInData.metricPlainWire());
-        DiagnosisReport report = SectionDiagnosis.diagnose(request);
+        DiagnosisReport report = SectionDiagnosis.diagnose(request, archive.breaks());
         return out.writeThenPrint(DiagnosisCsv.comments(report), DiagnosisCsv.HEADER, DiagnosisCsv.rows(report),
                 w -> print(report, w));
     }
@@ -97,6 +96,7 @@ public final class DiagnoseCommand implements Callable<Integer> {
         t.print(w);
         w.println(String.format(Locale.ROOT, "out: stands out from the trend of its section by more than %s %%; "
                 + "trend mm: the section's trend of speaking length", Formats.trim(q.marginPct())));
+        ArchiveBreaksOption.print(r.breaks(), w);
         w.println();
         Finding f = r.finding();
         w.println("Finding (" + f.cause().words() + "):");

@@ -8,6 +8,8 @@ import org.scalewright.io.StrengthTableReader;
 import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.AnalysisSettings;
+import org.scalewright.physics.ScaleAnalysis;
+import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.physics.StrengthTable;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -43,6 +45,11 @@ public final class Inputs {
     /** @return the strength table chosen */
     public StrengthTable strength() throws BadInputException {
         return strengthFile == null ? BuiltInData.astmMinimum() : StrengthTableReader.read(strengthFile);
+    }
+
+    /** @return the scale as read ({@link #scale()}) analysed with the chosen settings ({@link #settings()}) */
+    public ScaleAnalysis analysis() throws BadInputException {
+        return ScaleAnalyzer.analyze(scale(), settings());
     }
 
     /** @return the analysis settings for the chosen strength table */

@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.design.rescale.KeyChange;
 import org.scalewright.design.rescale.PlainPlanner;
 import org.scalewright.design.rescale.PlanChecks;
@@ -30,10 +29,7 @@ import picocli.CommandLine.Spec;
  * maximum, the step cost and the output sheet, and the run from options to the written sheet.
  * A subclass checks its own options, plans, and lays out its change table.
  */
-abstract class PlanCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+abstract class PlanCommand extends ScaleCommand {
     @Mixin
     PlanTargetOptions targetOptions;
 

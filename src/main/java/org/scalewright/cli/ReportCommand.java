@@ -6,14 +6,12 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.concurrent.Callable;
 import org.scalewright.design.orders.WireAllowances;
 import org.scalewright.design.orders.WireOrder;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchPoint;
 import org.scalewright.io.OutputRefused;
 import org.scalewright.io.ScaleSheetReader;
-import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Scale;
 import org.scalewright.model.SheetColumn;
 import org.scalewright.physics.AnalysisSettings;
@@ -38,10 +36,7 @@ import picocli.CommandLine.Spec;
                         + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv "
                         + "(stretch_cents for the --octave type; the PDF gives all three). "
                         + "Nothing is written if any input is bad."})
-public final class ReportCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class ReportCommand extends ScaleCommand {
     @Option(names = "--out", paramLabel = "DIR", required = true,
             description = "directory to write the report into: created if missing, replaced as a whole if it "
                     + "holds an earlier report (it may hold nothing else)")
@@ -127,42 +122,21 @@ public final class ReportCommand implements Callable<Integer> {
         if (units == null) {
             return ReportUnits.of(scale.layout().unitOf(SheetColumn.SPEAKING_LENGTH));
         }
-        try {
-            return ReportUnits.parse(units);
-        } catch (InvalidInput e) {
-            throw new UserError("--units: " + e.getMessage());
-        }
+        return OptionChecks.named("--units", () -> ReportUnits.parse(units));
     }
 
     /** @return the paper given, or null for the usual one of the units */
     private ReportPaper paper() {
-        if (paper == null) {
-            return null;
-        }
-        try {
-            return ReportPaper.parse(paper);
-        } catch (InvalidInput e) {
-            throw new UserError("--paper: " + e.getMessage());
-        }
+        return paper == null ? null : OptionChecks.named("--paper", () -> ReportPaper.parse(paper));
     }
 
     private WireAllowances allowances() {
-        WireAllowances a = WireAllowances.DEFAULT.withLooped(!singleTied);
-        try {
-            if (pinAllowanceMm != null) {
-                a = a.withPinAllowance(WireAllowances.pinAllowanceOf(pinAllowanceMm));
-            }
-        } catch (InvalidInput e) {
-            throw new UserError("--pin-allowance: " + e.getMessage());
-        }
-        try {
-            if (lengthAllowanceMm != null) {
-                a = a.withLengthAllowance(WireAllowances.lengthAllowanceOf(lengthAllowanceMm));
-            }
-        } catch (InvalidInput e) {
-            throw new UserError("--length-allowance: " + e.getMessage());
-        }
-        return a;
+        WireAllowances d = WireAllowances.DEFAULT;
+        double pin = pinAllowanceMm == null ? d.pinAllowance()
+                : OptionChecks.named("--pin-allowance", () -> WireAllowances.pinAllowanceOf(pinAllowanceMm));
+        double length = lengthAllowanceMm == null ? d.lengthAllowance()
+                : OptionChecks.named("--length-allowance", () -> WireAllowances.lengthAllowanceOf(lengthAllowanceMm));
+        return new WireAllowances(pin, length, !singleTied);
     }
 
     private static void print(ReportContent c, List<Path> written, java.util.Map<String, Integer> sizes,

@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
         description = {"Piano scaling workstation: string tension, stress and inharmonicity.",
                 "Without a command the desktop window opens; 'open FILE' opens a sheet in it."},
         subcommands = {AnalyzeCommand.class, PlanPlainCommand.class, PlanWoundCommand.class, CheckWireCommand.class,
-                DiagnoseCommand.class, ReportCommand.class, StretchCommand.class})
+                DiagnoseCommand.class, ReportCommand.class, StretchCommand.class, ArchiveCommand.class})
 public final class ScalewrightCommand implements Runnable {
 
     @CommandLine.Spec

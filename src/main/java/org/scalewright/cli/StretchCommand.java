@@ -2,7 +2,6 @@ package org.scalewright.cli;
 
 import java.io.PrintWriter;
 import java.util.List;
-import java.util.concurrent.Callable;
 import org.scalewright.design.stretch.OctaveType;
 import org.scalewright.design.stretch.StretchCurve;
 import org.scalewright.design.stretch.StretchPoint;
@@ -10,7 +9,6 @@ import org.scalewright.design.stretch.TuningStretch;
 import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.ScaleAnalysis;
-import org.scalewright.physics.ScaleAnalyzer;
 import org.scalewright.report.CsvSheet;
 import org.scalewright.report.StretchCsv;
 import picocli.CommandLine.Command;
@@ -22,10 +20,7 @@ import picocli.CommandLine.Mixin;
                 "Keys A3-A4 (37-49) stay at equal temperament; each octave outward is tuned so that the lower "
                         + "note's partial 2m sounds with the upper note's partial m, with each note's B at its "
                         + "working pitch."})
-public final class StretchCommand implements Callable<Integer> {
-    @Mixin
-    Inputs inputs;
-
+public final class StretchCommand extends ScaleCommand {
     @Mixin
     OctaveOption octave;
 
@@ -35,8 +30,8 @@ public final class StretchCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         OctaveType type = octave.type();
-        Scale scale = inputs.scale();
-        ScaleAnalysis a = ScaleAnalyzer.analyze(scale, inputs.settings());
+        ScaleAnalysis a = inputs.analysis();
+        Scale scale = a.scale();
         StretchCurve curve = TuningStretch.of(a, type);
         CsvSheet sheet = StretchCsv.sheet(curve, List.of(), header(scale));
         return out.writeThenPrint(sheet.comments(), sheet.header(), sheet.rows(), w -> print(scale, curve, w));

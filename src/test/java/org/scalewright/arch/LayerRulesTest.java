@@ -41,6 +41,7 @@ class LayerRulesTest {
                 .layer("physics").definedBy("org.scalewright.physics..")
                 .layer("design").definedBy("org.scalewright.design..")
                 .layer("io").definedBy("org.scalewright.io..")
+                .layer("archive").definedBy("org.scalewright.archive..")
                 .layer("chart").definedBy("org.scalewright.chart..")
                 .layer("report").definedBy("org.scalewright.report..")
                 .layer("cli").definedBy("org.scalewright.cli..")
@@ -51,9 +52,11 @@ class LayerRulesTest {
                 .whereLayer("cli").mayOnlyBeAccessedByLayers("launcher")
                 .whereLayer("report").mayOnlyBeAccessedByLayers("cli", "app")
                 .whereLayer("chart").mayOnlyBeAccessedByLayers("report", "cli", "app")
-                .whereLayer("io").mayOnlyBeAccessedByLayers("chart", "report", "cli", "app")
-                .whereLayer("design").mayOnlyBeAccessedByLayers("io", "chart", "report", "cli", "app")
-                .whereLayer("physics").mayOnlyBeAccessedByLayers("design", "io", "chart", "report", "cli", "app")
+                .whereLayer("archive").mayOnlyBeAccessedByLayers("cli", "app")
+                .whereLayer("io").mayOnlyBeAccessedByLayers("chart", "report", "archive", "cli", "app")
+                .whereLayer("design").mayOnlyBeAccessedByLayers("io", "archive", "chart", "report", "cli", "app")
+                .whereLayer("physics").mayOnlyBeAccessedByLayers("design", "io", "archive", "chart", "report", "cli",
+                        "app")
                 .withOptionalLayers(true)
                 .check(classes);
     }
@@ -100,7 +103,7 @@ class LayerRulesTest {
                 .layer("window").definedBy("org.scalewright.app")
                 .layer("tools").definedBy("org.scalewright.app.rescale..", "org.scalewright.app.wirecheck..",
                         "org.scalewright.app.diagnosis..", "org.scalewright.app.stretch..",
-                        "org.scalewright.app.export..")
+                        "org.scalewright.app.export..", "org.scalewright.app.archive..")
                 .layer("tool parts").definedBy("org.scalewright.app.tool..")
                 .layer("table and curves").definedBy("org.scalewright.app.table..", "org.scalewright.app.curves..")
                 .layer("session").definedBy("org.scalewright.app.session..")
@@ -109,7 +112,7 @@ class LayerRulesTest {
                 .whereLayer("tool parts").mayOnlyBeAccessedByLayers("window", "tools")
                 .whereLayer("table and curves").mayOnlyBeAccessedByLayers("window", "tools", "tool parts")
                 .check(classes);
-        for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export"}) {
+        for (String tool : new String[] {"rescale", "wirecheck", "diagnosis", "stretch", "export", "archive"}) {
             noClasses().that().resideInAPackage("org.scalewright.app." + tool + "..")
                     .should().dependOnClassesThat().resideInAnyPackage(otherTools(tool))
                     .check(classes);
@@ -117,7 +120,7 @@ class LayerRulesTest {
     }
 
     private static String[] otherTools(String tool) {
-        return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export")
+        return java.util.stream.Stream.of("rescale", "wirecheck", "diagnosis", "stretch", "export", "archive")
                 .filter(t -> !t.equals(tool)).map(t -> "org.scalewright.app." + t + "..").toArray(String[]::new);
     }
 
@@ -132,9 +135,9 @@ class LayerRulesTest {
         noClasses().that().resideOutsideOfPackages("org.scalewright.chart..", "org.scalewright.report..",
                         "org.scalewright.app..")
                 .should().dependOnClassesThat().resideInAPackage("org.jfree..").check(classes);
-        noClasses().should().dependOnClassesThat().resideInAPackage("java.sql..")
-                .because("only the workshop archive, when it comes, may use JDBC").allowEmptyShould(true)
-                .check(classes);
+        noClasses().that().resideOutsideOfPackage("org.scalewright.archive..")
+                .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
+                .because("only the workshop archive uses JDBC and SQLite").check(classes);
     }
 
     @Test

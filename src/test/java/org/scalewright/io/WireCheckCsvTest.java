@@ -8,9 +8,8 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.scalewright.design.wirecheck.PitchState;
 import org.scalewright.design.wirecheck.StageWords;
-import org.scalewright.design.wirecheck.WireCheck;
 import org.scalewright.design.wirecheck.WireCheckReport;
-import org.scalewright.design.wirecheck.WireCheckRequest;
+import org.scalewright.design.wirecheck.Asked;
 import org.scalewright.model.Scale;
 
 /** The wire-check CSV's comment lines carry the stage advice in the one wording of the tool. */
@@ -19,7 +18,7 @@ class WireCheckCsvTest {
     void theStageAdviceInTheCommentsIsTheToolsOwnWordsWithTheNoteOverTheBandNamed() throws Exception {
         // the README's example: the demo grand, the invented specimen table, 40 cents flat, 25 % overpull
         Scale s = ScaleSheetReader.standard().read(Path.of("demo-instruments", "grand-190", "grand-190.csv"));
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(s, BuiltInData.defaultSettings())
+        WireCheckReport r = Asked.run(Asked.of(s, BuiltInData.defaultSettings())
                 .withReplacement(StrengthTableReader.read(
                         Path.of("scales", "wire-makers", "specimen-wire-mill-mm-load-n.csv")))
                 .withFlat(PitchState.uniform(40)).withOverpull(25));

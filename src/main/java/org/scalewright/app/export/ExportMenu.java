@@ -18,14 +18,16 @@ public final class ExportMenu {
         report.setOnAction(e -> model.exportReportInBackground());
         report.disableProperty().bind(model.busyProperty());
         menu.getItems().addAll(report, new SeparatorMenuItem());
-        for (ExportPiece p : ExportPiece.values()) {
-            if (p == ExportPiece.TENSION_PNG || p == ExportPiece.PDF) {
+        ExportContent before = null;
+        for (ExportPiece p : ExportPiece.all()) {
+            if (before != null && before.isChart() != p.content().isChart()) {
                 menu.getItems().add(new SeparatorMenuItem());
             }
             MenuItem m = new MenuItem(p.title() + " (" + p.format().extension().toUpperCase(Locale.ROOT) + ")…");
-            m.setId("menu-export-" + p.name().toLowerCase(Locale.ROOT).replace('_', '-'));
+            m.setId("menu-export-" + p.id());
             m.setOnAction(e -> model.export(p));
             menu.getItems().add(m);
+            before = p.content();
         }
         return menu;
     }

@@ -1,79 +1,60 @@
 package org.scalewright.app.export;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 /**
- * One file the window can export on its own: a table as CSV, a chart as PNG or SVG, or the
- * PDF report.
+ * One file the window can export on its own: a content in one of its formats.
+ *
+ * @param content what is written
+ * @param format  the kind of file, one of {@code content.formats()}
  */
-enum ExportPiece {
-    SCHEDULE("String schedule", "schedule", Format.CSV),
-    WOUND_ORDER("Wound-string order", "wound-order", Format.CSV),
-    WIRE_ORDER("Wire order", "wire-order", Format.CSV),
-    STRETCH_CSV("Tuning stretch", "stretch", Format.CSV),
-    RESULTS("Results per note", "results", Format.CSV),
-    TENSION_PNG("Tension curve", "tension", Format.PNG),
-    TENSION_SVG("Tension curve", "tension", Format.SVG),
-    BREAK_PERCENT_PNG("Percent of breaking strength curve", "break-percent", Format.PNG),
-    BREAK_PERCENT_SVG("Percent of breaking strength curve", "break-percent", Format.SVG),
-    INHARMONICITY_PNG("Inharmonicity curve", "inharmonicity", Format.PNG),
-    INHARMONICITY_SVG("Inharmonicity curve", "inharmonicity", Format.SVG),
-    STRETCH_PNG("Tuning stretch curve", "stretch", Format.PNG),
-    STRETCH_SVG("Tuning stretch curve", "stretch", Format.SVG),
-    PDF("PDF report", "report", Format.PDF);
+record ExportPiece(ExportContent content, ExportFormat format) {
+    /** The PDF report alone. */
+    static final ExportPiece PDF = new ExportPiece(ExportContent.REPORT, ExportFormat.PDF);
 
-    /** The kinds of file written. */
-    enum Format {
-        CSV("CSV tables"), PNG("PNG images"), SVG("SVG drawings"), PDF("PDF documents");
-
-        private final String description;
-
-        Format(String description) {
-            this.description = description;
-        }
-
-        /** @return the file name extension, without the dot: the format's name in lower case */
-        String extension() {
-            return name().toLowerCase(Locale.ROOT);
-        }
-
-        /** @return the kind of file in words, for the file chooser's filter */
-        String description() {
-            return description;
+    ExportPiece {
+        if (!content.formats().contains(format)) {
+            throw new IllegalArgumentException(content + " is not exported as " + format);
         }
     }
 
-    private final String title;
-    private final String fileStem;
-    private final Format format;
+    /** @return every piece: each content in each of its formats, in the order of the menus */
+    static List<ExportPiece> all() {
+        List<ExportPiece> all = new ArrayList<>();
+        for (ExportContent c : ExportContent.values()) {
+            c.formats().forEach(f -> all.add(new ExportPiece(c, f)));
+        }
+        return List.copyOf(all);
+    }
 
-    ExportPiece(String title, String fileStem, Format format) {
-        this.title = title;
-        this.fileStem = fileStem;
-        this.format = format;
+    /** @param content a table or the report @return its one piece */
+    static ExportPiece of(ExportContent content) {
+        if (content.formats().size() != 1) {
+            throw new IllegalArgumentException(content + " comes in " + content.formats());
+        }
+        return new ExportPiece(content, content.formats().get(0));
     }
 
     /** @return what the piece is, in words */
     String title() {
-        return title;
+        return content.title();
     }
 
-    /** @return the file name the whole report gives the piece, without extension */
+    /** @return the stem of the file name offered for the piece, without extension */
     String fileStem() {
-        return fileStem;
+        return content.fileStem();
     }
 
-    Format format() {
-        return format;
-    }
-
-    /** @return true for the charts */
-    boolean isChart() {
-        return format == Format.PNG || format == Format.SVG;
+    /** @return a name for the piece's controls: content and format, e.g. {@code tension-curve-png} */
+    String id() {
+        String c = content.name().toLowerCase(Locale.ROOT).replace('_', '-');
+        return content.formats().size() == 1 ? c : c + "-" + format.extension();
     }
 
     /** @return the suggested file name for a sheet whose name (without extension) is {@code base} */
     String suggestedName(String base) {
-        return (base.isBlank() ? "scale" : base) + "-" + fileStem + "." + format.extension();
+        return (base.isBlank() ? "scale" : base) + "-" + fileStem() + "." + format.extension();
     }
 }

@@ -54,8 +54,8 @@ public final class ExportView implements Tool {
                 + "until you choose)"));
 
         FlowPane tables = flow(heading("Tables (CSV)"));
-        for (ExportPiece p : ExportPiece.values()) {
-            if (p.format() == ExportPiece.Format.CSV) {
+        for (ExportPiece p : ExportPiece.all()) {
+            if (p.format() == ExportFormat.CSV) {
                 tables.getChildren().add(button(p, p.title()));
             }
         }
@@ -63,10 +63,11 @@ public final class ExportView implements Tool {
                 small("paper"));
 
         FlowPane charts = flow(heading("Charts"));
-        for (ExportPiece p : ExportPiece.values()) {
-            if (p.format() == ExportPiece.Format.PNG) {
-                HBox pair = new HBox(2, small(p.title().replace(" curve", "")), button(p, "PNG"),
-                        button(ExportPiece.valueOf(p.name().replace("_PNG", "_SVG")), "SVG"));
+        for (ExportContent c : ExportContent.values()) {
+            if (c.isChart()) {
+                HBox pair = new HBox(2, small(c.title().replace(" curve", "")));
+                c.formats().forEach(f -> pair.getChildren().add(button(new ExportPiece(c, f),
+                        f.extension().toUpperCase(Locale.ROOT))));
                 pair.setAlignment(Pos.CENTER_LEFT);
                 charts.getChildren().add(pair);
             }
@@ -108,7 +109,7 @@ public final class ExportView implements Tool {
 
     private Button button(ExportPiece p, String text) {
         Button b = new Button(text);
-        b.setId("export-" + p.name().toLowerCase(Locale.ROOT).replace('_', '-'));
+        b.setId("export-" + p.id());
         b.setOnAction(e -> model.export(p));
         b.setTooltip(new Tooltip(p.title() + " as " + p.format().extension().toUpperCase(Locale.ROOT)
                 + ", into a file you choose"));

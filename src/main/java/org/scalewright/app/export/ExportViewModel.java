@@ -319,19 +319,19 @@ public final class ExportViewModel {
 
     private void writePiece(ExportPiece piece, ReportContent c, Path file) throws IOException {
         List<String> head = comments(c);
-        switch (piece) {
+        switch (piece.content()) {
             case SCHEDULE -> csv(file, ScheduleCsv.sheet(c.schedule(), c.units(), head));
             case WOUND_ORDER -> csv(file, WoundOrderCsv.sheet(c.woundOrder(), c.units(), head));
             case WIRE_ORDER -> csv(file, WireOrderCsv.sheet(c.wireOrder(), c.units(), head));
-            case STRETCH_CSV -> csv(file, StretchCsv.sheet(c.chosenStretch(), c.stretchInOrder(), head));
+            case STRETCH_TABLE -> csv(file, StretchCsv.sheet(c.chosenStretch(), c.stretchInOrder(), head));
             case RESULTS -> CsvReportWriter.write(file, AnalysisCsv.comments(c.analysis()), AnalysisCsv.HEADER,
                     AnalysisCsv.rows(c.analysis()));
-            case PDF -> AtomicFiles.write(file, Reports.make(c, charts)
+            case REPORT -> AtomicFiles.write(file, Reports.make(c, charts)
                     .content(ReportPackage.PDF), false);
             default -> {
                 byte[] bytes = ChartsNotDrawn.guard(() -> {
                     JFreeChart chart = chart(piece, c);
-                    return piece.format() == ExportPiece.Format.PNG
+                    return piece.format() == ExportFormat.PNG
                             ? ChartFiles.png(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT,
                                     ChartFiles.PRINT_DPI)
                             : ChartFiles.svgBytes(chart, ChartFiles.PRINT_WIDTH, ChartFiles.PRINT_HEIGHT);
@@ -349,11 +349,11 @@ public final class ExportViewModel {
     private JFreeChart chart(ExportPiece piece, ReportContent c) {
         CurveData data = CurveData.of(c.analysis(), session.units())
                 .withReference(c.reference().map(ReportContent.Reference::analysis).orElse(null));
-        return switch (piece.fileStem()) {
-            case "tension" -> ScaleCurves.build(Curve.TENSION, data);
-            case "break-percent" -> ScaleCurves.build(Curve.BREAK_PERCENT, data);
-            case "inharmonicity" -> ScaleCurves.build(Curve.INHARMONICITY, data);
-            case "stretch" -> StretchChart.build(c.title(), c.stretchInOrder());
+        return switch (piece.content()) {
+            case TENSION_CURVE -> ScaleCurves.build(Curve.TENSION, data);
+            case BREAK_PERCENT_CURVE -> ScaleCurves.build(Curve.BREAK_PERCENT, data);
+            case INHARMONICITY_CURVE -> ScaleCurves.build(Curve.INHARMONICITY, data);
+            case STRETCH_CURVE -> StretchChart.build(c.title(), c.stretchInOrder());
             default -> throw new IllegalArgumentException("not a chart: " + piece);
         };
     }

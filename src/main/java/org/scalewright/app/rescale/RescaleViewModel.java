@@ -348,8 +348,8 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
             join = PlanChecks.joinBreakKeys((int) Math.min(j, Integer.MAX_VALUE));
         }
         List<Double> cores = WoundPlanner.presentCores(present, r, BuiltInData.musicWireSizes().diameters());
-        return WoundPlanOptions.defaults(max).withWraps(wraps).withCores(cores).withDoubleAbove(dbl)
-                .withJoinBreak(join);
+        return new WoundPlanOptions(TargetQuantity.TENSION, wraps, dbl, WoundPlanOptions.DEFAULT_DOUBLE_RATIO, cores,
+                max, WoundPlanOptions.DEFAULT_CHANGE_COST, WoundPlanOptions.DEFAULT_STEP_COST, join);
     }
 
     private TargetCurve buildTarget(ScaleAnalysis present, KeyRange r) {

@@ -107,6 +107,14 @@ public final class FxPrompts implements UserPrompts {
     }
 
     @Override
+    public Optional<Path> chooseArchiveFile() {
+        FileChooser c = chooser("Choose the workshop archive");
+        c.getExtensionFilters().addAll(new FileChooser.ExtensionFilter("Workshop archives (*.db)", "*.db"),
+                new FileChooser.ExtensionFilter("All files", "*"));
+        return remember(c.showOpenDialog(owner));
+    }
+
+    @Override
     public void showProblems(String title, String intro, List<String> problems) {
         if (!owner.isShowing()) {
             Platform.runLater(() -> showProblems(title, intro, problems));

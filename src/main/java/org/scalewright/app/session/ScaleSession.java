@@ -238,6 +238,25 @@ public final class ScaleSession {
         inform("closed; open a sheet with File > Open or File > Open recent");
     }
 
+    /**
+     * Opens a scale that has no file of its own (a version from the workshop archive): it becomes
+     * the working scale and the reference, the history starts afresh, and Save asks for a file.
+     *
+     * @param name what the window calls it ({@code grand-190, version 2 (planned)})
+     */
+    public void openUnfiled(Scale scale, String name) {
+        ScaleAnalyzer.analyze(scale, settings.get());
+        history.reset(scale);
+        file.set(null);
+        source.set(null); // nothing on disk to revert to
+        documentName.set(name);
+        selectedKey.set(null);
+        reference.set(scale);
+        referenceName.set("as opened: " + name);
+        setScale(scale);
+        inform("opened " + name + " (" + scale.notes().size() + " notes); Save asks for a file");
+    }
+
     /** Saves to the current file; false when there is none (use {@link #saveAs}). */
     boolean save() throws IOException {
         if (file.get() == null) {
@@ -286,6 +305,12 @@ public final class ScaleSession {
     public void useCurrentAsReference() {
         setReference(scale(), "copy of the working scale");
         inform("the working scale as it is now is the reference");
+    }
+
+    /** Makes {@code ref} the reference scale under the name {@code name} (a version from the archive). */
+    public void useAsReference(Scale ref, String name) {
+        setReference(ref, name);
+        inform("reference: " + name);
     }
 
     public void openReference(Path sheet) throws BadInputException {

@@ -72,4 +72,9 @@ public interface UserPrompts {
     default Optional<Path> choosePitchStateFile() {
         return chooseSheetToOpen("Open the cents flat per note");
     }
+
+    /** @return a workshop archive file to use, or empty when the user cancelled; by default asked like a sheet */
+    default Optional<Path> chooseArchiveFile() {
+        return chooseSheetToOpen("Choose the workshop archive");
+    }
 }

@@ -246,13 +246,8 @@ public final class WireCheckViewModel {
             return result.refuse(bad);
         }
         var settings = session.settingsProperty().get();
-        WireCheckRequest request = WireCheckRequest.of(session.scale(), settings)
-                .withReplacement(replacement.get() == null ? settings.strength() : replacement.get())
-                .withConversion(conversion.get().value())
-                .withTarget(target)
-                .withFlat(state)
-                .withOverpull(pull)
-                .withStageLimit(limit);
+        WireCheckRequest request = new WireCheckRequest(session.scale(), settings, replacement.get(),
+                conversion.get().value(), target, state, pull, limit);
         WireCheckReport r;
         try {
             r = WireCheck.run(request);

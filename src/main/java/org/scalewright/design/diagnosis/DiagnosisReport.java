@@ -8,10 +8,18 @@ import java.util.List;
  * @param request what was asked
  * @param notes   the notes of the range, bass to treble
  * @param finding the finding in plain words with its remedies
+ * @param breaks  what the breaks recorded for the instrument say ({@link BreakFindings#NONE} without them)
  */
-public record DiagnosisReport(DiagnosisRequest request, List<DiagnosedNote> notes, Finding finding) {
+public record DiagnosisReport(DiagnosisRequest request, List<DiagnosedNote> notes, Finding finding,
+                              BreakFindings breaks) {
     public DiagnosisReport {
         notes = List.copyOf(notes);
+        breaks = breaks == null ? BreakFindings.NONE : breaks;
+    }
+
+    /** A report without recorded breaks. */
+    public DiagnosisReport(DiagnosisRequest request, List<DiagnosedNote> notes, Finding finding) {
+        this(request, notes, finding, BreakFindings.NONE);
     }
 
     /** @return the notes that stand out from their section's trend (above or below) */

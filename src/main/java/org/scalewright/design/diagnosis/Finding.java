@@ -18,6 +18,13 @@ public record Finding(StressCause cause, List<String> explanation, List<Remedy> 
         inspect = List.copyOf(inspect);
     }
 
+    /** @return this finding with more paragraphs after its explanation (the recorded breaks) */
+    public Finding withMore(List<String> paragraphs) {
+        List<String> all = new java.util.ArrayList<>(explanation);
+        all.addAll(paragraphs);
+        return new Finding(cause, all, remedies, inspect);
+    }
+
     /** @return the remedies that, applied, bring the range under the caution band */
     public List<Remedy> fixing() {
         return remedies.stream().filter(Remedy::fixes).toList();

@@ -6,6 +6,7 @@ import java.util.OptionalDouble;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
+import org.scalewright.model.StringBreak;
 import org.scalewright.physics.AnalysisSettings;
 import org.scalewright.physics.NoteCalculator;
 import org.scalewright.physics.NoteResult;
@@ -54,6 +55,22 @@ public final class SectionDiagnosis {
         }
         Finding finding = FindingWriter.write(request, out);
         return new DiagnosisReport(request, out, finding);
+    }
+
+    /**
+     * A diagnosis that also takes in the breaks recorded for the instrument: how many broke where in
+     * the range, at what stress and headroom, and whether they follow stress, one section, a bearing
+     * point or one batch of wire ({@link BreakFindings}); their paragraphs follow the finding's.
+     *
+     * @param request the scale, range, settings and candidate tables
+     * @param breaks  the instrument's recorded breaks, any keys (those outside the range are only counted)
+     * @return the report with {@link DiagnosisReport#breaks()}; the scale is not changed
+     * @throws InvalidInput as {@link #diagnose(DiagnosisRequest)}
+     */
+    public static DiagnosisReport diagnose(DiagnosisRequest request, List<StringBreak> breaks) {
+        DiagnosisReport plain = diagnose(request);
+        BreakFindings found = BreakFindings.of(request, plain.notes(), breaks);
+        return new DiagnosisReport(request, plain.notes(), plain.finding().withMore(found.words()), found);
     }
 
     /**

@@ -74,16 +74,4 @@ public record WireAllowances(double pinAllowance, double lengthAllowance, boolea
         }
         return mm / 1e3;
     }
-
-    public WireAllowances withPinAllowance(double metres) {
-        return new WireAllowances(metres, lengthAllowance, looped);
-    }
-
-    public WireAllowances withLengthAllowance(double metres) {
-        return new WireAllowances(pinAllowance, metres, looped);
-    }
-
-    public WireAllowances withLooped(boolean isLooped) {
-        return new WireAllowances(pinAllowance, lengthAllowance, isLooped);
-    }
 }

@@ -80,34 +80,4 @@ public record WoundPlanOptions(TargetQuantity quantity, WrapWires wraps, Optiona
                 OptionalDouble.empty(), DEFAULT_DOUBLE_RATIO, List.of(), maxBreakPct, DEFAULT_CHANGE_COST,
                 DEFAULT_STEP_COST, 0);
     }
-
-    public WoundPlanOptions withWraps(WrapWires w) {
-        return new WoundPlanOptions(quantity, w, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
-                joinBreakKeys);
-    }
-
-    public WoundPlanOptions withDoubleAbove(OptionalDouble d) {
-        return new WoundPlanOptions(quantity, wraps, d, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
-                joinBreakKeys);
-    }
-
-    public WoundPlanOptions withCores(List<Double> c) {
-        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, c, maxBreakPct, changeCost, stepCost,
-                joinBreakKeys);
-    }
-
-    public WoundPlanOptions withJoinBreak(int keys) {
-        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
-                keys);
-    }
-
-    public WoundPlanOptions withStepCost(double cost) {
-        return new WoundPlanOptions(quantity, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, cost,
-                joinBreakKeys);
-    }
-
-    public WoundPlanOptions withQuantity(TargetQuantity q) {
-        return new WoundPlanOptions(q, wraps, doubleAbove, doubleRatio, cores, maxBreakPct, changeCost, stepCost,
-                joinBreakKeys);
-    }
 }

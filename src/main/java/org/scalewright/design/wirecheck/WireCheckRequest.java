@@ -72,30 +72,6 @@ public record WireCheckRequest(Scale scale, AnalysisSettings settings, StrengthT
                 PitchState.atPitch(), 0, StageLimit.DEFAULT);
     }
 
-    public WireCheckRequest withReplacement(StrengthTable table) {
-        return new WireCheckRequest(scale, settings, table, conversion, target, flat, overpullPct, stageLimit);
-    }
-
-    public WireCheckRequest withConversion(WireConversion c) {
-        return new WireCheckRequest(scale, settings, replacement, c, target, flat, overpullPct, stageLimit);
-    }
-
-    public WireCheckRequest withTarget(PitchStandard p) {
-        return new WireCheckRequest(scale, settings, replacement, conversion, p, flat, overpullPct, stageLimit);
-    }
-
-    public WireCheckRequest withFlat(PitchState state) {
-        return new WireCheckRequest(scale, settings, replacement, conversion, target, state, overpullPct, stageLimit);
-    }
-
-    public WireCheckRequest withOverpull(double pct) {
-        return new WireCheckRequest(scale, settings, replacement, conversion, target, flat, pct, stageLimit);
-    }
-
-    public WireCheckRequest withStageLimit(StageLimit limit) {
-        return new WireCheckRequest(scale, settings, replacement, conversion, target, flat, overpullPct, limit);
-    }
-
     /** @return true when any note is raised: flat of its target now, or a higher target standard */
     public boolean isPitchRaise() {
         return !flat.noRaise() || target.a4() > scale.pitch().a4();

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
-import org.junit.jupiter.params.provider.EnumSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.TestSheets;
@@ -141,8 +141,12 @@ class ExportViewModelTest {
         assertFalse(Files.exists(dir.resolve("missing")));
     }
 
+    static List<ExportPiece> pieces() {
+        return ExportPiece.all();
+    }
+
     @ParameterizedTest
-    @EnumSource(ExportPiece.class)
+    @MethodSource("pieces")
     void eachPieceAloneWritesItsFile(ExportPiece piece) throws IOException {
         Path chosen = dir.resolve("piece"); // without extension: the export adds it
         prompts.files.add(chosen);
@@ -162,7 +166,7 @@ class ExportViewModelTest {
         }
         assertEquals(1, vm.written().size());
         assertEquals(b.length, vm.written().get(0).bytes());
-        if (piece.format() == ExportPiece.Format.CSV && piece != ExportPiece.RESULTS) {
+        if (piece.format() == ExportFormat.CSV && piece.content() != ExportContent.RESULTS) {
             assertTrue(Files.readString(file).contains("# reference: as opened: grand-190.csv"));
         }
         assertTrue(session.messageProperty().get().startsWith("wrote "), session.messageProperty().get());
@@ -171,10 +175,10 @@ class ExportViewModelTest {
     @Test
     void theTablesFollowTheDisplayUnits() throws IOException {
         Path metric = dir.resolve("metric.csv");
-        assertTrue(vm.write(ExportPiece.SCHEDULE, metric));
+        assertTrue(vm.write(ExportPiece.of(ExportContent.SCHEDULE), metric));
         session.unitsProperty().set(DisplayUnits.IMPERIAL);
         Path imperial = dir.resolve("imperial.csv");
-        assertTrue(vm.write(ExportPiece.SCHEDULE, imperial));
+        assertTrue(vm.write(ExportPiece.of(ExportContent.SCHEDULE), imperial));
         String m = Files.readAllLines(metric).stream().filter(l -> !l.startsWith("#")).findFirst().orElseThrow();
         String i = Files.readAllLines(imperial).stream().filter(l -> !l.startsWith("#")).findFirst().orElseThrow();
         assertTrue(m.contains("_mm") && !m.contains("_in"), m);
@@ -183,10 +187,10 @@ class ExportViewModelTest {
 
     @Test
     void aFileIntoAMissingFolderOrOntoAFolderSaysWhyAndWritesNothing() throws IOException {
-        assertFalse(vm.write(ExportPiece.WIRE_ORDER, dir.resolve("nope").resolve("w.csv")));
+        assertFalse(vm.write(ExportPiece.of(ExportContent.WIRE_ORDER), dir.resolve("nope").resolve("w.csv")));
         assertTrue(vm.noteProperty().get().contains("does not exist"), vm.noteProperty().get());
         Files.createDirectory(dir.resolve("taken.csv"));
-        assertFalse(vm.write(ExportPiece.WIRE_ORDER, dir.resolve("taken.csv")));
+        assertFalse(vm.write(ExportPiece.of(ExportContent.WIRE_ORDER), dir.resolve("taken.csv")));
         assertTrue(vm.noteProperty().get().contains("is a folder"), vm.noteProperty().get());
         assertEquals(List.of("taken.csv"), names(dir));
         assertEquals(2, prompts.errors.size());

@@ -89,6 +89,6 @@ class WireOrderTest {
                 () -> new WireAllowances(-0.01, 0.1, true));
         assertTrue(e.getMessage().contains("tuning-pin and hitch allowance must be >= 0 mm, was -10"),
                 e.getMessage());
-        assertThrows(IllegalArgumentException.class, () -> WireAllowances.DEFAULT.withLengthAllowance(9));
+        assertThrows(IllegalArgumentException.class, () -> new WireAllowances(0.150, 9, true));
     }
 }

@@ -54,8 +54,8 @@ class WireListsTest {
                 refused(() -> WireLists.diameters(WireLists.CORES, "1.0,-1mm")));
         assertEquals("wrap wire list: diameter 0.250 mm is listed twice",
                 refused(() -> WrapWires.of(List.of(0.25e-3, 0.3e-3, 0.25e-3))));
-        assertEquals("core list: diameter 1.000 mm is listed twice", refused(() -> WoundPlanOptions.defaults(70)
-                .withCores(List.of(1.0e-3, 1.0e-3))));
+        assertEquals("core list: diameter 1.000 mm is listed twice", refused(() -> WoundOptions.max(70)
+                .cores(List.of(1.0e-3, 1.0e-3)).options()));
     }
 
     @Test
@@ -70,10 +70,10 @@ class WireListsTest {
         assertEquals("change cost must be 0 or more, was -0.5", refused(() -> PlainPlanOptions.of(one, 70)
                 .withChangeCost(-0.5)));
         assertEquals("step cost must be 0 or more, was -1", refused(() -> PlainPlanOptions.of(one, 70).withStepCost(-1)));
-        assertEquals("step cost must be 0 or more, was -1", refused(() -> WoundPlanOptions.defaults(70).withStepCost(-1)));
+        assertEquals("step cost must be 0 or more, was -1", refused(() -> WoundOptions.max(70).stepCost(-1).options()));
         assertEquals(0.0, PlanChecks.stepCost(0));
         assertEquals("keys joined either side of a break must be 0 (off) to 20, was 21",
-                refused(() -> WoundPlanOptions.defaults(70).withJoinBreak(21)));
+                refused(() -> WoundOptions.max(70).joinBreak(21).options()));
         assertEquals(20, PlanChecks.joinBreakKeys(20));
         assertEquals("wrap wire step must be more than 0 and at most 1 mm, was 1.5 mm",
                 refused(() -> WrapWires.steps(1.5e-3)));

@@ -24,8 +24,8 @@ class WoundPlannerTest {
     private static final AnalysisSettings SETTINGS = BuiltInData.defaultSettings();
     private static final KeyRange ALL = new KeyRange(1, 88);
 
-    private static WoundPlanOptions fine() {
-        return WoundPlanOptions.defaults(70).withWraps(WrapWires.steps(0.001e-3)).withStepCost(0);
+    private static WoundOptions fine() {
+        return WoundOptions.max(70).wraps(WrapWires.steps(0.001e-3)).stepCost(0);
     }
 
     @Test
@@ -41,7 +41,7 @@ class WoundPlannerTest {
                     .toList());
             ScaleAnalysis present = ScaleAnalyzer.analyze(half, SETTINGS);
             TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
-            Proposal p = WoundPlanner.plan(present, ALL, target, fine());
+            Proposal p = WoundPlanner.plan(present, ALL, target, fine().options());
             assertTrue(p.changes().size() > 5);
             for (KeyChange c : p.changes()) {
                 assertEquals(0, c.deviationPct(), 0.5, "key " + c.key() + " with half its length bare");
@@ -55,7 +55,7 @@ class WoundPlannerTest {
         for (long seed = 1; seed <= 6; seed++) {
             ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(seed), SETTINGS);
             TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
-            Proposal p = WoundPlanner.plan(present, ALL, target, fine());
+            Proposal p = WoundPlanner.plan(present, ALL, target, fine().options());
             assertEquals(TestScales.lastWound(present.scale()), p.changes().size());
             for (KeyChange c : p.changes()) {
                 // 0.001 mm wrap steps: the mass error is well under 0.5 % of the target
@@ -71,7 +71,7 @@ class WoundPlannerTest {
     void withTheDefaultWrapStepTheErrorStaysWithinOneStepOfWrapWire() throws Exception {
         ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(7), SETTINGS);
         TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
-        WoundPlanOptions o = WoundPlanOptions.defaults(70).withStepCost(0);
+        WoundPlanOptions o = WoundOptions.max(70).stepCost(0).options();
         Proposal p = WoundPlanner.plan(present, ALL, target, o);
         for (KeyChange c : p.changes()) {
             Note n = c.after();
@@ -99,7 +99,7 @@ class WoundPlannerTest {
         ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(8), SETTINGS);
         TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
         double threshold = 0.8e-3;
-        Proposal p = WoundPlanner.plan(present, ALL, target, fine().withDoubleAbove(OptionalDouble.of(threshold)));
+        Proposal p = WoundPlanner.plan(present, ALL, target, fine().doubleAbove(threshold).options());
         boolean sawDouble = false;
         boolean sawSingle = false;
         for (KeyChange c : p.changes()) {
@@ -121,7 +121,7 @@ class WoundPlannerTest {
     void targetOfPercentOfBreakingStrengthIsMetOnTheCore() {
         ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(9), SETTINGS);
         TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.BREAK_PCT, false);
-        Proposal p = WoundPlanner.plan(present, ALL, target, fine().withQuantity(TargetQuantity.BREAK_PCT));
+        Proposal p = WoundPlanner.plan(present, ALL, target, fine().quantity(TargetQuantity.BREAK_PCT).options());
         for (KeyChange c : p.changes()) {
             assertEquals(c.target(), c.afterResult().breakPct(), 0.005 * c.target(), "key " + c.key());
         }
@@ -134,9 +134,9 @@ class WoundPlannerTest {
             Scale scale = TestScales.random(seed);
             ScaleAnalysis present = ScaleAnalyzer.analyze(scale, SETTINGS);
             TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
-            WoundPlanOptions o = WoundPlanOptions.defaults(70).withWraps(WrapWires.steps(0.01e-3));
-            Proposal plain = WoundPlanner.plan(present, ALL, target, o);
-            Proposal joined = WoundPlanner.plan(present, ALL, target, o.withJoinBreak(4));
+            WoundOptions o = WoundOptions.max(70).wraps(WrapWires.steps(0.01e-3));
+            Proposal plain = WoundPlanner.plan(present, ALL, target, o.options());
+            Proposal joined = WoundPlanner.plan(present, ALL, target, o.joinBreak(4).options());
             int breakKey = breakKey(scale);
             double bPlain = bStep(plain.after(), breakKey);
             double bJoined = bStep(joined.after(), breakKey);
@@ -183,7 +183,7 @@ class WoundPlannerTest {
         for (long seed = 1; seed <= 5; seed++) {
             ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(seed), SETTINGS);
             TargetCurve target = WoundPlanner.target(present, ALL, TargetSpec.loess(0.5), TargetQuantity.TENSION, false);
-            Proposal p = WoundPlanner.plan(present, ALL, target, WoundPlanOptions.defaults(60).withCores(cores));
+            Proposal p = WoundPlanner.plan(present, ALL, target, WoundOptions.max(60).cores(cores).options());
             double previous = Double.POSITIVE_INFINITY;
             for (KeyChange c : p.changes()) {
                 double d = c.after().wire().diameter();
@@ -201,7 +201,7 @@ class WoundPlannerTest {
         ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(2), SETTINGS);
         KeyRange range = new KeyRange(1, 5);
         TargetCurve low = new TargetCurve(1, new double[] {100, 100, 100, 100, 100}, "too low");
-        PlanNotPossible e = assertThrows(PlanNotPossible.class, () -> WoundPlanner.plan(present, range, low, fine()));
+        PlanNotPossible e = assertThrows(PlanNotPossible.class, () -> WoundPlanner.plan(present, range, low, fine().options()));
         assertEquals(5, e.reasons().size());
         assertTrue(e.reasons().get(0).contains("alone already gives"), e.reasons().get(0));
     }
@@ -211,7 +211,7 @@ class WoundPlannerTest {
         ScaleAnalysis present = ScaleAnalyzer.analyze(TestScales.random(2), SETTINGS);
         KeyRange range = new KeyRange(1, 3);
         TargetCurve high = new TargetCurve(1, new double[] {3000, 3000, 3000}, "too high");
-        PlanNotPossible e = assertThrows(PlanNotPossible.class, () -> WoundPlanner.plan(present, range, high, fine()));
+        PlanNotPossible e = assertThrows(PlanNotPossible.class, () -> WoundPlanner.plan(present, range, high, fine().options()));
         assertTrue(e.reasons().get(0).contains("over the maximum 70.0 %"), e.reasons().get(0));
     }
 
@@ -222,7 +222,7 @@ class WoundPlannerTest {
         int last = TestScales.lastWound(scale);
         KeyRange range = new KeyRange(last - 3, last + 3);
         TargetCurve target = WoundPlanner.target(present, range, TargetSpec.loess(1), TargetQuantity.TENSION, false);
-        Proposal p = WoundPlanner.plan(present, range, target, fine());
+        Proposal p = WoundPlanner.plan(present, range, target, fine().options());
         assertEquals(4, p.changes().size());
         assertTrue(p.notes().get(0).contains("plain wire, skipped"), p.notes().get(0));
         assertFalse(p.notes().get(0).contains(Integer.toString(last - 3) + ","));

@@ -59,9 +59,9 @@ class WireCheckTest {
         //   σ peak     = 1519.76 · 2^(20/1200) − 0.49348         = 1536.92 MPa  →  76.846 %
         //   present    = 40 cents flat: T = (4 L² μ f² − K) at f = 440 · 2^(−40/1200)
         Scale s = new Scale("", PitchStandard.ISO_16, List.of(Note.plain(49, 1, 0.5, CoreWire.ofDiameter(1e-3))), null);
-        WireCheckRequest q = WireCheckRequest.of(s, settings(FLAT_2000)).withFlat(PitchState.uniform(40))
+        Asked q = Asked.of(s, settings(FLAT_2000)).withFlat(PitchState.uniform(40))
                 .withOverpull(25);
-        WireCheckNote n = WireCheck.run(q).notes().get(0);
+        WireCheckNote n = Asked.run(q).notes().get(0);
         assertEquals(75.963, n.breakPctBefore(), 0.001);
         assertEquals(75.963, n.breakPctAfter(), 0.001);
         assertEquals(76.846, n.breakPctPeak(), 0.001);
@@ -76,11 +76,11 @@ class WireCheckTest {
 
     @Test
     void aTableTenPercentStrongerDividesEveryPercentByOnePointOne() {
-        WireCheckRequest q = WireCheckRequest.of(testScale(), settings(SLOPED))
+        Asked q = Asked.of(testScale(), settings(SLOPED))
                 .withReplacement(SLOPED.scaled(1.1, "10 % stronger")).withFlat(PitchState.uniform(30))
                 .withOverpull(25);
-        WireCheckReport same = WireCheck.run(q.withReplacement(SLOPED));
-        WireCheckReport stronger = WireCheck.run(q);
+        WireCheckReport same = Asked.run(q.withReplacement(SLOPED));
+        WireCheckReport stronger = Asked.run(q);
         for (WireCheckNote n : stronger.notes()) {
             WireCheckNote m = same.note(n.key()).orElseThrow();
             assertEquals(n.breakPctBefore() / 1.1, n.breakPctAfter(), 1e-9 * n.breakPctBefore(), "key " + n.key());
@@ -95,7 +95,7 @@ class WireCheckTest {
     void aPeakTenCentsSharpMultipliesStressByTwoToTheTwentyOverTwelveHundred() {
         double ratio = Math.pow(2, 20 / 1200.0);
         // with stiffness: the tension plus K scales with f², so (σ_peak A + K) / (σ A + K) = 2^(20/1200)
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(testScale(), settings(SLOPED))
+        WireCheckReport r = Asked.run(Asked.of(testScale(), settings(SLOPED))
                 .withFlat(PitchState.uniform(40)).withOverpull(25));
         for (WireCheckNote n : r.notes()) {
             double a = StringPhysics.area(n.after().coreDiameter());
@@ -104,7 +104,7 @@ class WireCheckTest {
         }
         // flexible limit (E → 0, K → 0): the stress itself scales by 2^(20/1200)
         Materials limp = new Materials(7850, 8960, 7870, 1e-6);
-        WireCheckReport flexible = WireCheck.run(WireCheckRequest.of(testScale(), AnalysisSettings.of(limp, SLOPED))
+        WireCheckReport flexible = Asked.run(Asked.of(testScale(), AnalysisSettings.of(limp, SLOPED))
                 .withFlat(PitchState.uniform(40)).withOverpull(25));
         for (WireCheckNote n : flexible.notes()) {
             assertEquals(ratio, n.breakPctPeak() / n.breakPctAfter(), 1e-12, "key " + n.key());
@@ -113,7 +113,7 @@ class WireCheckTest {
 
     @Test
     void notesOverTheDangerBandComeFirstHighestPeakFirst() {
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(testScale(), settings(SLOPED))
+        WireCheckReport r = Asked.run(Asked.of(testScale(), settings(SLOPED))
                 .withReplacement(SLOPED.scaled(0.82, "weaker")).withFlat(PitchState.uniform(60)).withOverpull(30));
         List<WireCheckNote> risk = r.atRisk();
         assertFalse(risk.isEmpty(), "the weaker table must put some notes past the danger band");
@@ -137,10 +137,10 @@ class WireCheckTest {
         for (int i = 0; i <= 40; i++) {
             metric.add((0.7 + 0.025 * i) * 1e-3);
         }
-        WireCheckRequest q = WireCheckRequest.of(testScale(), settings(SLOPED))
+        Asked q = Asked.of(testScale(), settings(SLOPED))
                 .withReplacement(FLAT_2000).withConversion(WireConversion.toMetric(SizeRounding.UP, metric))
                 .withTarget(new PitchStandard(442)).withFlat(PitchState.uniform(20)).withOverpull(25);
-        WireCheckReport r = WireCheck.run(q);
+        WireCheckReport r = Asked.run(q);
         double present = 0;
         double after = 0;
         double peak = 0;
@@ -164,17 +164,17 @@ class WireCheckTest {
         assertEquals(peak, r.totals().peak(), 1e-6 * peak);
         assertEquals(after - present, r.totals().changeToTarget(), 1e-6);
         assertTrue(r.totals().peak() > r.totals().afterAtTarget());
-        assertTrue(q.isPitchRaise());
+        assertTrue(q.request().isPitchRaise());
     }
 
     @Test
     void smallRaiseNeedsNoStagesLargeRaiseGetsAPlanWithinTheLimits() {
-        WireCheckRequest base = WireCheckRequest.of(testScale(), settings(SLOPED)).withOverpull(25);
-        StageAdvice small = WireCheck.run(base.withFlat(PitchState.uniform(5))).stages();
+        Asked base = Asked.of(testScale(), settings(SLOPED)).withOverpull(25);
+        StageAdvice small = Asked.run(base.withFlat(PitchState.uniform(5))).stages();
         assertFalse(small.advised());
         assertEquals(1, small.stages().size());
 
-        WireCheckReport big = WireCheck.run(base.withFlat(PitchState.uniform(100)));
+        WireCheckReport big = Asked.run(base.withFlat(PitchState.uniform(100)));
         StageAdvice a = big.stages();
         assertTrue(a.advised());
         assertTrue(big.totals().changeToPeak() > a.limitNewtons());
@@ -188,14 +188,14 @@ class WireCheckTest {
                 a.stages().size() - 1);
         assertTrue(fewer.stream().anyMatch(s -> s.change() > a.limitNewtons() || s.maxPeakPct() >= 70));
         // a limit in kN is used as given
-        StageAdvice kn = WireCheck.run(base.withFlat(PitchState.uniform(100)).withStageLimit(StageLimit.kiloNewtons(1000)))
+        StageAdvice kn = Asked.run(base.withFlat(PitchState.uniform(100)).withStageLimit(StageLimit.kiloNewtons(1000)))
                 .stages();
         assertEquals(1e6, kn.limitNewtons(), 0);
     }
 
     @Test
     void notesInTheDangerBandAtTargetAreNamedAsBeyondStaging() {
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(testScale(), settings(SLOPED))
+        WireCheckReport r = Asked.run(Asked.of(testScale(), settings(SLOPED))
                 .withReplacement(SLOPED.scaled(0.6, "much weaker")).withFlat(PitchState.uniform(20)).withOverpull(25));
         assertFalse(r.stages().dangerAtTarget().isEmpty());
         for (int key : r.stages().dangerAtTarget()) {
@@ -205,7 +205,7 @@ class WireCheckTest {
 
     @Test
     void perNoteFlatnessIsUsedNoteByNote() {
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(testScale(), settings(SLOPED))
+        WireCheckReport r = Asked.run(Asked.of(testScale(), settings(SLOPED))
                 .withFlat(PitchState.measured(java.util.Map.of(30, 10.0, 70, 50.0))).withOverpull(20));
         WireCheckNote n = r.note(50).orElseThrow();
         assertEquals(30.0, n.centsFlat(), 1e-12);

@@ -21,12 +21,12 @@ import org.scalewright.physics.Pitch;
  * one reading of its inputs (stage limit, cents flat, overpull), shared by both front ends.
  */
 class WireCheckWordsTest {
-    private static final WireCheckRequest BASE = WireCheckRequest.of(WireCheckTest.testScale(),
+    private static final Asked BASE = Asked.of(WireCheckTest.testScale(),
             WireCheckTest.settings(WireCheckTest.SLOPED)).withOverpull(25);
 
     @Test
     void aSmallRaiseSaysStagingIsNotNeededAndNamesTheLimit() {
-        WireCheckReport r = WireCheck.run(BASE.withFlat(PitchState.uniform(5)));
+        WireCheckReport r = Asked.run(BASE.withFlat(PitchState.uniform(5)));
         StageWords w = r.stageWords();
         assertEquals("Raise in stages: not needed by these figures (no peak in the danger band; total tension change "
                 + "within 5 % of the present total).", w.headline());
@@ -35,7 +35,7 @@ class WireCheckWordsTest {
 
     @Test
     void aLargeRaiseGivesReasonsAPlanAndOneLinePerPass() {
-        WireCheckReport r = WireCheck.run(BASE.withFlat(PitchState.uniform(100)));
+        WireCheckReport r = Asked.run(BASE.withFlat(PitchState.uniform(100)));
         StageWords w = r.stageWords();
         StageAdvice a = r.stages();
         assertEquals("Raise in stages: advised, because", w.headline());
@@ -60,7 +60,7 @@ class WireCheckWordsTest {
 
     @Test
     void keysInTheDangerBandAtTheTargetAreNamedAsBeyondStaging() {
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(WireCheckTest.testScale(),
+        WireCheckReport r = Asked.run(Asked.of(WireCheckTest.testScale(),
                         WireCheckTest.settings(WireCheckTest.SLOPED))
                 .withReplacement(WireCheckTest.SLOPED.scaled(0.6, "much weaker")).withFlat(PitchState.uniform(20))
                 .withOverpull(25));
@@ -99,7 +99,7 @@ class WireCheckWordsTest {
     @Test
     void aNoteOverTheDangerBandAtTheTargetIsNamedAndNoPassClaimsEveryNoteStaysUnder() {
         Scale s = oneNoteJustOverDanger();
-        WireCheckReport r = WireCheck.run(WireCheckRequest.of(s, WireCheckTest.settings(WireCheckTest.SLOPED))
+        WireCheckReport r = Asked.run(Asked.of(s, WireCheckTest.settings(WireCheckTest.SLOPED))
                 .withFlat(PitchState.uniform(100)).withOverpull(25));
         WireCheckNote key60 = r.note(60).orElseThrow();
         assertTrue(key60.breakPctAfter() >= 70 && key60.breakPctAfter() < 70.3, "" + key60.breakPctAfter());
@@ -163,9 +163,9 @@ class WireCheckWordsTest {
 
     @Test
     void theAtRiskSummaryCountsTheNotesAtThePeak() {
-        WireCheckReport calm = WireCheck.run(BASE.withFlat(PitchState.uniform(5)));
+        WireCheckReport calm = Asked.run(BASE.withFlat(PitchState.uniform(5)));
         assertEquals("No note reaches the danger band (70 %) at the peak.", calm.riskSummary());
-        WireCheckReport risky = WireCheck.run(WireCheckRequest.of(WireCheckTest.testScale(),
+        WireCheckReport risky = Asked.run(Asked.of(WireCheckTest.testScale(),
                         WireCheckTest.settings(WireCheckTest.SLOPED))
                 .withReplacement(WireCheckTest.SLOPED.scaled(0.6, "much weaker")).withFlat(PitchState.uniform(20)));
         int n = risky.atRisk().size();

@@ -1,0 +1,30 @@
+package org.scalewright.archive;
+
+import java.time.LocalDate;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
+
+/**
+ * A job done on an instrument.
+ *
+ * @param date          the day
+ * @param kind          what kind of job (free text: restringing, pitch raise, rescale, regulation …)
+ * @param notes         free text
+ * @param a4            the pitch standard used, Hz, if recorded
+ * @param strengthTable the name of the strength table used ("" when not recorded)
+ * @param version       the number of the scale version the job worked to, if any
+ */
+public record Job(LocalDate date, String kind, String notes, OptionalDouble a4, String strengthTable,
+                  OptionalInt version) {
+    /** @throws ArchiveRefused when the kind is blank */
+    public Job {
+        kind = kind == null ? "" : kind.strip();
+        if (kind.isEmpty()) {
+            throw new ArchiveRefused("a job needs its kind (restringing, pitch raise, rescale …)");
+        }
+        notes = notes == null ? "" : notes.strip();
+        strengthTable = strengthTable == null ? "" : strengthTable.strip();
+        a4 = a4 == null ? OptionalDouble.empty() : a4;
+        version = version == null ? OptionalInt.empty() : version;
+    }
+}
