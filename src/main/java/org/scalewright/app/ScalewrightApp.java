@@ -5,6 +5,8 @@ import javafx.application.Application;
 import javafx.application.Platform;
 import javafx.stage.Stage;
 import org.scalewright.app.session.DemoSheet;
+import org.scalewright.app.session.DeskSettings;
+import org.scalewright.app.session.SettingsStore;
 import org.scalewright.app.session.FxPrompts;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.Timings;
@@ -22,8 +24,11 @@ public final class ScalewrightApp extends Application {
         long fxStarted = Timings.sinceProcessStart();
         LaunchRequest request = LaunchRequest.parse(getParameters().getRaw().toArray(String[]::new));
         ScaleSession session = new ScaleSession();
-        FxPrompts prompts = new FxPrompts(stage);
-        WorkstationViewModel model = new WorkstationViewModel(session, prompts);
+        DesktopLog.start();
+        DesktopLog.follow(session);
+        DeskSettings settings = new DeskSettings(SettingsStore.forUser());
+        FxPrompts prompts = new FxPrompts(stage, settings);
+        WorkstationViewModel model = new WorkstationViewModel(session, prompts, settings);
         WorkstationView view = new WorkstationView(stage, model);
         openAtStart(model, request);
         // a sheet double-clicked in the macOS Finder, at launch or later

@@ -4,8 +4,8 @@ import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.control.Label;
 import javafx.scene.control.ToggleButton;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
-import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
@@ -28,20 +28,23 @@ final class StatusView {
                 message.getStyleClass().add("problem");
             }
         });
-        message.setMinWidth(0);
-        message.setMaxWidth(Double.MAX_VALUE);
-        message.setAlignment(Pos.CENTER_RIGHT);
-        HBox.setHgrow(message, Priority.ALWAYS);
+        // a message that does not fit beside the totals goes onto a line of its own below them
+        // (and wraps only when longer than the whole window is wide), never cut short
+        message.setWrapText(true);
+        message.setMinHeight(Region.USE_PREF_SIZE);
+        message.setAlignment(Pos.CENTER_LEFT);
         ToggleButton sectionsButton = new ToggleButton("Section totals");
         sectionsButton.setId("status-sections-button");
         sectionsButton.setFocusTraversable(false);
         sectionsButton.setMinWidth(Region.USE_PREF_SIZE);
         totals.setMinWidth(Region.USE_PREF_SIZE);
         sectionsButton.selectedProperty().bindBidirectional(model.showSectionsProperty());
-        Region gap = new Region();
-        gap.setMinWidth(12);
-        HBox first = new HBox(8, sectionsButton, totals, gap, message);
+        HBox totalsRow = new HBox(8, sectionsButton, totals);
+        totalsRow.setAlignment(Pos.CENTER_LEFT);
+        totalsRow.setMinWidth(Region.USE_PREF_SIZE);
+        FlowPane first = new FlowPane(20, 2, totalsRow, message);
         first.setAlignment(Pos.CENTER_LEFT);
+        message.maxWidthProperty().bind(first.widthProperty().subtract(4));
         Label sections = new Label();
         sections.setId("status-sections");
         sections.textProperty().bind(model.sectionsProperty());

@@ -27,7 +27,6 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
 import org.scalewright.app.curves.CurvesView;
-import org.scalewright.app.export.ExportMenu;
 import org.scalewright.app.session.Choice;
 import org.scalewright.app.session.FxPrompts;
 import org.scalewright.app.session.StrengthChoice;
@@ -79,15 +78,43 @@ final class WorkstationView {
         }
         SplitPane centre = new SplitPane(left, curves.node());
         centre.setDividerPositions(0.58);
+        WindowLayout layout = new WindowLayout(model.settings());
+        layout.restore("centre", centre);
+        if (tools.getSelectionModel().getSelectedIndex() == 0) {
+            layout.restore("left", left);
+        }
+        // the window may be laid out at several sizes while it opens (the tools pane keeps its
+        // height on a resize), so the start positions are put back after each size change
+        // until the user presses on a divider or picks a tab (a tool tab chosen at start gets
+        // the lower half, as on a click)
+        double[] leftAtStart = left.getDividerPositions();
+        double[] centreAtStart = centre.getDividerPositions();
+        boolean[] settled = new boolean[1];
+        centre.addEventFilter(javafx.scene.input.MouseEvent.MOUSE_PRESSED, e -> settled[0] = true);
+        tools.getSelectionModel().selectedIndexProperty().addListener((o, was, now) -> settled[0] = true);
+        javafx.beans.InvalidationListener startPositions = o -> {
+            if (!settled[0]) {
+                javafx.application.Platform.runLater(() -> {
+                    if (!settled[0]) {
+                        left.setDividerPositions(leftAtStart);
+                        centre.setDividerPositions(centreAtStart);
+                    }
+                });
+            }
+        };
+        left.heightProperty().addListener(startPositions);
+        centre.widthProperty().addListener(startPositions);
 
         BorderPane root = new BorderPane();
         root.getStyleClass().add("workstation");
-        root.setTop(new VBox(menuBar(), toolBar()));
+        root.setTop(new VBox(menuBar(() -> layout.keep(stage, new String[] {"left", "centre"}, left, centre)),
+                toolBar()));
         root.setCenter(centre);
         root.setBottom(status.node());
-        var screen = javafx.stage.Screen.getPrimary().getVisualBounds();
-        scene = new Scene(root, Math.min(1560, screen.getWidth() - 20), Math.min(960, screen.getHeight() - 40));
+        double[] size = layout.startSize(javafx.stage.Screen.getPrimary().getVisualBounds());
+        scene = new Scene(root, size[0], size[1]);
         scene.getStylesheets().add(WorkstationView.class.getResource("workstation.css").toExternalForm());
+        DroppedSheets.install(scene, model);
         stage.setScene(scene);
         stage.titleProperty().bind(model.windowTitleProperty());
         stage.setMinWidth(900);
@@ -95,6 +122,8 @@ final class WorkstationView {
         stage.setOnCloseRequest(e -> {
             if (!model.mayClose()) {
                 e.consume();
+            } else {
+                layout.keep(stage, new String[] {"left", "centre"}, left, centre);
             }
         });
     }
@@ -129,21 +158,14 @@ final class WorkstationView {
         return model;
     }
 
-    private MenuBar menuBar() {
-        MenuItem open = item("Open sheet…", "menu-open", new KeyCodeCombination(KeyCode.O, KeyCombination.SHORTCUT_DOWN),
-                model::open);
-        MenuItem save = item("Save", "menu-save", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN),
-                model::save);
-        MenuItem saveAs = item("Save as…", "menu-save-as", new KeyCodeCombination(KeyCode.S,
-                KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN), model::saveAs);
-        MenuItem quit = item("Quit", "menu-quit", new KeyCodeCombination(KeyCode.Q, KeyCombination.SHORTCUT_DOWN),
-                () -> {
-                    if (model.mayClose()) {
-                        stage.close();
-                    }
-                });
-        Menu file = new Menu("File", null, open, save, saveAs, new SeparatorMenuItem(),
-                ExportMenu.build(model.exports()), new SeparatorMenuItem(), quit);
+    /** @param keepLayout keeps the window size and dividers for the next start */
+    private MenuBar menuBar(Runnable keepLayout) {
+        Menu file = FileMenu.build(model, () -> {
+            if (model.mayClose()) {
+                keepLayout.run();
+                stage.close();
+            }
+        });
 
         MenuItem undo = item("Undo", "menu-undo", new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN),
                 model::undo);
@@ -177,12 +199,14 @@ final class WorkstationView {
         sections.selectedProperty().bindBidirectional(model.status().showSectionsProperty());
         Menu view = new Menu("View", null, unitsMenu, sections);
 
-        Menu wire = new Menu("Wire", null, strengthItems());
+        Menu strength = new Menu("Strength table", null, strengthItems());
+        strength.setId("menu-strength");
 
         MenuItem cautions = item("Safety cautions…", "menu-cautions", null, model::showCautions);
         MenuItem keys = item("Keyboard…", "menu-keys", null, () -> new FxPrompts(stage).showKeyboardHelp());
-        Menu help = new Menu("Help", null, cautions, keys);
-        MenuBar bar = new MenuBar(file, edit, view, reference, wire, help);
+        MenuItem about = item("About Scalewright…", "menu-about", null, model::showAbout);
+        Menu help = new Menu("Help", null, cautions, keys, new SeparatorMenuItem(), about);
+        MenuBar bar = new MenuBar(file, edit, view, reference, strength, help);
         bar.setUseSystemMenuBar(false);
         return bar;
     }
@@ -229,15 +253,11 @@ final class WorkstationView {
         ChoiceBox<Choice<DisplayUnits>> units = new ChoiceBox<>();
         units.setId("units-choice");
         units.getItems().setAll(WorkstationViewModel.UnitChoice.values());
-        units.setValue(WorkstationViewModel.UnitChoice.METRIC);
+        java.util.function.Consumer<DisplayUnits> show = u -> WorkstationViewModel.UnitChoice.values().stream()
+                .filter(c -> c.value().equals(u)).findFirst().ifPresent(units::setValue);
+        show.accept(model.unitsProperty().get()); // as remembered from the last start
         units.setOnAction(e -> model.setUnits(units.getValue()));
-        model.unitsProperty().addListener((o, a, b) -> {
-            for (var c : WorkstationViewModel.UnitChoice.values()) {
-                if (c.value().equals(b)) {
-                    units.setValue(c);
-                }
-            }
-        });
+        model.unitsProperty().addListener((o, a, b) -> show.accept(b));
         units.setTooltip(new Tooltip("units for display and entry; sheets keep their own column units"));
 
         TextField a4 = new TextField();
@@ -273,7 +293,7 @@ final class WorkstationView {
         reference.setTooltip(new Tooltip("the reference scale, drawn as a wide pale line under the working scale"));
 
         ToolBar bar = new ToolBar(label("Units"), units, label("A4"), a4, label("Hz"), gap(),
-                label("Strength"), strength, gap(), label("Reference"), reference);
+                label("Strength table"), strength, gap(), label("Reference"), reference);
         bar.setPadding(new Insets(4, 8, 4, 8));
         return bar;
     }
@@ -293,13 +313,7 @@ final class WorkstationView {
     }
 
     private static MenuItem item(String text, String id, KeyCombination keys, Runnable action) {
-        MenuItem m = new MenuItem(text);
-        m.setId(id);
-        if (keys != null) {
-            m.setAccelerator(keys);
-        }
-        m.setOnAction(e -> action.run());
-        return m;
+        return FileMenu.item(text, id, keys, action);
     }
 
     /** @return the working scale shown (for tests) */

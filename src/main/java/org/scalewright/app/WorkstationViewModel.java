@@ -15,16 +15,21 @@ import org.scalewright.app.curves.CurvesViewModel;
 import org.scalewright.app.export.ExportViewModel;
 import org.scalewright.app.session.Choice;
 import org.scalewright.app.session.CsvFileNames;
+import org.scalewright.app.session.DeskSettings;
 import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.app.session.RecentFiles;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.session.TypedEntry;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.table.FlagsViewModel;
 import org.scalewright.app.table.NoteTableViewModel;
+import javafx.collections.ObservableList;
+import org.scalewright.io.AtomicFiles;
 import org.scalewright.io.BadInputException;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.io.SheetProblem;
+import org.scalewright.io.SheetTemplate;
 import org.scalewright.io.StrengthTableReader;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.ForceUnit;
@@ -34,8 +39,9 @@ import org.scalewright.model.Scale;
 import org.scalewright.physics.StrengthTable;
 
 /**
- * The window's commands: open, save, save as (with the unsaved-changes question), reference
- * scale, strength table, units, pitch standard, cautions; and the part view models.
+ * The window's commands: new from a template, open, open recent, close, revert, save, save as
+ * (with the unsaved-changes question), reference scale, strength table, units, pitch
+ * standard, cautions; the settings remembered between starts; and the part view models.
  */
 public final class WorkstationViewModel {
     /** The display-unit choices offered. */
@@ -60,10 +66,24 @@ public final class WorkstationViewModel {
     private final FlagsViewModel flags;
     private final StatusViewModel status;
     private final StringBinding windowTitle;
+    private final DeskSettings settings;
+    private final RecentFiles recent;
 
+    /** A window that remembers nothing between starts (tests). */
     public WorkstationViewModel(ScaleSession session, UserPrompts prompts) {
+        this(session, prompts, DeskSettings.forgetful());
+    }
+
+    /**
+     * A window whose units, strength table and recent files are taken from {@code settings}
+     * and kept there as they change.
+     */
+    public WorkstationViewModel(ScaleSession session, UserPrompts prompts, DeskSettings settings) {
         this.session = session;
         this.prompts = prompts;
+        this.settings = settings;
+        this.recent = new RecentFiles(settings);
+        restoreSettings();
         this.table = new NoteTableViewModel(session);
         this.curves = new CurvesViewModel(session);
         this.flags = new FlagsViewModel(session);
@@ -167,6 +187,35 @@ public final class WorkstationViewModel {
         return windowTitle;
     }
 
+    /** @return the settings remembered between starts (window size and dividers are kept by the view) */
+    DeskSettings settings() {
+        return settings;
+    }
+
+    // ---- settings kept between starts ----
+
+    private void restoreSettings() {
+        settings.units().ifPresent(u -> session.unitsProperty().set(u));
+        settings.strength().ifPresent(this::restoreStrength);
+        session.unitsProperty().addListener((o, a, b) -> settings.units(b));
+        session.strengthProperty().addListener((o, a, b) -> settings.strength(b));
+    }
+
+    private void restoreStrength(String kept) {
+        if (kept.equals(DeskSettings.STRENGTH_MAXIMUM)) {
+            session.setStrength(StrengthChoice.maximum());
+        } else if (!kept.equals(DeskSettings.STRENGTH_MINIMUM)) {
+            Path file = Path.of(kept);
+            try {
+                session.setStrength(StrengthChoice.maker(file, StrengthTableReader.read(file)));
+            } catch (BadInputException | RuntimeException e) {
+                session.setStrength(StrengthChoice.minimum());
+                session.complain("the maker's strength table used last time (" + file + ") could not be read; "
+                        + "using ASTM A228 minimum");
+            }
+        }
+    }
+
     // ---- files ----
 
     /** Opens a sheet chosen by the user, after settling unsaved changes. */
@@ -188,6 +237,9 @@ public final class WorkstationViewModel {
     public boolean openSheet(Path sheet, boolean saveBack) {
         try {
             session.open(sheet, saveBack);
+            if (saveBack) {
+                recent.add(sheet);
+            }
             return true;
         } catch (BadInputException e) {
             prompts.showProblems("Sheet not opened", sheet + " could not be read; nothing was opened or changed.",
@@ -224,6 +276,7 @@ public final class WorkstationViewModel {
     private boolean writeTo(Path target) {
         try {
             session.saveAs(target);
+            recent.add(target);
             return true;
         } catch (IOException | RuntimeException e) {
             String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
@@ -248,6 +301,128 @@ public final class WorkstationViewModel {
             case DISCARD -> true;
             case CANCEL -> false;
         };
+    }
+
+    /** @return the sheets opened or saved lately, newest first */
+    ObservableList<Path> recentFiles() {
+        return recent.files();
+    }
+
+    /**
+     * Opens a sheet from the recent list, after settling unsaved changes. A file that is no
+     * longer there is said so and taken off the list.
+     *
+     * @return true when it was opened
+     */
+    boolean openRecent(Path sheet) {
+        if (!java.nio.file.Files.isRegularFile(sheet)) {
+            recent.remove(sheet);
+            prompts.showError("Sheet not found", sheet + " is no longer there (moved, renamed or deleted); "
+                    + "it was taken off the recent files.");
+            session.complain("not found: " + sheet + " (taken off the recent files)");
+            return false;
+        }
+        return settleUnsavedChanges() && openSheet(sheet, true);
+    }
+
+    void clearRecentFiles() {
+        recent.clear();
+        session.inform("the recent files list is empty");
+    }
+
+    /**
+     * Opens sheets dropped on the window: the first {@code .csv} file, after settling unsaved
+     * changes; anything else is refused with a message.
+     *
+     * @return true when a sheet was opened
+     */
+    boolean openDropped(List<Path> files) {
+        Optional<Path> sheet = files.stream().filter(CsvFileNames::isCsv).findFirst();
+        if (sheet.isEmpty()) {
+            session.complain("only a scale sheet (.csv) can be dropped here; " + (files.isEmpty() ? "nothing"
+                    : files.get(0).getFileName()) + " was not opened");
+            return false;
+        }
+        if (!settleUnsavedChanges()) {
+            return false;
+        }
+        boolean opened = openSheet(sheet.get(), true);
+        if (opened && files.size() > 1) {
+            session.inform("opened " + sheet.get() + "; one sheet at a time, the other dropped files were left");
+        }
+        return opened;
+    }
+
+    /** Closes the sheet after settling unsaved changes, leaving the window empty. */
+    boolean close() {
+        if (!settleUnsavedChanges()) {
+            return false;
+        }
+        session.close();
+        return true;
+    }
+
+    /**
+     * Goes back to the sheet as it was last opened or saved, dropping the edits since, after
+     * asking; the edits can no longer be undone.
+     *
+     * @return true when the sheet was read again
+     */
+    boolean revert() {
+        Optional<Path> sheet = session.source();
+        if (sheet.isEmpty()) {
+            session.complain("nothing to revert to: no sheet is open");
+            return false;
+        }
+        if (!session.isDirty()) {
+            session.inform("nothing to revert: " + sheet.get().getFileName() + " has no unsaved changes");
+            return false;
+        }
+        if (!prompts.confirm("Revert to the saved sheet", "Drop every change to " + session.documentNameProperty().get()
+                + " since it was opened or saved and read " + sheet.get() + " again? This cannot be undone.",
+                "Revert")) {
+            return false;
+        }
+        boolean demo = session.file().isEmpty();
+        return openSheet(sheet.get(), !demo);
+    }
+
+    /**
+     * Makes a new blank sheet from a bundled template: asks where to keep it, writes it (with
+     * the pitch standard last typed into the A4 field) and closes the open sheet. The
+     * measurements of a blank sheet must be filled in before it can be opened (each note needs
+     * its speaking length and wire), which the message says.
+     *
+     * @return the sheet written, or empty when cancelled or not written
+     */
+    Optional<Path> newSheet(SheetTemplate template) {
+        if (!settleUnsavedChanges()) {
+            return Optional.empty();
+        }
+        Optional<Path> chosen = prompts.chooseSheetToSave(template.suggestedName());
+        if (chosen.isEmpty()) {
+            return Optional.empty();
+        }
+        Path target = CsvFileNames.withCsvExtension(chosen.get());
+        try {
+            AtomicFiles.write(target, template.text(settings.a4()).getBytes(java.nio.charset.StandardCharsets.UTF_8),
+                    true);
+        } catch (IOException | RuntimeException e) {
+            String why = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+            prompts.showError("Sheet not made", "Could not write " + target + ": " + why + ".");
+            session.complain("new sheet not written: " + why);
+            return Optional.empty();
+        }
+        session.close();
+        recent.add(target);
+        String message = "A blank sheet for a " + template.title().toLowerCase(java.util.Locale.ROOT)
+                + " was written to\n" + target + "\n\nIt names the keys, sections and strings per note; "
+                + "fill in each note's speaking length and wire (and the wraps of wound strings) in a spreadsheet "
+                + "or a text editor, then open it here with File > Open recent. The column layout is in "
+                + "scales/README.md and in the sheet's own comment lines.";
+        prompts.showInformation("New sheet", "New blank sheet: " + target.getFileName(), message);
+        session.inform("new blank sheet " + target + ": fill in the measurements, then open it");
+        return Optional.of(target);
     }
 
     /** @return true when the window may close */
@@ -312,7 +487,9 @@ public final class WorkstationViewModel {
      */
     boolean setA4(String text) {
         try {
-            session.setA4(TypedEntry.parse(text, "A4", "Hz"));
+            double a4 = TypedEntry.parse(text, "A4", "Hz");
+            session.setA4(a4);
+            settings.a4(a4);
             return true;
         } catch (InvalidInput e) {
             session.complain(e.getMessage());
@@ -322,5 +499,11 @@ public final class WorkstationViewModel {
 
     void showCautions() {
         prompts.showCautions(BuiltInData.cautions());
+    }
+
+    /** Shows the version, where the log file and the settings are kept. */
+    void showAbout() {
+        prompts.showInformation("About Scalewright", "Scalewright " + AboutText.version(),
+                AboutText.text(DesktopLog.file()));
     }
 }

@@ -94,8 +94,9 @@ class WorkstationViewModelTest {
     void unitsChangeWhatIsShownAndHowEntriesAreRead() {
         vm.setUnits(WorkstationViewModel.UnitChoice.IMPERIAL);
         DisplayUnits u = session.units();
-        // 1400 mm / 25.4 mm per in = 55.118 in (NIST SP 811, B.8: 1 in = 25.4 mm exactly)
-        assertEquals("55.118", NoteColumn.LENGTH.text(row(1), u));
+        // 1400 mm / 25.4 mm per in = 55.118 in (NIST SP 811, B.8: 1 in = 25.4 mm exactly), shown
+        // to 0.01 in like every length of the column
+        assertEquals("55.12", NoteColumn.LENGTH.text(row(1), u));
         assertEquals("length in", vm.table().header(NoteColumn.LENGTH).get().replace('\n', ' '));
         assertEquals("T/string lbf", NoteColumn.TENSION.header(u));
         assertTrue(vm.table().edit(1, NoteColumn.LENGTH, "55"));

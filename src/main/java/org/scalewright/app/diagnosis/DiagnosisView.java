@@ -72,12 +72,16 @@ public final class DiagnosisView implements Tool {
         root.setTop(new VBox(4, form, problem));
 
         TableView<DiagnosisViewModel.Row> table = new TableView<>(model.rows());
+        var stress = ToolLayout.<DiagnosisViewModel.Row>column("stress", 82, true, model::stressText);
+        var stressHeader = model.stressHeader();
+        stress.textProperty().bind(stressHeader);
+        stressHeader.addListener((o, a, b) -> table.refresh());
         table.setId("diagnosis-table");
         table.setPlaceholder(new Label("Choose the keys where strings break, then press Diagnose."));
         table.getColumns().setAll(List.of(
                 ToolLayout.<DiagnosisViewModel.Row>column("key", 40, true, r -> Integer.toString(r.key())),
                 ToolLayout.<DiagnosisViewModel.Row>column("note", 44, false, DiagnosisViewModel.Row::note),
-                ToolLayout.<DiagnosisViewModel.Row>column("stress MPa", 82, true, r -> f(r.stressMpa(), 0)),
+                stress,
                 ToolLayout.<DiagnosisViewModel.Row>column("% break", 60, true, r -> f(r.breakPct(), 1)),
                 ToolLayout.<DiagnosisViewModel.Row>column("trend %", 58, true, r -> f(r.trendPct(), 1)),
                 ToolLayout.<DiagnosisViewModel.Row>column("from trend", 78, true,

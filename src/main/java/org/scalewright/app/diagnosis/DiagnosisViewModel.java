@@ -75,6 +75,17 @@ public final class DiagnosisViewModel {
     private final ObservableList<String> inspect = FXCollections.observableArrayList();
     private String lastFilled = "";
 
+    /** @return the stress column's header in the display units: {@code stress MPa}, or {@code stress ksi} with lbf */
+    javafx.beans.binding.StringBinding stressHeader() {
+        return javafx.beans.binding.Bindings.createStringBinding(() -> "stress " + DisplayFormat.stressUnit(session.units()),
+                session.unitsProperty());
+    }
+
+    /** @return a row's stress in the display units */
+    String stressText(Row r) {
+        return DisplayFormat.stress(r.stressMpa() * 1e6, session.units());
+    }
+
     public DiagnosisViewModel(ScaleSession session, UserPrompts prompts, CurvesViewModel curves) {
         this.session = session;
         this.prompts = prompts;

@@ -133,11 +133,13 @@ public final class RescaleView implements Tool {
         bindShown(model, RescaleViewModel.Kind.PLAIN, plainLabel, plain);
         row++;
 
-        TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 4,
-                "wrap wire available in steps of, mm; empty: the wrap-wire catalogue (0.01 mm steps)");
+        TextField step = field("rescale-wrap-step", model.wrapStepProperty(), 6,
+                "wrap wire available in steps of this size (in the display unit, or write mm or in after it); "
+                        + "empty: the wrap-wire catalogue (0.01 mm steps)");
         step.setPromptText("catalogue");
         TextField dbl = field("rescale-double-above", model.doubleAboveProperty(), 4,
-                "double-wind where a single wrap would be thicker than this, mm; blank keeps each string's winding");
+                "double-wind where a single wrap would be thicker than this (in the display unit, or write mm or in "
+                        + "after it); blank keeps each string's winding");
         CheckBox join = new CheckBox("join the break over");
         join.setId("rescale-join");
         join.selectedProperty().bindBidirectional(model.joinBreakProperty());
@@ -147,7 +149,12 @@ public final class RescaleView implements Tool {
         join.setMinWidth(Region.USE_PREF_SIZE);
         HBox joinRow = new HBox(6, join, joinKeys, label("keys"));
         joinRow.setAlignment(Pos.CENTER_LEFT);
-        VBox wound = new VBox(4, labelled("wrap step mm", step), labelled("double-wind above mm", dbl), joinRow);
+        HBox stepRow = labelled("wrap step mm", step);
+        HBox dblRow = labelled("double-wind above mm", dbl);
+        var symbol = model.lengthSymbol();
+        ((Label) stepRow.getChildren().get(0)).textProperty().bind(Bindings.concat("wrap step ", symbol));
+        ((Label) dblRow.getChildren().get(0)).textProperty().bind(Bindings.concat("double-wind above ", symbol));
+        VBox wound = new VBox(4, stepRow, dblRow, joinRow);
         Label woundLabel = label("Wound");
         g.addRow(row, woundLabel, wound);
         bindShown(model, RescaleViewModel.Kind.WOUND, woundLabel, wound);
@@ -171,8 +178,8 @@ public final class RescaleView implements Tool {
                 .otherwise("-fx-text-fill: #a4161a;"));
         ScrollPane summaryScroll = new ScrollPane(summary);
         summaryScroll.setFitToWidth(true);
-        summaryScroll.setPrefViewportHeight(58);
-        summaryScroll.setMinViewportHeight(40);
+        summaryScroll.setPrefViewportHeight(112);
+        summaryScroll.setMinViewportHeight(112);
 
         TableView<RescaleChangeRow> table = new TableView<>(model.changes());
         table.setId("rescale-changes");
@@ -188,6 +195,7 @@ public final class RescaleView implements Tool {
         table.getColumns().add(column("dev. %", 48, RescaleChangeRow::deviation));
         table.setFixedCellSize(20);
         table.setStyle("-fx-font-size: 11px;");
+        org.scalewright.app.session.ColumnFit.keepFitted(table, 11, 11);
         VBox.setVgrow(table, Priority.ALWAYS);
 
         Button propose = button("Propose", "rescale-propose", model::propose,

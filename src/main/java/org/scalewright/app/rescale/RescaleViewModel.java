@@ -36,6 +36,7 @@ import org.scalewright.design.rescale.WoundPlanner;
 import org.scalewright.design.rescale.WrapWires;
 import org.scalewright.io.BuiltInData;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.LengthUnit;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.KeyRange;
 import org.scalewright.physics.NoteResult;
@@ -334,9 +335,9 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
     private WoundPlanOptions woundOptions(double max, ScaleAnalysis present, KeyRange r) {
         String typedStep = wrapStep.get() == null ? "" : wrapStep.get().strip();
         WrapWires wraps = typedStep.isEmpty() ? BuiltInData.wrapWire()
-                : WrapWires.steps(number(typedStep, "wrap step (mm)") * 1e-3);
+                : WrapWires.steps(typedLength(typedStep, "wrap step"));
         OptionalDouble dbl = doubleAbove.get() == null || doubleAbove.get().isBlank() ? OptionalDouble.empty()
-                : OptionalDouble.of(number(doubleAbove.get(), "double-wind above (mm)") * 1e-3);
+                : OptionalDouble.of(typedLength(doubleAbove.get(), "double-wind above"));
         int join = 0;
         if (joinBreak.get()) {
             double j = number(joinKeys.get(), "keys joined either side of the break");
@@ -553,6 +554,29 @@ public final class RescaleViewModel implements CurvesViewModel.PointDrag {
         } catch (InvalidInput e) {
             throw new InvalidInput(field + " key: " + e.getMessage());
         }
+    }
+
+    /**
+     * @return a wire diameter typed in the display length unit, or in the unit written after it
+     *         ({@code 0.01 mm}, {@code 0.0005 in}), m
+     */
+    private double typedLength(String text, String what) {
+        LengthUnit unit = session.units().length();
+        String t = text.strip();
+        for (LengthUnit u : LengthUnit.values()) {
+            if (t.toLowerCase(java.util.Locale.ROOT).endsWith(u.symbol())) {
+                unit = u;
+                t = t.substring(0, t.length() - u.symbol().length()).strip();
+                break;
+            }
+        }
+        return unit.toMetres(number(t, what + " (" + unit.symbol() + ")"));
+    }
+
+    /** @return the display length unit's symbol, for the wound settings' labels */
+    javafx.beans.binding.StringBinding lengthSymbol() {
+        return javafx.beans.binding.Bindings.createStringBinding(() -> session.units().length().symbol(),
+                session.unitsProperty());
     }
 
     private static double number(String text, String what) {

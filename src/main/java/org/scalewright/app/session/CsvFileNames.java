@@ -12,4 +12,10 @@ public final class CsvFileNames {
         String name = p.getFileName().toString();
         return name.contains(".") ? p : p.resolveSibling(name + ".csv");
     }
+
+    /** @return true when {@code p} names a {@code .csv} file (any case) */
+    public static boolean isCsv(Path p) {
+        Path name = p.getFileName();
+        return name != null && name.toString().toLowerCase(java.util.Locale.ROOT).endsWith(".csv");
+    }
 }

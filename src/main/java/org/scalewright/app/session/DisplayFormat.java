@@ -6,7 +6,12 @@ import org.scalewright.model.LengthUnit;
 import org.scalewright.model.NumberText;
 import org.scalewright.model.UnitConversions;
 
-/** The window's numbers in the chosen display units; the digits come from {@link NumberText}. */
+/**
+ * The window's numbers in the chosen display units, with the same decimals down a column
+ * (lengths 0.1 mm or 0.01 in, diameters 0.001 mm or 0.0001 in, stress 1 MPa or 0.1 ksi);
+ * the digits come from {@link NumberText}. Stress follows the force unit: ksi with pounds-force,
+ * MPa otherwise.
+ */
 public final class DisplayFormat {
     private DisplayFormat() {
     }
@@ -23,13 +28,23 @@ public final class DisplayFormat {
     /** @return a speaking length (m) in the display length unit: {@code 1480.0} mm or {@code 58.27} in */
     public static String length(double metres, DisplayUnits u) {
         double v = u.length().fromMetres(metres);
-        return u.length() == LengthUnit.MM ? decimals(v, 1, 2) : decimals(v, 2, 3);
+        return u.length() == LengthUnit.MM ? fixed(v, 1) : fixed(v, 2);
     }
 
     /** @return a wire diameter (m) in the display length unit: {@code 1.100} mm or {@code 0.0433} in */
     public static String diameter(double metres, DisplayUnits u) {
         double v = u.length().fromMetres(metres);
-        return u.length() == LengthUnit.MM ? decimals(v, 2, 3) : decimals(v, 4, 5);
+        return u.length() == LengthUnit.MM ? fixed(v, 3) : fixed(v, 4);
+    }
+
+    /** @return the unit stress is shown in: {@code ksi} with pounds-force, else {@code MPa} */
+    public static String stressUnit(DisplayUnits u) {
+        return u.force() == ForceUnit.LBF ? "ksi" : "MPa";
+    }
+
+    /** @return a stress (Pa) in {@link #stressUnit}: {@code 1452} MPa or {@code 210.6} ksi */
+    public static String stress(double pascals, DisplayUnits u) {
+        return u.force() == ForceUnit.LBF ? fixed(pascals / UnitConversions.PASCALS_PER_KSI, 1) : fixed(pascals / 1e6, 0);
     }
 
     /** @return a music-wire size number: {@code 17} or {@code 14.5} */

@@ -19,9 +19,45 @@ import javafx.stage.Stage;
 public final class FxPrompts implements UserPrompts {
     private static File lastDirectory;
     private final Stage owner;
+    private final DeskSettings settings;
 
     public FxPrompts(Stage owner) {
+        this(owner, null);
+    }
+
+    /** Dialogs whose file choosers start in the folder remembered in {@code settings} and remember the one used. */
+    public FxPrompts(Stage owner, DeskSettings settings) {
         this.owner = owner;
+        this.settings = settings;
+        if (settings != null && lastDirectory == null) {
+            settings.lastFolder().map(Path::toFile).filter(File::isDirectory).ifPresent(d -> lastDirectory = d);
+        }
+    }
+
+    @Override
+    public boolean confirm(String title, String question, String yesWords) {
+        ButtonType yes = new ButtonType(yesWords, ButtonBar.ButtonData.YES);
+        ButtonType cancel = new ButtonType("Cancel", ButtonBar.ButtonData.CANCEL_CLOSE);
+        Alert a = new Alert(Alert.AlertType.CONFIRMATION, question, yes, cancel);
+        a.initOwner(owner);
+        a.setTitle(title);
+        a.setHeaderText(title);
+        return a.showAndWait().orElse(cancel) == yes;
+    }
+
+    @Override
+    public void showInformation(String title, String header, String message) {
+        Alert a = new Alert(Alert.AlertType.INFORMATION);
+        a.initOwner(owner);
+        a.setTitle(title);
+        a.setHeaderText(header);
+        TextArea text = new TextArea(message);
+        text.setEditable(false);
+        text.setWrapText(true);
+        text.setPrefRowCount(Math.min(14, (int) message.lines().count() + 2));
+        text.setPrefColumnCount(64);
+        a.getDialogPane().setContent(text);
+        a.showAndWait();
     }
 
     @Override
@@ -166,7 +202,7 @@ public final class FxPrompts implements UserPrompts {
         if (chosen == null) {
             return Optional.empty();
         }
-        lastDirectory = chosen;
+        keep(chosen);
         return Optional.of(chosen.toPath());
     }
 
@@ -180,14 +216,21 @@ public final class FxPrompts implements UserPrompts {
         return c;
     }
 
-    private static Optional<Path> remember(File f) {
+    private Optional<Path> remember(File f) {
         if (f == null) {
             return Optional.empty();
         }
         Path p = f.toPath();
         if (p.getParent() != null && Files.isDirectory(p.getParent())) {
-            lastDirectory = p.getParent().toFile();
+            keep(p.getParent().toFile());
         }
         return Optional.of(p);
+    }
+
+    private void keep(File folder) {
+        lastDirectory = folder;
+        if (settings != null) {
+            settings.lastFolder(folder.toPath());
+        }
     }
 }

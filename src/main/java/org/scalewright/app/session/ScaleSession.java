@@ -49,6 +49,8 @@ public final class ScaleSession {
     private final ObjectProperty<Integer> selectedKey = new SimpleObjectProperty<>();
     private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyStringWrapper documentName = new ReadOnlyStringWrapper("untitled");
+    /** The sheet the working scale was read from (also the demo, which is not saved back), or null. */
+    private final ReadOnlyObjectWrapper<Path> source = new ReadOnlyObjectWrapper<>();
     private final ReadOnlyBooleanWrapper dirty = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canUndo = new ReadOnlyBooleanWrapper();
     private final ReadOnlyBooleanWrapper canRedo = new ReadOnlyBooleanWrapper();
@@ -61,10 +63,14 @@ public final class ScaleSession {
 
     /** A session on an empty scale (no sheet open). */
     public ScaleSession() {
-        Scale empty = new Scale("", PitchStandard.ISO_16, List.of(), null);
+        Scale empty = emptyScale();
         history = new EditHistory(empty);
         setScale(empty);
         setReference(empty, "none");
+    }
+
+    private static Scale emptyScale() {
+        return new Scale("", PitchStandard.ISO_16, List.of(), null);
     }
 
     // ---- the working scale and its edits ----
@@ -206,6 +212,7 @@ public final class ScaleSession {
         boolean asWritten = !notes.isEmpty() || !sheet.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv");
         history.reset(loaded);
         file.set(saveBack && !asWritten ? sheet : null);
+        source.set(sheet);
         documentName.set(sheet.getFileName().toString() + (saveBack ? "" : " (demo)"));
         selectedKey.set(null);
         reference.set(loaded);
@@ -219,6 +226,27 @@ public final class ScaleSession {
                 : "opened " + sheet + " (" + loaded.notes().size() + " notes)");
     }
 
+    /** @return the sheet the working scale was read from or last saved to (the demo included), or empty */
+    public Optional<Path> source() {
+        return Optional.ofNullable(source.get());
+    }
+
+    /**
+     * Closes the sheet: the window is left with an empty scale, no file and no reference, the
+     * history empty. The caller settles unsaved changes first.
+     */
+    public void close() {
+        Scale empty = emptyScale();
+        history.reset(empty);
+        file.set(null);
+        source.set(null);
+        documentName.set("untitled");
+        selectedKey.set(null);
+        setReference(empty, "none");
+        setScale(empty);
+        inform("closed; open a sheet with File > Open or File > Open recent");
+    }
+
     /**
      * Opens a scale that has no file of its own (a version from the workshop archive): it becomes
      * the working scale and the reference, the history starts afresh, and Save asks for a file.
@@ -229,6 +257,7 @@ public final class ScaleSession {
         ScaleAnalyzer.analyze(scale, settings.get());
         history.reset(scale);
         file.set(null);
+        source.set(null); // nothing on disk to revert to
         documentName.set(name);
         selectedKey.set(null);
         reference.set(scale);
@@ -255,6 +284,7 @@ public final class ScaleSession {
     public void saveAs(Path target) throws IOException {
         ScaleSheetWriter.write(scale(), target, true);
         file.set(target);
+        source.set(target);
         documentName.set(target.getFileName().toString());
         history.markSaved();
         updateHistoryState();

@@ -33,6 +33,19 @@ public interface UserPrompts {
     /** Shows the safety cautions. */
     void showCautions(List<String> cautions);
 
+    /**
+     * Asks a yes-or-no question before something that cannot be undone (revert to the saved sheet).
+     *
+     * @return true when the user agreed; by default false (nothing is done without asking)
+     */
+    default boolean confirm(String title, String question, String yesWords) {
+        return false;
+    }
+
+    /** Shows a notice that needs no answer (About, a new sheet written); by default not shown. */
+    default void showInformation(String title, String header, String message) {
+    }
+
     // ---- exports ----
 
     /**

@@ -93,7 +93,7 @@ public enum NoteColumn {
             case PITCH -> "pitch\nHz";
             case TENSION -> "T/string\n" + u.force().symbol();
             case NOTE_TENSION -> "T/note\n" + u.force().symbol();
-            case STRESS -> "stress\nMPa";
+            case STRESS -> "stress\n" + DisplayFormat.stressUnit(u);
             case BREAK_PCT -> "% of\nbreak";
             case INHARMONICITY -> "B\n";
             case HEADROOM -> "headroom\ncents";
@@ -102,6 +102,22 @@ public enum NoteColumn {
             case DIFF_B -> "ΔB\n%";
             default -> name + "\n";
         };
+    }
+
+    /**
+     * @param headerLines the two-line header in the display units
+     * @return the name in the table's column chooser: the plain words and the unit ({@code speaking length, mm})
+     */
+    String chooserName(String headerLines) {
+        String[] parts = headerLines.split("\n", 2);
+        String unit = parts.length > 1 ? parts[1].trim() : "";
+        String words = switch (this) {
+            case WIRE, METAL, BREAK_PCT, DIFF_BREAK -> headerLines.replace('\n', ' ').trim();
+            case INHARMONICITY -> "inharmonicity B";
+            case DIFF_B -> "ΔB, %";
+            default -> word();
+        };
+        return unit.isEmpty() || words.endsWith(unit) || this == WIRE || this == DIFF_B ? words : words + ", " + unit;
     }
 
     /** @return a one-line explanation for the column header's tooltip */
@@ -157,7 +173,7 @@ public enum NoteColumn {
             case PITCH -> DisplayFormat.fixed(r.frequency(), 2);
             case TENSION -> DisplayFormat.force(r.tension(), u);
             case NOTE_TENSION -> DisplayFormat.force(r.noteTension(), u);
-            case STRESS -> DisplayFormat.fixed(r.stress() / 1e6, 0);
+            case STRESS -> DisplayFormat.stress(r.stress(), u);
             case BREAK_PCT -> DisplayFormat.fixed(r.breakPct(), 1);
             case INHARMONICITY -> DisplayFormat.scientific(r.inharmonicity());
             case HEADROOM -> DisplayFormat.fixed(r.headroomCents(), 0);

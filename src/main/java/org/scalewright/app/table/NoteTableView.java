@@ -19,6 +19,7 @@ import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCodeCombination;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.input.KeyEvent;
+import org.scalewright.app.session.ColumnFit;
 import org.scalewright.physics.FlagKind;
 
 /**
@@ -58,7 +59,11 @@ public final class NoteTableView {
         table.setRowFactory(t -> new FlaggedRow());
         table.addEventFilter(KeyEvent.KEY_PRESSED, this::onKeyPressed);
         table.addEventHandler(KeyEvent.KEY_TYPED, this::onKeyTyped);
-        model.unitsProperty().addListener((o, a, b) -> table.refresh());
+        model.unitsProperty().addListener((o, a, b) -> {
+            table.refresh();
+            ColumnFit.fit(table, 12, 11);
+        });
+        ColumnFit.keepFitted(table, 12, 11);
         table.getSelectionModel().selectedIndexProperty().addListener((o, a, b) -> selectionChanged());
         model.selectedKeyProperty().addListener((o, a, b) -> selectKey(b));
     }
@@ -77,6 +82,10 @@ public final class NoteTableView {
         Label header = new Label();
         header.getStyleClass().add("column-title");
         header.textProperty().bind(model.header(c));
+        // the column's own text names it in the column chooser (the + at the top right); the
+        // header shows the two-line label instead (workstation.css)
+        col.textProperty().bind(Bindings.createStringBinding(() -> c.chooserName(model.header(c).get()),
+                model.header(c)));
         header.setTooltip(new Tooltip(c.explanation()));
         col.setGraphic(header);
         col.setId("col-" + c.name().toLowerCase(java.util.Locale.ROOT));
@@ -117,7 +126,7 @@ public final class NoteTableView {
             case STRESS, BREAK_PCT -> 50;
             case INHARMONICITY -> 62;
             case HEADROOM -> 70;
-            case FLAGS -> 150;
+            case FLAGS -> 210;
             case DIFF_TENSION, DIFF_BREAK, DIFF_B -> 66;
             case REMARK -> 200;
         };

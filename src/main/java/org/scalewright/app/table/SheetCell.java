@@ -82,6 +82,14 @@ final class SheetCell extends TableCell<NoteRow, String> {
         // TableCell.commitEdit fires the column's commit handler; the view model then
         // updates the row, which redraws this cell with the new value
         super.commitEdit(value);
+        // a refused entry changes nothing in the row, so nothing redraws the cell, which would
+        // keep showing the typed text while the figures use the old value: show what the row holds
+        if (getIndex() >= 0 && getTableColumn() != null) {
+            String held = getTableColumn().getCellData(getIndex());
+            if (!java.util.Objects.equals(held, getText())) {
+                updateItem(held, held == null);
+            }
+        }
     }
 
     @Override

@@ -62,6 +62,7 @@ public final class ToolLayout {
                             java.util.function.Consumer<R> select) {
         table.getStyleClass().add("note-table");
         table.setFixedCellSize(22);
+        org.scalewright.app.session.ColumnFit.keepFitted(table, 12, 12);
         table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
         table.setRowFactory(v -> new TableRow<>() {
             @Override

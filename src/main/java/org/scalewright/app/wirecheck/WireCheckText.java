@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.scalewright.design.wirecheck.StageWords;
 import org.scalewright.design.wirecheck.WireCheckReport;
+import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 import org.scalewright.model.WireNotation;
 
@@ -12,9 +13,9 @@ final class WireCheckText {
     private WireCheckText() {
     }
 
-    /** @return the wire in the program's one notation ({@link WireNotation}), diameters in mm */
-    static String wire(Note n) {
-        return WireNotation.of(n);
+    /** @return the wire in the program's one notation ({@link WireNotation}), diameters in {@code unit} */
+    static String wire(Note n, LengthUnit unit) {
+        return WireNotation.of(n, unit);
     }
 
     /** @return the advice on raising in stages laid out one item a line: reasons as bullets, passes indented */

@@ -35,7 +35,9 @@ public final class WireCheckView implements Tool {
         Label replacement = new Label();
         replacement.setId("wire-check-replacement");
         replacement.textProperty().bind(model.replacementNameProperty());
-        replacement.setMaxWidth(210);
+        replacement.setMaxWidth(260);
+        replacement.setWrapText(true);
+        replacement.setMinHeight(Label.USE_PREF_SIZE);
         replacement.setTooltip(new Tooltip());
         replacement.getTooltip().textProperty().bind(model.replacementNameProperty());
         Button load = new Button("Load maker's table…");

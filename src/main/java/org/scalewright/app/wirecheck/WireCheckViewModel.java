@@ -111,6 +111,13 @@ public final class WireCheckViewModel {
         this.session = session;
         this.prompts = prompts;
         this.result = new ToolResult<>(session, prompts, curves, "wire check");
+        // the wires follow the display units, as in the note table
+        session.unitsProperty().addListener((o, a, b) -> {
+            WireCheckReport shown = result.reportProperty().get();
+            if (shown != null) {
+                rows.setAll(rowsOf(shown));
+            }
+        });
         replacementName.set(presentTableWords());
         targetA4.set(a4Text(session.scale().pitch().a4()));
         session.scaleProperty().addListener((o, a, b) -> {
@@ -254,19 +261,25 @@ public final class WireCheckViewModel {
     }
 
     private void show(WireCheckReport r) {
-        double caution = r.request().settings().bands().caution();
-        List<Row> next = new ArrayList<>(r.notes().size());
-        for (WireCheckNote n : r.notes()) {
-            next.add(new Row(n.key(), n.noteName(), WireCheckText.wire(n.presentNote()), WireCheckText.wire(n.replacementNote()),
-                    n.centsFlat(), n.breakPctBefore(), n.breakPctAfter(), n.breakPctPeak(), n.headroomCentsAfter(),
-                    n.overDanger(), n.breakPctPeak() >= caution));
-        }
-        rows.setAll(next);
+        rows.setAll(rowsOf(r));
         summary.set(r.riskSummary());
         totals.set(r.totals().states().stream().map(TensionTotals.State::words).collect(Collectors.joining("\n")));
         stages.set(WireCheckText.stages(r));
         cautions.setAll(r.request().isPitchRaise() ? BuiltInData.cautions() : List.of());
         result.show(r, overlays(r));
+    }
+
+    /** @return the table's rows, wires in the display length unit */
+    private List<Row> rowsOf(WireCheckReport r) {
+        double caution = r.request().settings().bands().caution();
+        var unit = session.units().length();
+        List<Row> next = new ArrayList<>(r.notes().size());
+        for (WireCheckNote n : r.notes()) {
+            next.add(new Row(n.key(), n.noteName(), WireCheckText.wire(n.presentNote(), unit),
+                    WireCheckText.wire(n.replacementNote(), unit), n.centsFlat(), n.breakPctBefore(), n.breakPctAfter(),
+                    n.breakPctPeak(), n.headroomCentsAfter(), n.overDanger(), n.breakPctPeak() >= caution));
+        }
+        return next;
     }
 
     /** @return after (and the peak, where it differs) as overlays of the percent chart */

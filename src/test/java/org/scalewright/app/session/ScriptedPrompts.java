@@ -14,6 +14,9 @@ public final class ScriptedPrompts implements UserPrompts {
     public final List<String> shown = new ArrayList<>();
     public final List<String> problems = new ArrayList<>();
     public int saveQuestions;
+    /** Answers to {@link #confirm}, in order; none left means no. */
+    public final Deque<Boolean> confirmAnswers = new ArrayDeque<>();
+    public final List<String> questions = new ArrayList<>();
 
     @Override
     public SaveChoice askToSave(String documentName) {
@@ -51,5 +54,16 @@ public final class ScriptedPrompts implements UserPrompts {
     public void showCautions(List<String> cautions) {
         shown.add("cautions");
         shown.addAll(cautions);
+    }
+
+    @Override
+    public boolean confirm(String title, String question, String yesWords) {
+        questions.add(question);
+        return !confirmAnswers.isEmpty() && confirmAnswers.pop();
+    }
+
+    @Override
+    public void showInformation(String title, String header, String message) {
+        shown.add(title + ": " + header + "\n" + message);
     }
 }

@@ -53,14 +53,14 @@ class OutsideDiameterEditTest {
 
     @Test
     void theOdIsShownBesideTheWrapsInTheDisplayUnit() {
-        assertEquals("5.90", text(1, NoteColumn.OD));
-        assertEquals("3.00", text(1, NoteColumn.OD1));
+        assertEquals("5.900", text(1, NoteColumn.OD));
+        assertEquals("3.000", text(1, NoteColumn.OD1));
         assertEquals("1.025", text(12, NoteColumn.WRAP1), "(3.35 − 1.3)/2");
-        assertEquals("3.35", text(12, NoteColumn.OD));
+        assertEquals("3.350", text(12, NoteColumn.OD));
         assertEquals("", text(12, NoteColumn.OD1));
         assertEquals("", text(40, NoteColumn.OD));
         session.unitsProperty().set(DisplayUnits.IMPERIAL);
-        assertEquals("0.23228", text(1, NoteColumn.OD), "5.9 mm in inches (1 in = 25.4 mm, NIST SP 811)");
+        assertEquals("0.2323", text(1, NoteColumn.OD), "5.9 mm in inches (1 in = 25.4 mm, NIST SP 811)");
     }
 
     @Test
@@ -87,16 +87,16 @@ class OutsideDiameterEditTest {
         w = note(1).wrap();
         assertEquals(0.8e-3, w.inner(), 1e-12);
         assertEquals(1.45e-3, w.outer(), 1e-12, "(6.1 − 3.2)/2");
-        assertEquals("6.10", text(1, NoteColumn.OD));
+        assertEquals("6.100", text(1, NoteColumn.OD));
     }
 
     @Test
     void editingAWrapUpdatesTheOdAndTheSheetKeepsItsForm() throws Exception {
         assertTrue(table.edit(12, NoteColumn.WRAP1, "1.1"));
-        assertEquals("3.50", text(12, NoteColumn.OD), "1.3 + 2 × 1.1");
+        assertEquals("3.500", text(12, NoteColumn.OD), "1.3 + 2 × 1.1");
         assertTrue(note(12).wrap().givenByOd(), "a note given by OD stays given by OD");
         assertTrue(table.edit(1, NoteColumn.WRAP2, "1.5"));
-        assertEquals("6.00", text(1, NoteColumn.OD), "1.6 + 2 × 0.7 + 2 × 1.5");
+        assertEquals("6.000", text(1, NoteColumn.OD), "1.6 + 2 × 0.7 + 2 × 1.5");
         Path saved = dir.resolve("saved.csv");
         ScaleSheetWriter.write(session.scale(), saved, false);
         String text = Files.readString(saved);
