@@ -9,7 +9,7 @@ import org.scalewright.design.stretch.TuningStretch;
 import org.scalewright.model.NumberText;
 import org.scalewright.model.Scale;
 import org.scalewright.physics.ScaleAnalysis;
-import org.scalewright.report.CsvSheet;
+import org.scalewright.io.CsvSheet;
 import org.scalewright.report.StretchCsv;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

@@ -45,7 +45,7 @@ public final class TableFiles {
             throw new IllegalArgumentException(refusal);
         }
         byte[] bytes = isWorkbook(file)
-                ? XlsxTables.toBytes(List.of(new XlsxTables.Table(sheet, comments, header, rows)))
+                ? XlsxTables.toBytes(List.of(new XlsxTables.Table(sheet, new CsvSheet(comments, header, rows))))
                 : CsvReportWriter.toBytes(comments, header, rows, dialect);
         AtomicFiles.write(file, bytes, keepBackup);
     }

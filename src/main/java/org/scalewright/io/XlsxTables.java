@@ -24,19 +24,21 @@ import org.apache.poi.xssf.usermodel.XSSFWorkbook;
  * of the CSV beside their words.
  */
 public final class XlsxTables {
-    /** A table to write. @param name the sheet's name @param comments its comment lines */
-    public record Table(String name, List<String> comments, List<String> header, List<List<String>> rows) {
-        public Table {
-            comments = List.copyOf(comments);
-            header = List.copyOf(header);
-            rows = rows.stream().map(List::copyOf).toList();
-            for (List<String> r : rows) {
-                if (r.size() != header.size()) {
-                    throw new IllegalArgumentException("row has " + r.size() + " cells, header " + header.size());
-                }
-            }
+    /** A table to write. @param name the sheet's name @param sheet its comment lines, header and rows */
+    public record Table(String name, CsvSheet sheet) {
+        List<String> comments() {
+            return sheet.comments();
+        }
+
+        List<String> header() {
+            return sheet.header();
+        }
+
+        List<List<String>> rows() {
+            return sheet.rows();
         }
     }
+
 
     /** The name of the sheet holding the notes. */
     public static final String NOTES = "notes";

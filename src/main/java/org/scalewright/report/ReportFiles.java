@@ -1,5 +1,6 @@
 package org.scalewright.report;
 
+import org.scalewright.io.CsvSheet;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;

@@ -1,5 +1,6 @@
 package org.scalewright.report;
 
+import org.scalewright.io.CsvSheet;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -67,7 +68,7 @@ public final class ReportPackage {
         List<XlsxTables.Table> sheets = new ArrayList<>();
         tables.forEach((name, sheet) -> {
             files.add(name + ".csv", sheet.toBytes(dialect));
-            sheets.add(new XlsxTables.Table(name, sheet.comments(), sheet.header(), sheet.rows()));
+            sheets.add(new XlsxTables.Table(name, sheet));
         });
         files.add(WORKBOOK, XlsxTables.toBytes(sheets));
         return files;

@@ -1,5 +1,6 @@
 package org.scalewright.report;
 
+import org.scalewright.io.CsvSheet;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;

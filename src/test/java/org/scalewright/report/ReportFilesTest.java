@@ -1,5 +1,6 @@
 package org.scalewright.report;
 
+import org.scalewright.io.CsvSheet;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;

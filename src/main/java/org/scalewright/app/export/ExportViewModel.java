@@ -38,7 +38,7 @@ import org.scalewright.io.TableFiles;
 import org.scalewright.model.NumberText;
 import org.scalewright.physics.ScaleAnalysis;
 import org.scalewright.report.ChartsNotDrawn;
-import org.scalewright.report.CsvSheet;
+import org.scalewright.io.CsvSheet;
 import org.scalewright.report.ReportCharts;
 import org.scalewright.report.ReportContent;
 import org.scalewright.report.ReportFiles;

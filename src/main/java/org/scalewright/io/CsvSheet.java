@@ -1,9 +1,9 @@
-package org.scalewright.report;
+package org.scalewright.io;
 
 import java.util.List;
 
 /**
- * A table ready to be written as CSV by {@link org.scalewright.io.CsvReportWriter}: comment lines,
+ * A table ready to be written as CSV by {@link CsvReportWriter}: comment lines,
  * the header and the rows as text cells.
  *
  * @param comments lines written first as {@code # } comments
@@ -24,12 +24,12 @@ public record CsvSheet(List<String> comments, List<String> header, List<List<Str
     }
 
     /** @return the CSV file's bytes in {@code dialect}, spreadsheet-safe */
-    public byte[] toBytes(org.scalewright.io.CsvDialect dialect) {
-        return org.scalewright.io.CsvReportWriter.toBytes(comments, header, rows, dialect);
+    public byte[] toBytes(CsvDialect dialect) {
+        return CsvReportWriter.toBytes(comments, header, rows, dialect);
     }
 
     /** @return the CSV text, spreadsheet-safe */
     public String toText() {
-        return org.scalewright.io.CsvReportWriter.toText(comments, header, rows);
+        return CsvReportWriter.toText(comments, header, rows);
     }
 }
