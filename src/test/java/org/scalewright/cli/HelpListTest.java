@@ -77,4 +77,14 @@ class HelpListTest {
         assertTrue(ScalewrightCommand.isCommand("analyze"));
         assertFalse(ScalewrightCommand.isCommand("missing.csv"));
     }
+
+    @Test
+    void theQuickCommandTestKnowsEveryCommandTheCommandLineKnows() {
+        // the launcher reads the names off the annotations; the built command line is the authority
+        var built = new picocli.CommandLine(new ScalewrightCommand()).getSubcommands().keySet();
+        for (String name : built) {
+            assertTrue(ScalewrightCommand.isCommand(name), name);
+        }
+        assertFalse(ScalewrightCommand.isCommand("grand-190.csv"));
+    }
 }
