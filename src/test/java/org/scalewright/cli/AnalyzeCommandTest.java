@@ -4,11 +4,10 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.scalewright.cli.CommandRun.run;
 
 import com.opencsv.CSVReader;
-import java.io.PrintWriter;
 import java.io.StringReader;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -56,21 +55,11 @@ class AnalyzeCommandTest {
     @TempDir
     Path dir;
 
-    private record Run(int status, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int status = ScalewrightCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(status, out.toString(), err.toString());
-    }
-
     private Path sheet(String text) throws Exception {
         return Files.writeString(dir.resolve("scale.csv"), text);
     }
 
-    private static void noStackTrace(Run r) {
+    private static void noStackTrace(CommandRun r) {
         for (String s : List.of(r.out(), r.err())) {
             assertFalse(s.contains("Exception"), s);
             assertFalse(s.contains("\tat "), s);
@@ -81,7 +70,7 @@ class AnalyzeCommandTest {
     @Test
     @DisplayName("prints the table with the flagged notes, section totals and the whole-instrument total")
     void printsTable() throws Exception {
-        Run r = run("analyze", sheet(SHEET).toString());
+        CommandRun r = run("analyze", sheet(SHEET).toString());
         assertEquals(0, r.status(), r.err());
         assertEquals("", r.err());
         assertTrue(r.out().startsWith("Test sheet: 8 notes, A4 = 440 Hz"), r.out());
@@ -104,7 +93,7 @@ class AnalyzeCommandTest {
     @DisplayName("--out writes every DESIGN §5 column with figures that agree with the DESIGN §3 physics")
     void csvOutput() throws Exception {
         Path out = dir.resolve("results.csv");
-        Run r = run("analyze", sheet(SHEET).toString(), "--out", out.toString());
+        CommandRun r = run("analyze", sheet(SHEET).toString(), "--out", out.toString());
         assertEquals(0, r.status(), r.err());
         assertTrue(r.out().contains("wrote " + out), r.out());
         List<Map<String, String>> rows = readCsv(Files.readString(out));
@@ -191,7 +180,7 @@ class AnalyzeCommandTest {
     void malformedSheet() throws Exception {
         Path out = dir.resolve("results.csv");
         Path bad = sheet("key,strings,length_mm,wire_mm\n1,1,1500,1.5\n2,1,abc,1.5\n3,7,1400,1.5\n");
-        Run r = run("analyze", bad.toString(), "--out", out.toString());
+        CommandRun r = run("analyze", bad.toString(), "--out", out.toString());
         assertEquals(2, r.status());
         assertTrue(r.err().contains("error: scale.csv, line 3, column length_mm: expected a number, was 'abc'"),
                 r.err());
@@ -217,7 +206,7 @@ class AnalyzeCommandTest {
                 new String[] {"analyze", good.toString(), "--strength", good.toString(), "--out", out.toString()},
                 new String[] {"no-such-command"});
         for (String[] args : cases) {
-            Run r = run(args);
+            CommandRun r = run(args);
             String what = String.join(" ", args) + " → " + r.err();
             assertEquals(2, r.status(), what);
             assertTrue(r.err().startsWith("error: "), what);
@@ -234,7 +223,7 @@ class AnalyzeCommandTest {
     void failingOutputPath() throws Exception {
         Path good = sheet(SHEET);
         for (Path out : List.of(dir.resolve("no-such-dir").resolve("r.csv"), Files.createDirectory(dir.resolve("adir")))) {
-            Run r = run("analyze", good.toString(), "--out", out.toString());
+            CommandRun r = run("analyze", good.toString(), "--out", out.toString());
             assertEquals(2, r.status(), r.err());
             assertTrue(r.err().startsWith("error: cannot write " + out), r.err());
             assertEquals(1, r.err().lines().count(), r.err());
@@ -248,13 +237,13 @@ class AnalyzeCommandTest {
     @Test
     @DisplayName("--help on the program and every subcommand exits 0 and prints usage")
     void helpEverywhere() {
-        Run root = run("--help");
+        CommandRun root = run("--help");
         assertEquals(0, root.status());
         assertTrue(root.out().contains("Usage: scalewright"), root.out());
         var subcommands = new CommandLine(new ScalewrightCommand()).getSubcommands().keySet();
         assertTrue(subcommands.contains("analyze"));
         for (String sub : subcommands) {
-            Run r = run(sub, "--help");
+            CommandRun r = run(sub, "--help");
             assertEquals(0, r.status(), sub + ": " + r.err());
             assertTrue(r.out().contains("Usage: scalewright " + sub), r.out());
             assertEquals("", r.err());
@@ -266,7 +255,7 @@ class AnalyzeCommandTest {
     @DisplayName("--a4 overrides the sheet's pitch standard")
     void a4Option() throws Exception {
         Path out = dir.resolve("r.csv");
-        Run r = run("analyze", sheet("# a4_hz: 435\n" + SHEET).toString(), "--a4", "442", "--out", out.toString());
+        CommandRun r = run("analyze", sheet("# a4_hz: 435\n" + SHEET).toString(), "--a4", "442", "--out", out.toString());
         assertEquals(0, r.status(), r.err());
         assertTrue(r.out().contains("A4 = 442 Hz"), r.out());
         assertEquals(442.0, num(readCsv(Files.readString(out)).get(4), "frequency_hz"), 1e-9);
@@ -292,13 +281,13 @@ class AnalyzeCommandTest {
     @DisplayName("--a4 outside 300-600 Hz is refused with the pitch standard's own message, the window's too")
     void a4OutsideTheAcceptedRange() throws Exception {
         Path good = sheet(SHEET);
-        Run r = run("analyze", good.toString(), "--a4", "1200");
+        CommandRun r = run("analyze", good.toString(), "--a4", "1200");
         assertEquals(2, r.status(), r.err());
         assertEquals("error: pitch standard A4 must be 300 to 600 Hz, was 1200", r.err().strip());
         // the same message from the one home of the rule
         assertEquals("pitch standard A4 must be 300 to 600 Hz, was 1200",
                 assertThrows(InvalidInput.class, () -> PitchStandard.of(1200)).getMessage());
-        Run low = run("analyze", good.toString(), "--a4", "299.5");
+        CommandRun low = run("analyze", good.toString(), "--a4", "299.5");
         assertEquals(2, low.status(), low.err());
         assertTrue(low.err().contains("pitch standard A4 must be 300 to 600 Hz, was 299.5"), low.err());
         assertEquals(0, run("analyze", good.toString(), "--a4", "300").status());
@@ -311,7 +300,7 @@ class AnalyzeCommandTest {
     void implausibleValueIsShownAsDanger() throws Exception {
         // a 5 mm plain wire at a sensible length and pitch: implausible, but far under its strength
         Path thick = sheet("key,strings,length_mm,wire_mm\n40,3,620,5\n");
-        Run r = run("analyze", thick.toString());
+        CommandRun r = run("analyze", thick.toString());
         assertEquals(0, r.status(), r.err());
         String row = r.out().lines().filter(l -> l.matches("\\s*40\\s+C4.*")).findFirst().orElseThrow();
         assertTrue(row.contains("!"), row);
@@ -332,7 +321,7 @@ class AnalyzeCommandTest {
                 45,3,475,17.5,treble
                 46,3,450,17.5,treble
                 """);
-        Run r = run("analyze", p.toString());
+        CommandRun r = run("analyze", p.toString());
         assertEquals(0, r.status(), r.err());
         List<String> lines = r.out().lines().toList();
         assertTrue(lines.stream().anyMatch(l -> l.matches("\\s*42 .*\\s\\S*w")), r.out());

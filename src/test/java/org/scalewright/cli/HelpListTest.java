@@ -3,9 +3,8 @@ package org.scalewright.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.scalewright.cli.CommandRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.util.Map;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -13,16 +12,6 @@ import picocli.CommandLine;
 
 /** The top-level help lists every command with its whole summary; {@code open --help} prints. */
 class HelpListTest {
-    private record Run(int status, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int status = ScalewrightCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(status, out.toString(), err.toString());
-    }
-
     private static String oneLine(String s) {
         return s.replaceAll("\\s+", " ").trim();
     }
@@ -30,7 +19,7 @@ class HelpListTest {
     @Test
     @DisplayName("every command is listed with its summary whole: one description line, a finished sentence")
     void everyCommandsSummaryIsWholeInTheList() {
-        Run help = run("--help");
+        CommandRun help = run("--help");
         assertEquals(0, help.status(), help.err());
         String listed = oneLine(help.out());
         Map<String, CommandLine> commands = new CommandLine(new ScalewrightCommand()).getSubcommands();
@@ -49,12 +38,12 @@ class HelpListTest {
     @Test
     @DisplayName("open --help prints open's help; help COMMAND prints that command's")
     void openHelpPrints() {
-        Run open = run("open", "--help");
+        CommandRun open = run("open", "--help");
         assertEquals(0, open.status(), open.err());
         assertTrue(open.out().startsWith("Usage: scalewright open [-hV] [FILE]"), open.out());
         assertTrue(oneLine(open.out()).contains("as a double-click or \"Open with\" in a file manager does."),
                 open.out());
-        Run analyze = run("help", "analyze");
+        CommandRun analyze = run("help", "analyze");
         assertEquals(0, analyze.status(), analyze.err());
         assertTrue(analyze.out().startsWith("Usage: scalewright analyze"), analyze.out());
     }
@@ -62,7 +51,7 @@ class HelpListTest {
     @Test
     @DisplayName("open reaching the command line (not through the launcher) says so, exit 2")
     void openWithoutTheLauncherSaysSo() {
-        Run r = run("open", "a.csv");
+        CommandRun r = run("open", "a.csv");
         assertEquals(ExitStatus.BAD_INPUT, r.status());
         assertTrue(r.err().startsWith("error: open starts the desktop window"), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
@@ -70,7 +59,7 @@ class HelpListTest {
 
     @Test
     void anUnknownWordNamesTheCommandsAndTheSheetPath() {
-        Run r = run("missing.csv");
+        CommandRun r = run("missing.csv");
         assertEquals(ExitStatus.BAD_INPUT, r.status());
         assertTrue(r.err().startsWith("error: unknown command 'missing.csv'; commands: open, analyze,"), r.err());
         assertTrue(r.err().contains("or a sheet file to open in the window"), r.err());

@@ -4,9 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.scalewright.cli.CommandRun.run;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -33,16 +32,6 @@ class SpreadsheetOutputTest {
 
     @TempDir
     Path dir;
-
-    private record Run(int status, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        int status = ScalewrightCommand.run(args, new PrintWriter(out), new PrintWriter(err));
-        return new Run(status, out.toString(), err.toString());
-    }
 
     /** @return the number of number cells; fails on any text cell that reads as a number */
     private static int checkNumbersAreNumbers(Sheet sheet) {
@@ -72,7 +61,7 @@ class SpreadsheetOutputTest {
         if (command.equals("diagnose")) {
             args.addAll(List.of("--keys", "1-88"));
         }
-        Run r = run(args.toArray(String[]::new));
+        CommandRun r = run(args.toArray(String[]::new));
         assertEquals(0, r.status(), r.err());
         try (Workbook book = WorkbookFactory.create(out.toFile())) {
             Sheet results = book.getSheet("results");
@@ -112,7 +101,7 @@ class SpreadsheetOutputTest {
     @Test
     void theReportFolderHoldsItsTablesAsOneWorkbook() throws Exception {
         Path report = dir.resolve("report");
-        Run r = run("report", GRAND.toString(), "--out", report.toString());
+        CommandRun r = run("report", GRAND.toString(), "--out", report.toString());
         assertEquals(0, r.status(), r.err());
         try (Workbook book = WorkbookFactory.create(report.resolve("tables.xlsx").toFile())) {
             for (String name : List.of("results", "schedule", "wound-order", "wire-order", "stretch")) {
@@ -146,7 +135,7 @@ class SpreadsheetOutputTest {
                 2;1;1465;1.143
                 """);
         Path out = dir.resolve("x.xlsx");
-        Run r = run("analyze", sheet.toString(), "--out", out.toString());
+        CommandRun r = run("analyze", sheet.toString(), "--out", out.toString());
         assertEquals(2, r.status());
         assertTrue(r.err().contains("de.csv, line 4, column wire_mm: '1.143'"), r.err());
         assertFalse(Files.exists(out));
@@ -154,7 +143,7 @@ class SpreadsheetOutputTest {
 
     @Test
     void odsIsRefusedAsOutputAndAScaleSheetStaysCsv() throws Exception {
-        Run r = run("analyze", GRAND.toString(), "--out", dir.resolve("x.ods").toString());
+        CommandRun r = run("analyze", GRAND.toString(), "--out", dir.resolve("x.ods").toString());
         assertEquals(2, r.status());
         assertTrue(r.err().contains(".xlsx"), r.err());
         assertFalse(Files.exists(dir.resolve("x.ods")));
