@@ -6,7 +6,7 @@ import java.nio.file.Path;
  * One problem found in an input file.
  *
  * @param file    the file
- * @param line    1-based line number, 0 when the problem concerns the whole file
+ * @param line    1-based line number (in a workbook its row number), 0 when the problem concerns the whole file
  * @param column  the column's header name, or "" when none applies
  * @param message what is wrong and what was expected, in plain words
  */
@@ -16,7 +16,7 @@ public record SheetProblem(Path file, int line, String column, String message) {
     public String toString() {
         StringBuilder b = new StringBuilder(String.valueOf(file.getFileName()));
         if (line > 0) {
-            b.append(", line ").append(line);
+            b.append(TableFiles.isWorkbook(file) ? ", row " : ", line ").append(line);
         }
         if (!column.isEmpty()) {
             b.append(", column ").append(column);

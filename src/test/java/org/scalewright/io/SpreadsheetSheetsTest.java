@@ -122,5 +122,6 @@ class SpreadsheetSheetsTest {
         assertEquals(2, p.line());
         assertEquals("D2", p.column());
         assertTrue(p.message().contains("formatted as a date"), p.message());
+        assertTrue(p.toString().startsWith("dated.xlsx, row 2, column D2: "), p.toString());
     }
 }

@@ -280,7 +280,12 @@ public final class ExportViewModel {
         String ext = piece.format().extension();
         Optional<Path> file = prompts.chooseExportFile("Export " + piece.title().toLowerCase(java.util.Locale.ROOT)
                 + " as " + ext.toUpperCase(java.util.Locale.ROOT), piece.suggestedName(baseName()), ext);
-        return file.isPresent() && write(piece, withExtension(file.get(), ext));
+        if (file.isEmpty()) {
+            return false;
+        }
+        // a table may go into a workbook: a name typed with .xlsx keeps it (io.TableFiles)
+        boolean workbook = piece.format() == ExportFormat.CSV && TableFiles.isWorkbook(file.get());
+        return write(piece, workbook ? file.get() : withExtension(file.get(), ext));
     }
 
     /**

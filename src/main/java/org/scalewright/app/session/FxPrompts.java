@@ -187,6 +187,10 @@ public final class FxPrompts implements UserPrompts {
         String ext = extension.toLowerCase(java.util.Locale.ROOT);
         c.getExtensionFilters().add(new FileChooser.ExtensionFilter(ext.toUpperCase(java.util.Locale.ROOT)
                 + " files (*." + ext + ")", "*." + ext));
+        if (ext.equals("csv")) {
+            // a table can be written as a workbook too (io.TableFiles chooses by the name)
+            c.getExtensionFilters().add(new FileChooser.ExtensionFilter("Excel workbooks (*.xlsx)", "*.xlsx"));
+        }
         return remember(c.showSaveDialog(owner));
     }
 

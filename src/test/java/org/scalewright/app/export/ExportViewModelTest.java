@@ -141,6 +141,19 @@ class ExportViewModelTest {
         assertFalse(Files.exists(dir.resolve("missing")));
     }
 
+    @Test
+    void aTableNamedXlsxBecomesAWorkbook() throws IOException {
+        prompts.files.add(dir.resolve("schedule.xlsx"));
+        assertTrue(vm.export(ExportPiece.of(ExportContent.SCHEDULE)), vm.noteProperty().get());
+        assertEquals(List.of("schedule.xlsx"), names(dir));
+        byte[] b = Files.readAllBytes(dir.resolve("schedule.xlsx"));
+        assertEquals("PK", new String(b, 0, 2, StandardCharsets.ISO_8859_1), "an .xlsx is a zip package");
+        // a chart keeps its own extension whatever is typed
+        prompts.files.add(dir.resolve("tension.xlsx"));
+        assertTrue(vm.export(new ExportPiece(ExportContent.TENSION_CURVE, ExportFormat.PNG)));
+        assertTrue(Files.exists(dir.resolve("tension.xlsx.png")));
+    }
+
     static List<ExportPiece> pieces() {
         return ExportPiece.all();
     }
