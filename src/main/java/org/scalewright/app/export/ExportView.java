@@ -34,9 +34,10 @@ public final class ExportView implements Tool {
         report.setDefaultButton(false);
         report.setOnAction(e -> model.exportReportInBackground());
         report.disableProperty().bind(model.busyProperty());
-        report.setTooltip(new Tooltip("report.pdf, the four charts as PNG and SVG, and results, schedule, "
-                + "wound-order, wire-order and stretch as CSV"));
-        Label reportText = small("PDF, charts (PNG and SVG) and the five tables");
+        report.setTooltip(new Tooltip("report.pdf, the four charts as PNG and SVG, results, schedule, "
+                + "wound-order, wire-order and stretch as CSV, and the five tables together in tables.xlsx"));
+        Label reportText = small("PDF, charts and the five tables (CSV and one .xlsx)");
+        report.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
 
         Label settings = small("");
         settings.textProperty().bind(model.settingsTextProperty());
@@ -53,14 +54,15 @@ public final class ExportView implements Tool {
         paper.setTooltip(new Tooltip("paper of the PDF report (A4 for metric units, Letter for imperial "
                 + "until you choose)"));
 
-        FlowPane tables = flow(heading("Tables (CSV)"));
+        FlowPane choices = flow(heading("Choices"), small("stretch for"), octave, small("octaves"), small("PDF on"),
+                paper, small("paper"));
+
+        FlowPane tables = flow(heading("Tables (CSV, or .xlsx by name)"));
         for (ExportPiece p : ExportPiece.all()) {
             if (p.format() == ExportFormat.CSV) {
                 tables.getChildren().add(button(p, p.title()));
             }
         }
-        tables.getChildren().addAll(small("stretch for"), octave, small("octaves"), small("PDF on"), paper,
-                small("paper"));
 
         FlowPane charts = flow(heading("Charts"));
         for (ExportContent c : ExportContent.values()) {
@@ -76,7 +78,7 @@ public final class ExportView implements Tool {
 
         HBox top = new HBox(8, report, reportText);
         top.setAlignment(Pos.CENTER_LEFT);
-        VBox left = new VBox(6, top, settings, tables, charts, pdf);
+        VBox left = new VBox(6, top, settings, choices, tables, charts, pdf);
         left.setPadding(new Insets(6, 8, 6, 8));
         left.setFillWidth(true);
         ScrollPane scroll = new ScrollPane(left);
