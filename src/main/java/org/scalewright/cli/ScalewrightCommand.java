@@ -68,7 +68,8 @@ public final class ScalewrightCommand implements Runnable {
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
             err.println("error: " + ex.getMessage());
-            err.println("try: scalewright " + ex.getCommandLine().getCommandName() + " --help");
+            // the whole command, so that a subcommand's help is found ('scalewright archive log-break --help')
+            err.println("try: " + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help");
             err.flush();
             return ExitStatus.BAD_INPUT;
         });

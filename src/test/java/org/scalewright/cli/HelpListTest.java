@@ -76,4 +76,12 @@ class HelpListTest {
         }
         assertFalse(ScalewrightCommand.isCommand("grand-190.csv"));
     }
+
+    @Test
+    void aWrongOptionOfASubcommandPointsToThatSubcommandsHelp() {
+        CommandRun r = run("archive", "log-break", "grand", "--hz", "1052");
+        assertEquals(ExitStatus.BAD_INPUT, r.status());
+        assertTrue(r.err().contains("try: scalewright archive log-break --help"), r.err());
+        assertTrue(run("analyze", "--nope").err().contains("try: scalewright analyze --help"));
+    }
 }
