@@ -21,7 +21,7 @@ public final class ScalewrightApp extends Application {
 
     @Override
     public void start(Stage stage) {
-        long fxStarted = Timings.sinceProcessStart();
+        long fxStarted = Timings.sinceLaunch();
         LaunchRequest request = LaunchRequest.parse(getParameters().getRaw().toArray(String[]::new));
         ScaleSession session = new ScaleSession();
         DesktopLog.start();
@@ -38,9 +38,9 @@ public final class ScalewrightApp extends Application {
             }
         }, Platform::runLater);
         long[] shown = new long[1];
-        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceProcessStart(), shown);
+        Timings.watch(view.curves().viewers(), fxStarted, Timings.sinceLaunch(), shown);
         stage.show();
-        shown[0] = Timings.sinceProcessStart();
+        shown[0] = Timings.sinceLaunch();
         view.focusTable();
         boolean cautions = !"false".equalsIgnoreCase(System.getProperty(CAUTIONS_PROPERTY));
         FirstStartCautions first = FirstStartCautions.forUser();
