@@ -43,11 +43,11 @@ final class ToolTabs {
         for (Tool t : tools(model)) {
             Tab tab = new Tab(t.title());
             tab.setId(t.id());
-            // a tool's view joins the scene only when its tab is first chosen, so start-up
-            // does not style and lay out panels nobody has opened yet
+            // a tool's panel is built when its tab is first chosen, so start-up does not build,
+            // style and lay out panels nobody has opened yet (its view model is made at once)
             tab.selectedProperty().addListener((o, was, now) -> {
                 if (now && tab.getContent() == null) {
-                    tab.setContent(t.node());
+                    tab.setContent(t.panel().get());
                 }
             });
             pane.getTabs().add(tab);
@@ -60,12 +60,12 @@ final class ToolTabs {
     /** The tools in the order their tabs appear. */
     private static List<Tool> tools(WorkstationViewModel model) {
         List<Tool> tools = new ArrayList<>();
-        tools.add(new RescaleView(new RescaleViewModel(model.session(), model.curves())));
-        tools.add(new WireCheckView(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
-        tools.add(new DiagnosisView(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
-        tools.add(new StretchView(new StretchViewModel(model.session())));
-        tools.add(new ExportView(ExportViewModel.of(model.session(), model.prompts())));
-        tools.add(new ArchiveView(new ArchiveViewModel(model.session(), model.prompts(), ArchiveChoice.file(),
+        tools.add(RescaleView.tool(new RescaleViewModel(model.session(), model.curves())));
+        tools.add(WireCheckView.tool(new WireCheckViewModel(model.session(), model.prompts(), model.curves())));
+        tools.add(DiagnosisView.tool(new DiagnosisViewModel(model.session(), model.prompts(), model.curves())));
+        tools.add(StretchView.tool(new StretchViewModel(model.session())));
+        tools.add(ExportView.tool(ExportViewModel.of(model.session(), model.prompts())));
+        tools.add(ArchiveView.tool(new ArchiveViewModel(model.session(), model.prompts(), ArchiveChoice.file(),
                 model::settleUnsavedChanges, ArchiveChoice::remember)));
         return tools;
     }

@@ -12,7 +12,7 @@ import org.scalewright.model.DisplayUnits;
 import org.scalewright.physics.ScaleAnalyzer;
 
 /**
- * Shortens the start: while JavaFX starts up on one thread, another starts the font system,
+ * Shortens the start: while JavaFX starts up on one thread, another starts the log and the font system,
  * reads the preferences and the sheet the window will open, analyses it and builds the curves
  * once, so that the classes and tables they need are loaded when the window asks for them. Its results are thrown away; the window
  * reads the sheet again itself (and reports any problem with it).
@@ -31,6 +31,9 @@ final class Warmup {
 
     private static void run(Optional<Path> sheet) {
         try {
+            // the log is started here, off the JavaFX thread (the window's start only finds it
+            // started), and so also records a launch whose window then fails to open
+            DesktopLog.start();
             // the charts measure their texts with the AWT font system, slow to start the first time
             java.awt.Font font = new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 11);
             new java.awt.font.TextLayout("Tension per string 1,600 N", font,

@@ -28,12 +28,12 @@ import org.scalewright.model.BreakPlace;
  * its broken strings on the right, under the form that logs a break on the selected key. Binds and
  * lays out {@link ArchiveViewModel} only.
  */
-public final class ArchiveView implements Tool {
+public final class ArchiveView {
     private final BorderPane root = new BorderPane();
     private final ArchiveViewModel model;
     private boolean shown;
 
-    public ArchiveView(ArchiveViewModel model) {
+    ArchiveView(ArchiveViewModel model) {
         root.setId("archive");
         root.setPadding(ToolLayout.padding());
         Label file = new Label();
@@ -178,18 +178,13 @@ public final class ArchiveView implements Tool {
         };
     }
 
-    @Override
-    public String title() {
-        return "Instruments";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(ArchiveViewModel model) {
+        return new Tool("Instruments", "archive-tab", () -> new ArchiveView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "archive-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         // the archive is opened (created, the first time) only when the panel is first shown
         if (!shown) {
             shown = true;

@@ -24,10 +24,10 @@ import org.scalewright.app.tool.ToolLayout;
  * help with their computed effect, and what to inspect. Binds and lays out
  * {@link DiagnosisViewModel} only.
  */
-public final class DiagnosisView implements Tool {
+public final class DiagnosisView {
     private final BorderPane root = new BorderPane();
 
-    public DiagnosisView(DiagnosisViewModel model) {
+    DiagnosisView(DiagnosisViewModel model) {
         root.setId("diagnosis");
         root.setPadding(ToolLayout.padding());
         Runnable run = model::diagnose;
@@ -148,18 +148,13 @@ public final class DiagnosisView implements Tool {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : "";
     }
 
-    @Override
-    public String title() {
-        return "Diagnosis";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(DiagnosisViewModel model) {
+        return new Tool("Diagnosis", "diagnosis-tab", () -> new DiagnosisView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "diagnosis-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         return root;
     }
 }

@@ -23,11 +23,11 @@ import org.scalewright.report.ReportPaper;
  * The Exports tab: the whole report into a folder, or one table, chart or the PDF alone into a
  * file; beside them, what the last export wrote.
  */
-public final class ExportView implements Tool {
+public final class ExportView {
     private final ExportViewModel model;
     private final HBox root;
 
-    public ExportView(ExportViewModel model) {
+    ExportView(ExportViewModel model) {
         this.model = model;
         Button report = new Button("Whole report into a folder…");
         report.setId("export-report");
@@ -139,18 +139,13 @@ public final class ExportView implements Tool {
         return l;
     }
 
-    @Override
-    public String title() {
-        return "Exports";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(ExportViewModel model) {
+        return new Tool("Exports", "exports-tab", () -> new ExportView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "exports-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         return root;
     }
 }

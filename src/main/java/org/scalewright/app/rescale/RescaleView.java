@@ -27,11 +27,11 @@ import org.scalewright.app.tool.ToolLayout;
  * Propose button; on the right the proposal's summary, its change table, and Apply / Discard.
  * Only binds and lays out; {@link RescaleViewModel} does the work.
  */
-public final class RescaleView implements Tool {
+public final class RescaleView {
     private final RescaleViewModel model;
     private final HBox root = new HBox(10);
 
-    public RescaleView(RescaleViewModel model) {
+    RescaleView(RescaleViewModel model) {
         this.model = model;
         root.setId("rescale-panel");
         root.setPadding(new Insets(6));
@@ -45,18 +45,13 @@ public final class RescaleView implements Tool {
         root.getChildren().addAll(settings, result);
     }
 
-    @Override
-    public String title() {
-        return "Rescale";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(RescaleViewModel model) {
+        return new Tool("Rescale", "rescale-tab", () -> new RescaleView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "rescale-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         return root;
     }
 

@@ -21,13 +21,13 @@ import org.scalewright.design.stretch.StretchCurve;
  * The Tuning stretch tab: the stretch curve of the working scale (cents from equal temperament
  * over key number) for the chosen octave type, redrawn after every edit of the scale or A4.
  */
-public final class StretchView implements Tool {
+public final class StretchView {
     private final StretchViewModel model;
     private final Label empty = new Label("No scale open.");
     private ChartViewer viewer;
     private final BorderPane root = new BorderPane();
 
-    public StretchView(StretchViewModel model) {
+    StretchView(StretchViewModel model) {
         this.model = model;
         ChoiceBox<OctaveType> octave = new ChoiceBox<>();
         octave.setId("stretch-octave");
@@ -84,18 +84,13 @@ public final class StretchView implements Tool {
         return viewer == null || root.getCenter() != viewer ? null : viewer.getChart();
     }
 
-    @Override
-    public String title() {
-        return "Tuning stretch";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(StretchViewModel model) {
+        return new Tool("Tuning stretch", "stretch-tab", () -> new StretchView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "stretch-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         return root;
     }
 }

@@ -19,6 +19,7 @@ import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCodeCombination;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.input.KeyEvent;
+import javafx.scene.input.MouseEvent;
 import org.scalewright.app.session.ColumnFit;
 import org.scalewright.physics.FlagKind;
 
@@ -86,7 +87,13 @@ public final class NoteTableView {
         // header shows the two-line label instead (workstation.css)
         col.textProperty().bind(Bindings.createStringBinding(() -> c.chooserName(model.header(c).get()),
                 model.header(c)));
-        header.setTooltip(new Tooltip(c.explanation()));
+        // the explanation is made into a tooltip when the pointer first comes over the header:
+        // a tooltip for every column at start costs the window tens of milliseconds to open
+        header.addEventHandler(MouseEvent.MOUSE_ENTERED, e -> {
+            if (header.getTooltip() == null) {
+                header.setTooltip(new Tooltip(c.explanation()));
+            }
+        });
         col.setGraphic(header);
         col.setId("col-" + c.name().toLowerCase(java.util.Locale.ROOT));
         col.setUserData(c);
@@ -277,7 +284,7 @@ public final class NoteTableView {
         private static final String[] MARKS = {"flag-danger", "flag-caution", "flag-other"};
         private final ChangeListener<NoteRow.State> restyle = (o, a, b) -> mark(getItem(), isEmpty());
         private NoteRow watched;
-        private final Tooltip tip = new Tooltip();
+        private Tooltip tip; // made for the first flagged note the row shows
 
         @Override
         protected void updateItem(NoteRow row, boolean empty) {
@@ -301,6 +308,9 @@ public final class NoteTableView {
                 return;
             }
             getStyleClass().add(worst(row));
+            if (tip == null) {
+                tip = new Tooltip();
+            }
             tip.setText(row.result().noteName() + " (key " + row.key() + ")\n" + NoteColumn.flagDetails(row));
             setTooltip(tip);
         }

@@ -25,10 +25,10 @@ import org.scalewright.design.wirecheck.WireConversion;
  * the plate, the advice on stages and, for a pitch raise, the safety cautions. Binds and lays
  * out {@link WireCheckViewModel} only.
  */
-public final class WireCheckView implements Tool {
+public final class WireCheckView {
     private final BorderPane root = new BorderPane();
 
-    public WireCheckView(WireCheckViewModel model) {
+    WireCheckView(WireCheckViewModel model) {
         root.setId("wire-check");
         root.setPadding(ToolLayout.padding());
 
@@ -177,18 +177,13 @@ public final class WireCheckView implements Tool {
         return Double.isFinite(v) ? String.format(Locale.ROOT, "%." + decimals + "f", v) : "";
     }
 
-    @Override
-    public String title() {
-        return "Wire check";
+    /** @return the tool's tab, its view built from {@code model} when the tab is first chosen */
+    public static Tool tool(WireCheckViewModel model) {
+        return new Tool("Wire check", "wire-check-tab", () -> new WireCheckView(model).node());
     }
 
-    @Override
-    public String id() {
-        return "wire-check-tab";
-    }
-
-    @Override
-    public Node node() {
+    /** @return the panel */
+    Node node() {
         return root;
     }
 }
