@@ -27,15 +27,11 @@ public final class StrengthTableReader {
         return parse(file, CsvTable.read(file, CsvTable.RowLimit.TABLE));
     }
 
-    /** Reads a table bundled as a class-path resource; a broken bundled table is an internal error. */
-    static StrengthTable readResource(String resource) {
-        return BundledTable.read(resource, StrengthTableReader::parse);
-    }
-
     private static final TableColumns.Kind STRENGTH = new TableColumns.Kind("strength",
             "tensile_mpa", "tensile_ksi", "breaking_load_n", "breaking_load_lbf");
 
-    private static StrengthTable parse(Path file, CsvTable t) throws BadInputException {
+    /** Parses a read table; also the parser of the bundled ones ({@link BuiltInData}, {@link BundledTable}). */
+    static StrengthTable parse(Path file, CsvTable t) throws BadInputException {
         TableColumns columns = TableColumns.find(file, t, TableColumns.DIAMETER, STRENGTH);
         LengthUnit dUnit = columns.unit(TableColumns.DIAMETER);
         String sKind = columns.name(STRENGTH);

@@ -30,15 +30,11 @@ public final class WrapCatalogueReader {
         return parse(file, CsvTable.read(file, CsvTable.RowLimit.TABLE));
     }
 
-    /** Reads a catalogue bundled as a class-path resource; a broken bundled table is an internal error. */
-    static WrapWires readResource(String resource) {
-        return BundledTable.read(resource, WrapCatalogueReader::parse);
-    }
-
     private static final TableColumns.Kind METAL = new TableColumns.Kind("metal", List.of("metal"),
             "copper, iron or steel");
 
-    private static WrapWires parse(Path file, CsvTable t) throws BadInputException {
+    /** Parses a read table; also the parser of the bundled ones ({@link BuiltInData}, {@link BundledTable}). */
+    static WrapWires parse(Path file, CsvTable t) throws BadInputException {
         TableColumns columns = TableColumns.find(file, t, METAL, TableColumns.DIAMETER);
         LengthUnit dUnit = columns.unit(TableColumns.DIAMETER);
         String dName = columns.name(TableColumns.DIAMETER);
