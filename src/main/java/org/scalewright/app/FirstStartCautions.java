@@ -1,35 +1,31 @@
 package org.scalewright.app;
 
-import java.util.prefs.BackingStoreException;
-import java.util.prefs.Preferences;
+import org.scalewright.app.session.SettingsStore;
 
 /**
- * Remembers, in the user's preferences, that the safety cautions were shown once, so that
+ * Remembers, in the window's settings store, that the safety cautions were shown once, so that
  * they open by themselves on the first start only (they stay under Help > Safety cautions).
  */
 final class FirstStartCautions {
     private static final String KEY = "cautions-shown";
-    private final Preferences prefs;
+    private final SettingsStore store;
 
-    FirstStartCautions(Preferences prefs) {
-        this.prefs = prefs;
+    FirstStartCautions(SettingsStore store) {
+        this.store = store;
     }
 
-    /** The preferences node of the desktop app. */
+    /** The store of the desktop app, {@link SettingsStore#forUser()}. */
     static FirstStartCautions forUser() {
-        return new FirstStartCautions(Preferences.userNodeForPackage(FirstStartCautions.class));
+        return new FirstStartCautions(SettingsStore.forUser());
     }
 
     boolean alreadyShown() {
-        return prefs.getBoolean(KEY, false);
+        return store.get(KEY).map(Boolean::parseBoolean).orElse(false);
     }
 
+    /** Marks them shown and writes that out at once (it happens once per user). */
     void markShown() {
-        prefs.putBoolean(KEY, true);
-        try {
-            prefs.flush();
-        } catch (BackingStoreException e) {
-            // not remembered: the cautions show again next time, which is harmless
-        }
+        store.put(KEY, "true");
+        store.flush();
     }
 }

@@ -20,6 +20,7 @@ import org.scalewright.io.DumpCsv;
 import org.scalewright.model.BreakActivity;
 import org.scalewright.model.BreakPlace;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.NumberText;
 
 /**
  * The whole archive as a folder of CSV files, one per table ({@code instrument.csv},
@@ -123,7 +124,10 @@ public final class ArchiveDump {
         return out;
     }
 
-    /** @return every row of the table by id, each cell as text (a REAL in Java's shortest exact form) */
+    /**
+     * @return every row of the table by id, each cell as text; a REAL as the shortest plain decimal that
+     *         reads back exactly ({@link NumberText#exact}: {@code 1052}, {@code 0.0001})
+     */
     static List<List<String>> rows(Connection c, String table) throws SQLException {
         List<List<String>> out = new ArrayList<>();
         try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("SELECT * FROM " + table
@@ -133,7 +137,7 @@ public final class ArchiveDump {
                 List<String> row = new ArrayList<>(n);
                 for (int i = 1; i <= n; i++) {
                     Object v = r.getObject(i);
-                    row.add(v == null ? "" : v instanceof Double d ? Double.toString(d) : v.toString());
+                    row.add(v == null ? "" : v instanceof Double d ? NumberText.exact(d) : v.toString());
                 }
                 out.add(row);
             }

@@ -36,7 +36,7 @@ public final class BuiltInData {
     /** @return ASTM A228 minimum tensile strength by diameter (the default strength table) */
     public static StrengthTable astmMinimum() {
         if (minimum == null) {
-            minimum = StrengthTableReader.readResource(DIR + "astm-a228-minimum.csv");
+            minimum = BundledTable.read(DIR + "astm-a228-minimum.csv", StrengthTableReader::parse);
         }
         return minimum;
     }
@@ -44,7 +44,7 @@ public final class BuiltInData {
     /** @return ASTM A228 maximum tensile strength by diameter */
     public static StrengthTable astmMaximum() {
         if (maximum == null) {
-            maximum = StrengthTableReader.readResource(DIR + "astm-a228-maximum.csv");
+            maximum = BundledTable.read(DIR + "astm-a228-maximum.csv", StrengthTableReader::parse);
         }
         return maximum;
     }
@@ -91,7 +91,7 @@ public final class BuiltInData {
      */
     public static WrapWires wrapWire() {
         if (wraps == null) {
-            wraps = WrapCatalogueReader.readResource(DIR + "wrap-wire.csv");
+            wraps = BundledTable.read(DIR + "wrap-wire.csv", WrapCatalogueReader::parse);
         }
         return wraps;
     }

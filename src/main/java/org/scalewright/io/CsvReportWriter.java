@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -60,18 +61,34 @@ public final class CsvReportWriter {
         for (String c : comments) {
             out.write(dialect.comment(c) + "\n");
         }
-        try (CSVWriter csv = new CSVWriter(out, dialect.separator(), ICSVWriter.DEFAULT_QUOTE_CHARACTER,
-                ICSVWriter.DEFAULT_ESCAPE_CHARACTER, "\n")) {
-            csv.writeNext(header.toArray(String[]::new), false);
+        List<List<String>> cells = new ArrayList<>(rows.size());
+        for (List<String> row : rows) {
+            if (row.size() != header.size()) {
+                throw new IllegalArgumentException("row has " + row.size() + " cells, header " + header.size());
+            }
+            cells.add(row.stream().map(CsvCells::safeText).map(dialect::number).toList());
+        }
+        writeTable(out, dialect.separator(), false, header, cells);
+        return out.toString();
+    }
+
+    /**
+     * The one place OpenCSV writes a table (results and archive dumps): a header row, then the rows, each
+     * line ending in {@code \n}; a cell holding a quote, the separator or a line break is quoted, quotes doubled
+     * (RFC 4180).
+     *
+     * @param quoteAll quote every cell (a dump), else only the cells that need it
+     */
+    static void writeTable(StringWriter out, char separator, boolean quoteAll, List<String> header,
+                           List<List<String>> rows) {
+        try (CSVWriter csv = new CSVWriter(out, separator, ICSVWriter.DEFAULT_QUOTE_CHARACTER,
+                ICSVWriter.DEFAULT_QUOTE_CHARACTER, "\n")) {
+            csv.writeNext(header.toArray(String[]::new), quoteAll);
             for (List<String> row : rows) {
-                if (row.size() != header.size()) {
-                    throw new IllegalArgumentException("row has " + row.size() + " cells, header " + header.size());
-                }
-                csv.writeNext(row.stream().map(CsvCells::safeText).map(dialect::number).toArray(String[]::new), false);
+                csv.writeNext(row.toArray(String[]::new), quoteAll);
             }
         } catch (IOException e) {
-            throw new IllegalStateException("writing to memory failed", e);
+            throw new IllegalStateException("writing CSV into memory failed", e);
         }
-        return out.toString();
     }
 }

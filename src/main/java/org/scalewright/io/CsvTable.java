@@ -27,6 +27,11 @@ record CsvTable(Path file, List<String> comments, List<Integer> commentLines, Li
     record Row(int line, List<String> cells) {
     }
 
+    /** @return the table's name: its first comment line (whose data it is), else the file name */
+    String title() {
+        return comments.isEmpty() ? String.valueOf(file.getFileName()) : comments.get(0);
+    }
+
     /** The most cells a line may have; no input of the program has more than 16 columns. */
     static final int MAX_CELLS = 100;
 

@@ -2,8 +2,6 @@ package org.scalewright.io;
 
 import com.opencsv.CSVReader;
 import com.opencsv.CSVReaderBuilder;
-import com.opencsv.CSVWriter;
-import com.opencsv.ICSVWriter;
 import com.opencsv.RFC4180ParserBuilder;
 import com.opencsv.exceptions.CsvException;
 import java.io.IOException;
@@ -33,15 +31,7 @@ public final class DumpCsv {
     /** @return the table as CSV bytes: the header, then one line per row */
     public static byte[] write(List<String> header, List<List<String>> rows) {
         StringWriter out = new StringWriter();
-        try (CSVWriter csv = new CSVWriter(out, ICSVWriter.DEFAULT_SEPARATOR, ICSVWriter.DEFAULT_QUOTE_CHARACTER,
-                ICSVWriter.DEFAULT_QUOTE_CHARACTER, "\n")) {
-            csv.writeNext(header.toArray(String[]::new), true);
-            for (List<String> row : rows) {
-                csv.writeNext(row.toArray(String[]::new), true);
-            }
-        } catch (IOException e) {
-            throw new IllegalStateException("writing CSV into memory failed", e);
-        }
+        CsvReportWriter.writeTable(out, ',', true, header, rows);
         return out.toString().getBytes(StandardCharsets.UTF_8);
     }
 

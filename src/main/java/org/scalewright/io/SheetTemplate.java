@@ -12,16 +12,14 @@ import org.scalewright.model.NumberText;
  * in the project): keys, sections and strings per note filled in, the measurements blank.
  */
 public enum SheetTemplate {
-    GRAND_88("template-grand-88.csv", "Grand, 88 keys", "grand-88.csv"),
-    UPRIGHT_88("template-upright-88.csv", "Upright, 88 keys", "upright-88.csv");
+    GRAND_88("Grand, 88 keys", "grand-88.csv"),
+    UPRIGHT_88("Upright, 88 keys", "upright-88.csv");
 
     private static final String DIR = "/org/scalewright/templates/";
-    private final String resource;
     private final String title;
     private final String suggestedName;
 
-    SheetTemplate(String resource, String title, String suggestedName) {
-        this.resource = resource;
+    SheetTemplate(String title, String suggestedName) {
         this.title = title;
         this.suggestedName = suggestedName;
     }
@@ -36,16 +34,16 @@ public enum SheetTemplate {
         return suggestedName;
     }
 
-    /** @return the file name of the template in the program ({@code template-grand-88.csv}) */
+    /** @return the file name of the template in the program: {@code template-} and the suggested name */
     public String resourceName() {
-        return resource;
+        return "template-" + suggestedName;
     }
 
     /** @return the template's text as bundled */
     public String text() {
-        try (InputStream in = SheetTemplate.class.getResourceAsStream(DIR + resource)) {
+        try (InputStream in = SheetTemplate.class.getResourceAsStream(DIR + resourceName())) {
             if (in == null) {
-                throw new IllegalStateException("the bundled template " + resource + " is missing from the program");
+                throw new IllegalStateException("the bundled template " + resourceName() + " is missing from the program");
             }
             return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {

@@ -27,58 +27,23 @@ public final class StrengthTableReader {
         return parse(file, CsvTable.read(file, CsvTable.RowLimit.TABLE));
     }
 
-    /** Reads a table bundled as a class-path resource; a broken bundled table is an internal error. */
-    static StrengthTable readResource(String resource) {
-        return BundledTable.read(resource, StrengthTableReader::parse);
-    }
+    private static final TableColumns.Kind STRENGTH = new TableColumns.Kind("strength",
+            "tensile_mpa", "tensile_ksi", "breaking_load_n", "breaking_load_lbf");
 
-    private static StrengthTable parse(Path file, CsvTable t) throws BadInputException {
+    /** Parses a read table; also the parser of the bundled ones ({@link BuiltInData}, {@link BundledTable}). */
+    static StrengthTable parse(Path file, CsvTable t) throws BadInputException {
+        TableColumns columns = TableColumns.find(file, t, TableColumns.DIAMETER, STRENGTH);
+        LengthUnit dUnit = columns.unit(TableColumns.DIAMETER);
+        String sKind = columns.name(STRENGTH);
         List<SheetProblem> problems = new ArrayList<>();
-        int dCol = -1;
-        LengthUnit dUnit = null;
-        int sCol = -1;
-        String sKind = null;
-        for (int i = 0; i < t.header().size(); i++) {
-            String h = t.header().get(i);
-            switch (h) {
-                case "diameter_mm", "diameter_in" -> {
-                    if (dCol >= 0) {
-                        problems.add(new SheetProblem(file, t.headerLine(), h, "more than one diameter column"));
-                    }
-                    dCol = i;
-                    dUnit = h.endsWith("_mm") ? LengthUnit.MM : LengthUnit.IN;
-                }
-                case "tensile_mpa", "tensile_ksi", "breaking_load_n", "breaking_load_lbf" -> {
-                    if (sCol >= 0) {
-                        problems.add(new SheetProblem(file, t.headerLine(), h, "more than one strength column"));
-                    }
-                    sCol = i;
-                    sKind = h;
-                }
-                default -> problems.add(new SheetProblem(file, t.headerLine(), h, "unknown column; expected "
-                        + "diameter_mm or diameter_in, and tensile_mpa, tensile_ksi, breaking_load_n or "
-                        + "breaking_load_lbf"));
-            }
-        }
-        if (dCol < 0) {
-            problems.add(new SheetProblem(file, t.headerLine(), "", "no diameter column (diameter_mm or diameter_in)"));
-        }
-        if (sCol < 0) {
-            problems.add(new SheetProblem(file, t.headerLine(), "",
-                    "no strength column (tensile_mpa, tensile_ksi, breaking_load_n or breaking_load_lbf)"));
-        }
-        if (!problems.isEmpty()) {
-            throw new BadInputException(problems);
-        }
         TreeMap<Double, Double> rows = new TreeMap<>();
         TreeMap<Double, Integer> lines = new TreeMap<>();
         for (CsvTable.Row r : t.rows()) {
-            if (r.cells().size() > t.header().size()) {
-                problems.add(new SheetProblem(file, r.line(), "", "the row has more cells than the header"));
+            if (!columns.fits(r, problems)) {
                 continue;
             }
-            Double d = positive(file, r, dCol, t.header().get(dCol), problems);
-            Double s = positive(file, r, sCol, sKind, problems);
+            Double d = columns.positive(r, TableColumns.DIAMETER, problems);
+            Double s = columns.positive(r, STRENGTH, problems);
             if (d == null || s == null) {
                 continue;
             }
@@ -91,7 +56,7 @@ public final class StrengthTableReader {
             };
             Integer earlier = lines.putIfAbsent(dm, r.line());
             if (earlier != null) {
-                problems.add(new SheetProblem(file, r.line(), t.header().get(dCol),
+                problems.add(new SheetProblem(file, r.line(), columns.name(TableColumns.DIAMETER),
                         "diameter " + d + " appears twice (first on line " + earlier + ")"));
                 continue;
             }
@@ -105,16 +70,6 @@ public final class StrengthTableReader {
         }
         double[] ds = rows.keySet().stream().mapToDouble(Double::doubleValue).toArray();
         double[] ss = rows.values().stream().mapToDouble(Double::doubleValue).toArray();
-        String name = t.comments().isEmpty() ? String.valueOf(file.getFileName()) : t.comments().get(0);
-        return new StrengthTable(name, t.comments(), ds, ss);
-    }
-
-    private static Double positive(Path file, CsvTable.Row r, int col, String name, List<SheetProblem> problems) {
-        Double v = CsvTable.requiredNumber(file, r, col, name, "a number", problems);
-        if (v != null && !(v > 0)) {
-            problems.add(new SheetProblem(file, r.line(), name, "must be greater than 0, was " + CsvTable.cell(r, col)));
-            return null;
-        }
-        return v;
+        return new StrengthTable(t.title(), t.comments(), ds, ss);
     }
 }

@@ -30,59 +30,27 @@ public final class WrapCatalogueReader {
         return parse(file, CsvTable.read(file, CsvTable.RowLimit.TABLE));
     }
 
-    /** Reads a catalogue bundled as a class-path resource; a broken bundled table is an internal error. */
-    static WrapWires readResource(String resource) {
-        return BundledTable.read(resource, WrapCatalogueReader::parse);
-    }
+    private static final TableColumns.Kind METAL = new TableColumns.Kind("metal", List.of("metal"),
+            "copper, iron or steel");
 
-    private static WrapWires parse(Path file, CsvTable t) throws BadInputException {
+    /** Parses a read table; also the parser of the bundled ones ({@link BuiltInData}, {@link BundledTable}). */
+    static WrapWires parse(Path file, CsvTable t) throws BadInputException {
+        TableColumns columns = TableColumns.find(file, t, METAL, TableColumns.DIAMETER);
+        LengthUnit dUnit = columns.unit(TableColumns.DIAMETER);
+        String dName = columns.name(TableColumns.DIAMETER);
         List<SheetProblem> problems = new ArrayList<>();
-        int mCol = -1;
-        int dCol = -1;
-        LengthUnit dUnit = null;
-        for (int i = 0; i < t.header().size(); i++) {
-            String h = t.header().get(i);
-            switch (h) {
-                case "metal" -> mCol = i;
-                case "diameter_mm", "diameter_in" -> {
-                    if (dCol >= 0) {
-                        problems.add(new SheetProblem(file, t.headerLine(), h, "more than one diameter column"));
-                    }
-                    dCol = i;
-                    dUnit = h.endsWith("_mm") ? LengthUnit.MM : LengthUnit.IN;
-                }
-                default -> problems.add(new SheetProblem(file, t.headerLine(), h,
-                        "unknown column; expected metal, and diameter_mm or diameter_in"));
-            }
-        }
-        if (mCol < 0) {
-            problems.add(new SheetProblem(file, t.headerLine(), "", "no metal column (copper, iron or steel)"));
-        }
-        if (dCol < 0) {
-            problems.add(new SheetProblem(file, t.headerLine(), "", "no diameter column (diameter_mm or diameter_in)"));
-        }
-        if (!problems.isEmpty()) {
-            throw new BadInputException(problems);
-        }
         Map<WrapMetal, List<Double>> wires = new EnumMap<>(WrapMetal.class);
         Map<String, Integer> seen = new HashMap<>();
         for (CsvTable.Row r : t.rows()) {
-            if (r.cells().size() > t.header().size()) {
-                problems.add(new SheetProblem(file, r.line(), "", "the row has more cells than the header"));
+            if (!columns.fits(r, problems)) {
                 continue;
             }
-            WrapMetal metal = WrapMetal.parse(CsvTable.cell(r, mCol));
+            WrapMetal metal = WrapMetal.parse(columns.cell(r, METAL));
             if (metal == null) {
                 problems.add(new SheetProblem(file, r.line(), "metal", "must be copper, iron or steel, was '"
-                        + CsvTable.cell(r, mCol) + "'"));
+                        + columns.cell(r, METAL) + "'"));
             }
-            String dName = t.header().get(dCol);
-            Double d = CsvTable.requiredNumber(file, r, dCol, dName, "a number", problems);
-            if (d != null && !(d > 0)) {
-                problems.add(new SheetProblem(file, r.line(), dName, "must be greater than 0, was "
-                        + CsvTable.cell(r, dCol)));
-                continue;
-            }
+            Double d = columns.positive(r, TableColumns.DIAMETER, problems);
             if (metal == null || d == null) {
                 continue;
             }
@@ -102,9 +70,8 @@ public final class WrapCatalogueReader {
         if (!problems.isEmpty()) {
             throw new BadInputException(problems);
         }
-        String name = t.comments().isEmpty() ? String.valueOf(file.getFileName()) : t.comments().get(0);
         try {
-            return WrapWires.catalogue(wires, name);
+            return WrapWires.catalogue(wires, t.title());
         } catch (InvalidInput e) {
             throw new BadInputException(List.of(new SheetProblem(file, t.headerLine(), "", e.getMessage())));
         }

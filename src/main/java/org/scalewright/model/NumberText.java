@@ -135,6 +135,31 @@ public final class NumberText {
         return BigDecimal.valueOf(v).round(CLEAN).stripTrailingZeros().toPlainString();
     }
 
+    /**
+     * @return the shortest plain decimal (no exponent) that reads back with {@link Double#parseDouble} to
+     *         exactly {@code v}, bit for bit: {@code 1052}, {@code 0.0001}, {@code 0.30000000000000004},
+     *         {@code -0} for negative zero; {@code NaN}/{@code Infinity} as Java writes them
+     */
+    public static String exact(double v) {
+        if (!Double.isFinite(v)) {
+            return Double.toString(v);
+        }
+        if (v == 0) {
+            return 1 / v < 0 ? "-0" : "0";
+        }
+        // Java's own text reads back exactly (Double.toString) but may carry a digit more than needed
+        BigDecimal java = new BigDecimal(Double.toString(v)).stripTrailingZeros();
+        BigDecimal whole = new BigDecimal(v);
+        for (int digits = 1; digits < java.precision(); digits++) {
+            String text = whole.round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros()
+                    .toPlainString();
+            if (Double.parseDouble(text) == v) {
+                return text;
+            }
+        }
+        return java.toPlainString();
+    }
+
     /** @return scientific notation with {@code decimals} decimals in the mantissa, {@code 3.41e-04}; empty if not finite */
     public static String scientific(double v, int decimals) {
         if (!Double.isFinite(v)) {

@@ -21,16 +21,21 @@ public interface WordChoice {
      * @param text one of its words; case and blanks around it do not matter
      * @param what what is chosen, for the message: {@code where the string broke}
      * @return the constant whose word it is
-     * @throws InvalidInput naming the accepted words
+     * @throws InvalidInput naming the accepted words: {@code units must be metric or imperial, was 'x'}
      */
     static <E extends Enum<E> & WordChoice> E of(Class<E> type, String text, String what) {
         String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
         return Arrays.stream(type.getEnumConstants()).filter(c -> c.word().equals(t)).findFirst()
-                .orElseThrow(() -> new InvalidInput(what + " must be one of " + words(type) + ", was '" + text + "'"));
+                .orElseThrow(() -> new InvalidInput(what + " must be " + Alternatives.of(wordList(type)) + ", was '" + text
+                        + "'"));
     }
 
     /** @param type the enum @return its words, comma-separated */
     static <E extends Enum<E> & WordChoice> String words(Class<E> type) {
-        return String.join(", ", Arrays.stream(type.getEnumConstants()).map(WordChoice::word).toList());
+        return String.join(", ", wordList(type));
+    }
+
+    private static <E extends Enum<E> & WordChoice> java.util.List<String> wordList(Class<E> type) {
+        return Arrays.stream(type.getEnumConstants()).map(WordChoice::word).toList();
     }
 }

@@ -1,5 +1,6 @@
 package org.scalewright.report;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.scalewright.model.NumberText;
@@ -43,5 +44,30 @@ final class Cells {
     /** @return the header names of a length column: {@code name_mm}, or {@code name_in, name_mm} */
     static List<String> lengthHeader(String name, ReportUnits units) {
         return units == ReportUnits.IMPERIAL ? List.of(name + "_in", name + "_mm") : List.of(name + "_mm");
+    }
+
+    /** @return the header names of length columns, each as {@link #lengthHeader} */
+    static List<String> lengthHeaders(ReportUnits units, String... names) {
+        List<String> out = new ArrayList<>();
+        for (String n : names) {
+            out.addAll(lengthHeader(n, units));
+        }
+        return out;
+    }
+
+    /** Adds a diameter's cells to a row: mm to 0.001, for imperial units inches to 0.0001 before it; blank when empty. */
+    static void diameter(List<String> row, OptionalDouble metres, boolean imperial) {
+        if (imperial) {
+            row.add(in(metres, 4));
+        }
+        row.add(mm(metres, 3));
+    }
+
+    /** Adds a length's cells to a row: mm to 0.1, for imperial units inches to 0.01 before it; blank when empty. */
+    static void length(List<String> row, OptionalDouble metres, boolean imperial) {
+        if (imperial) {
+            row.add(in(metres, 2));
+        }
+        row.add(mm(metres, 1));
     }
 }

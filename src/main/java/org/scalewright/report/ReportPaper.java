@@ -1,14 +1,14 @@
 package org.scalewright.report;
 
-import java.util.Locale;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.scalewright.model.InvalidInput;
+import org.scalewright.model.WordChoice;
 
 /**
  * The paper the PDF report is laid out on, chosen apart from the units; by default A4 for
  * metric units and US Letter for imperial ({@link #of(ReportUnits)}).
  */
-public enum ReportPaper {
+public enum ReportPaper implements WordChoice {
     /** ISO A4, 210 × 297 mm. */
     A4(PDRectangle.A4),
     /** US Letter, 8.5 × 11 in. */
@@ -34,17 +34,7 @@ public enum ReportPaper {
      * @throws InvalidInput naming the text and the choices
      */
     public static ReportPaper parse(String text) {
-        String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
-        return switch (t) {
-            case "a4" -> A4;
-            case "letter" -> LETTER;
-            default -> throw new InvalidInput("paper must be a4 or letter, was '" + text + "'");
-        };
-    }
-
-    /** @return {@code a4} or {@code letter} */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
+        return WordChoice.of(ReportPaper.class, text, "paper");
     }
 
     /** @return the name shown in the window: {@code A4} or {@code Letter} */

@@ -1,15 +1,15 @@
 package org.scalewright.report;
 
-import java.util.Locale;
-import org.scalewright.model.InvalidInput;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.UnitConversions;
+import org.scalewright.model.InvalidInput;
+import org.scalewright.model.WordChoice;
 
 /**
  * The units a report shows lengths and forces in. Metric: millimetres and newtons. Imperial:
  * inches and pounds-force, with millimetres and newtons beside them.
  */
-public enum ReportUnits {
+public enum ReportUnits implements WordChoice {
     /** Millimetres, newtons, metres of wire. */
     METRIC(LengthUnit.MM),
     /** Inches (with mm beside), pounds-force (with N beside), feet of wire (with m beside). */
@@ -36,19 +36,9 @@ public enum ReportUnits {
 
     /**
      * @param text {@code metric} or {@code imperial} (case ignored)
-     * @throws IllegalArgumentException naming the text and the choices
+     * @throws InvalidInput naming the text and the choices
      */
     public static ReportUnits parse(String text) {
-        String t = text == null ? "" : text.strip().toLowerCase(Locale.ROOT);
-        return switch (t) {
-            case "metric" -> METRIC;
-            case "imperial" -> IMPERIAL;
-            default -> throw new InvalidInput("units must be metric or imperial, was '" + text + "'");
-        };
-    }
-
-    /** @return {@code metric} or {@code imperial} */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
+        return WordChoice.of(ReportUnits.class, text, "units");
     }
 }

@@ -22,39 +22,28 @@ public final class WoundOrderCsv {
         List<String> h = new ArrayList<>(List.of("keys", "notes", "count"));
         h.addAll(Cells.lengthHeader("core", units));
         h.add("core_size");
-        h.addAll(Cells.lengthHeader("wrap1", units));
-        h.addAll(Cells.lengthHeader("wrap2", units));
+        h.addAll(Cells.lengthHeaders(units, "wrap1", "wrap2"));
         h.addAll(List.of("wrap_metal", "winding"));
-        h.addAll(Cells.lengthHeader("od", units));
-        h.addAll(Cells.lengthHeader("speaking_length", units));
-        h.addAll(Cells.lengthHeader("wound_length", units));
-        h.addAll(Cells.lengthHeader("bare_front", units));
-        h.addAll(Cells.lengthHeader("bare_back", units));
+        h.addAll(Cells.lengthHeaders(units, "od", "speaking_length", "wound_length", "bare_front", "bare_back"));
         h.add("bare_ends");
-        h.addAll(Cells.lengthHeader("winding_start_from_hitch", units));
-        h.addAll(Cells.lengthHeader("stretched_length", units));
+        h.addAll(Cells.lengthHeaders(units, "winding_start_from_hitch", "stretched_length"));
         List<List<String>> rows = new ArrayList<>();
         for (WoundOrderRow r : order.rows()) {
             List<String> c = new ArrayList<>(List.of(join(r.keys().stream().map(String::valueOf).toList()),
                     join(r.noteNames()), Integer.toString(r.count())));
-            ScheduleCsv.diameter(c, r.coreDiameter(), imp);
+            Cells.diameter(c, OptionalDouble.of(r.coreDiameter()), imp);
             c.add(Cells.size(r.coreSize()));
-            ScheduleCsv.diameter(c, r.wrapInner(), imp);
-            if (r.doubleWound()) {
-                ScheduleCsv.diameter(c, r.wrapOuter(), imp);
-            } else {
-                ScheduleCsv.blank(c, imp);
-            }
+            Cells.diameter(c, OptionalDouble.of(r.wrapInner()), imp);
+            Cells.diameter(c, r.doubleWound() ? OptionalDouble.of(r.wrapOuter()) : OptionalDouble.empty(), imp);
             c.add(r.metal().sheetName());
             c.add(r.doubleWound() ? "double" : "single");
-            ScheduleCsv.diameter(c, r.outsideDiameter(), imp);
-            ScheduleCsv.length(c, r.speakingLength(), imp);
-            ScheduleCsv.length(c, r.woundLength(), imp);
-            ScheduleCsv.length(c, r.bareFront(), imp);
-            ScheduleCsv.length(c, r.bareBack(), imp);
+            Cells.diameter(c, OptionalDouble.of(r.outsideDiameter()), imp);
+            for (double length : new double[] {r.speakingLength(), r.woundLength(), r.bareFront(), r.bareBack()}) {
+                Cells.length(c, OptionalDouble.of(length), imp);
+            }
             c.add(r.bareEnds().word());
-            optional(c, r.windingStart(), imp);
-            optional(c, r.stretchedLength(), imp);
+            Cells.length(c, r.windingStart(), imp);
+            Cells.length(c, r.stretchedLength(), imp);
             rows.add(c);
         }
         List<String> com = new ArrayList<>(comments);
@@ -81,13 +70,5 @@ public final class WoundOrderCsv {
 
     private static String join(List<String> items) {
         return String.join(" ", items);
-    }
-
-    private static void optional(List<String> c, OptionalDouble v, boolean imp) {
-        if (v.isPresent()) {
-            ScheduleCsv.length(c, v.getAsDouble(), imp);
-        } else {
-            ScheduleCsv.blank(c, imp);
-        }
     }
 }

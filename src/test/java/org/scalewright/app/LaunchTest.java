@@ -17,6 +17,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.scalewright.app.session.DemoSheet;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.ScriptedPrompts;
+import org.scalewright.app.session.SettingsStore;
 import org.scalewright.app.session.TestSheets;
 
 /** What the window opens at start, and the once-only cautions. */
@@ -175,10 +176,11 @@ class LaunchTest {
     void cautionsAreShownOnceAndRemembered() throws Exception {
         Preferences node = Preferences.userRoot().node("org/scalewright/test/" + System.nanoTime());
         try {
-            FirstStartCautions first = new FirstStartCautions(node);
+            FirstStartCautions first = new FirstStartCautions(SettingsStore.of(node));
             assertFalse(first.alreadyShown());
             first.markShown();
-            assertTrue(new FirstStartCautions(node).alreadyShown());
+            assertTrue(new FirstStartCautions(SettingsStore.of(node)).alreadyShown());
+            assertTrue(node.getBoolean("cautions-shown", false), "kept as the earlier versions kept it");
         } finally {
             node.removeNode();
         }

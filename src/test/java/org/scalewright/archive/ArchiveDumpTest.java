@@ -103,6 +103,34 @@ class ArchiveDumpTest {
         }
     }
 
+    @Test
+    void realCellsAreWrittenAsPlainDecimalsAndLoadBackBitForBit() throws Exception {
+        Path db = dir.resolve("reals.db");
+        // the double just above 440: 440 + 2^-44 = 440.0000000000000568…, IEEE 754 binary64 (52-bit fraction), hand-worked
+        double noisy = Math.nextUp(440.0);
+        try (Archive a = Archive.create(db)) {
+            a.addInstrument(Instrument.named("grand"));
+            a.logJob("grand", new Job(LocalDate.of(2025, 6, 2), "tuning", "", OptionalDouble.of(noisy), "",
+                    OptionalInt.empty()));
+            a.logBreak("grand", new StringBreak(LocalDate.of(2025, 6, 2), 66, OptionalInt.empty(),
+                    OptionalDouble.of(1052.0), BreakActivity.TUNING, BreakPlace.UNKNOWN, "", ""), OptionalInt.empty());
+        }
+        Path dump = dir.resolve("reals");
+        try (Archive a = Archive.open(db)) {
+            ArchiveDump.dump(a, dump);
+        }
+        String jobs = Files.readString(dump.resolve("job.csv"), StandardCharsets.UTF_8);
+        String breaks = Files.readString(dump.resolve("string_break.csv"), StandardCharsets.UTF_8);
+        assertTrue(jobs.contains("\"440.00000000000006\""), jobs);
+        assertTrue(breaks.contains("\"1052\""), breaks);
+        assertTrue(!breaks.contains("1052.0") && !jobs.contains("E"), breaks + jobs);
+        Path copy = dir.resolve("reals-copy.db");
+        try (Archive b = Archive.create(copy)) {
+            ArchiveDump.load(b, dump);
+        }
+        assertEquals(tables(db), tables(copy));
+    }
+
     /** @return every row of every table, as the database holds it (type and value), by id */
     private static Map<String, List<List<Object>>> tables(Path db) throws Exception {
         Map<String, List<List<Object>>> out = new LinkedHashMap<>();

@@ -68,4 +68,16 @@ class WrapCatalogueReaderTest {
         assertEquals(6, e.problems().get(2).line());
         assertTrue(e.problems().get(2).message().contains("twice"), e.getMessage());
     }
+
+    @Test
+    void aBrokenHeaderNamesEveryProblemOfIt() throws Exception {
+        Path f = dir.resolve("header.csv");
+        Files.writeString(f, "metal,metal,gauge\ncopper,copper,0.5\n");
+        BadInputException e = assertThrows(BadInputException.class, () -> WrapCatalogueReader.read(f));
+        assertEquals(3, e.problems().size(), e.getMessage());
+        assertEquals("more than one metal column", e.problems().get(0).message());
+        assertEquals("unknown column; expected metal, and diameter_mm or diameter_in", e.problems().get(1).message());
+        assertEquals("gauge", e.problems().get(1).column());
+        assertEquals("no diameter column (diameter_mm or diameter_in)", e.problems().get(2).message());
+    }
 }

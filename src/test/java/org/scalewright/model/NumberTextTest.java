@@ -1,6 +1,7 @@
 package org.scalewright.model;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Locale;
 import java.util.Random;
@@ -111,5 +112,40 @@ class NumberTextTest {
         assertEquals("442", NumberText.sheetCellExact(442, x -> x, 442));
         assertEquals("-2.5", NumberText.sheetCellExact(-2.5, x -> x, -2.5));
         assertEquals("0.3", NumberText.sheetCellExact(0.1 + 0.2, x -> x, 0.1 + 0.2));
+    }
+
+    /**
+     * The exact text of a double: the examples are IEEE 754 binary64 values worked by hand
+     * (0.1 + 0.2 is 0.3000000000000000444…, so 17 digits are needed); the random values check the
+     * round trip bit for bit over the whole range, and that no more significant digits are used than
+     * Java's own {@link Double#toString} (Java SE 17 API: "as many, but only as many, more digits as
+     * are needed to uniquely distinguish the argument value"), an independent upper bound.
+     */
+    @Test
+    void exactTextReadsBackBitForBitAndIsPlain() {
+        assertEquals("1052", NumberText.exact(1052.0));
+        assertEquals("0.0001", NumberText.exact(1.0E-4));
+        assertEquals("0.30000000000000004", NumberText.exact(0.1 + 0.2));
+        assertEquals("-0", NumberText.exact(-0.0));
+        assertEquals("0", NumberText.exact(0.0));
+        assertEquals("-2.5", NumberText.exact(-2.5));
+        Random r = new Random(20261202);
+        for (int i = 0; i < 20_000; i++) {
+            double v = i % 10 == 0 ? Double.longBitsToDouble(r.nextLong()) : (r.nextDouble() - 0.5) * Math.pow(10, r.nextInt(13) - 6);
+            if (!Double.isFinite(v)) {
+                continue;
+            }
+            String t = NumberText.exact(v);
+            assertEquals(Double.doubleToRawLongBits(v), Double.doubleToRawLongBits(Double.parseDouble(t)), t);
+            assertEquals(-1, t.indexOf('E'), t);
+            if (v != 0) {
+                assertTrue(significantDigits(t) <= significantDigits(Double.toString(v)), t + " vs " + v);
+            }
+        }
+    }
+
+    private static int significantDigits(String text) {
+        String mantissa = text.replaceFirst("[eE].*$", "").replace("-", "").replace(".", "");
+        return mantissa.replaceFirst("^0+", "").replaceFirst("0+$", "").length();
     }
 }

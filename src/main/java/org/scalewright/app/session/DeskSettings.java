@@ -55,7 +55,7 @@ public final class DeskSettings {
     }
 
     public void units(DisplayUnits u) {
-        put(UNITS, u.length().name() + "," + u.force().name());
+        store.put(UNITS, u.length().name() + "," + u.force().name());
     }
 
     /** @return {@link #STRENGTH_MINIMUM}, {@link #STRENGTH_MAXIMUM} or the path of a maker's table */
@@ -64,7 +64,7 @@ public final class DeskSettings {
     }
 
     public void strength(StrengthChoice c) {
-        put(STRENGTH, c.file().map(Path::toString).orElse(
+        store.put(STRENGTH, c.file().map(Path::toString).orElse(
                 c.table() == StrengthChoice.maximum().table() ? STRENGTH_MAXIMUM : STRENGTH_MINIMUM));
     }
 
@@ -75,7 +75,7 @@ public final class DeskSettings {
     }
 
     public void a4(double hz) {
-        put(A4, NumberText.plain(hz));
+        store.put(A4, NumberText.plain(hz));
     }
 
     /** @return the window's width and height, px */
@@ -84,7 +84,7 @@ public final class DeskSettings {
     }
 
     public void windowSize(double width, double height) {
-        put(WINDOW, NumberText.plain(Math.rint(width)) + "," + NumberText.plain(Math.rint(height)));
+        store.put(WINDOW, NumberText.plain(Math.rint(width)) + "," + NumberText.plain(Math.rint(height)));
     }
 
     /** @return the divider positions (0 to 1) of the split pane named {@code which} */
@@ -94,7 +94,7 @@ public final class DeskSettings {
     }
 
     public void dividers(String which, double[] positions) {
-        put(DIVIDERS + which, String.join(",", Arrays.stream(positions)
+        store.put(DIVIDERS + which, String.join(",", Arrays.stream(positions)
                 .mapToObj(d -> NumberText.plain(Math.rint(d * 1000) / 1000)).toList()));
     }
 
@@ -103,7 +103,7 @@ public final class DeskSettings {
     }
 
     public void lastFolder(Path folder) {
-        put(LAST_FOLDER, folder.toAbsolutePath().toString());
+        store.put(LAST_FOLDER, folder.toAbsolutePath().toString());
     }
 
     /** @return the recent files, newest first, as kept (some may no longer exist) */
@@ -116,14 +116,17 @@ public final class DeskSettings {
     public void recentFiles(List<Path> files) {
         if (files.isEmpty()) {
             store.remove(RECENT);
-            store.flush();
         } else {
-            put(RECENT, String.join("\n", files.stream().map(Path::toString).toList()));
+            store.put(RECENT, String.join("\n", files.stream().map(Path::toString).toList()));
         }
     }
 
-    private void put(String key, String value) {
-        store.put(key, value);
+    /**
+     * Writes the settings to lasting storage now. A change is kept at once for this program and
+     * reaches lasting storage by itself, at the latest when the program ends normally; the window
+     * calls this once as it closes, not on every change.
+     */
+    public void flush() {
         store.flush();
     }
 
