@@ -27,7 +27,10 @@ final class WindowLayout {
                 .ifPresent(pane::setDividerPositions);
     }
 
-    /** Keeps the window size and the dividers of the named panes. */
+    /**
+     * Keeps the window size and the dividers of the named panes, and writes every setting of the
+     * session out (the settings are not written at each change; this is called at close).
+     */
     void keep(Stage stage, String[] names, SplitPane... panes) {
         if (stage.getScene() != null && !stage.isMaximized() && !stage.isFullScreen()) {
             settings.windowSize(stage.getScene().getWidth(), stage.getScene().getHeight());
@@ -35,5 +38,6 @@ final class WindowLayout {
         for (int i = 0; i < panes.length; i++) {
             settings.dividers(names[i], panes[i].getDividerPositions());
         }
+        settings.flush();
     }
 }
