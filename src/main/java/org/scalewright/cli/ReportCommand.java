@@ -31,7 +31,8 @@ import picocli.CommandLine.Spec;
 
 /** {@code report}: the PDF report, charts and order sheets of an instrument, into one directory. */
 @Command(name = "report", mixinStandardHelpOptions = true,
-        description = {"Write a report of a scale into a directory.",
+        description = {"Write a scale's report into a directory: a PDF for the bench and the string maker, the "
+                + "curves as pictures, and the results, string schedule and orders as CSV files and one workbook.",
                 "Writes report.pdf; the curves as PNG and SVG (tension, break-percent, inharmonicity, "
                         + "stretch); results.csv, schedule.csv, wound-order.csv, wire-order.csv and stretch.csv "
                         + "(stretch_cents for the --octave type; the PDF gives all three), and the same tables "
