@@ -167,6 +167,13 @@ public final class ScaleSheetReader {
             Double winding = length(SheetColumn.WINDING_LENGTH, false);
             Double front = bare(SheetColumn.BARE_FRONT);
             Double back = bare(SheetColumn.BARE_BACK);
+            Double backLength = length(SheetColumn.BACK_LENGTH, false);
+            if (backLength != null && total != null && length != null && backLength + length >= total) {
+                problem(SheetColumn.BACK_LENGTH, "the back length " + withUnit(SheetColumn.BACK_LENGTH) + " and the "
+                        + "speaking length " + withUnit(SheetColumn.SPEAKING_LENGTH) + " leave nothing of the stretched "
+                        + "length " + withUnit(SheetColumn.TOTAL_LENGTH) + " (" + header.name(SheetColumn.TOTAL_LENGTH)
+                        + ", hitch pin to tuning pin) for the front length to the tuning pin");
+            }
             if (problems.size() > before) {
                 return null;
             }
@@ -176,7 +183,7 @@ public final class ScaleSheetReader {
             try {
                 return new Note(key, strings, length, wire, wrap, opt(pitchHz), cents == null ? 0 : cents,
                         opt(strike), opt(total), opt(winding), text(SheetColumn.SECTION), text(SheetColumn.REMARK),
-                        opt(front), opt(back));
+                        opt(front), opt(back), opt(backLength));
             } catch (IllegalArgumentException e) {
                 problem("", e.getMessage());
                 return null;
@@ -363,6 +370,11 @@ public final class ScaleSheetReader {
 
         private static OptionalDouble opt(Double v) {
             return v == null ? OptionalDouble.empty() : OptionalDouble.of(v);
+        }
+
+        /** @return a length cell as typed with its unit: {@code 700 mm} */
+        private String withUnit(SheetColumn c) {
+            return cell(c) + " " + unitOf(c);
         }
 
         private String cell(SheetColumn c) {

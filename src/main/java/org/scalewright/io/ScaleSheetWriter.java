@@ -112,6 +112,7 @@ public final class ScaleSheetWriter {
             l = n.woundLength().isPresent() ? l.with(SheetColumn.WINDING_LENGTH) : l;
             l = n.bareFront().isPresent() ? l.with(SheetColumn.BARE_FRONT) : l;
             l = n.bareBack().isPresent() ? l.with(SheetColumn.BARE_BACK) : l;
+            l = n.backLength().isPresent() ? l.with(SheetColumn.BACK_LENGTH) : l;
             l = n.section().isEmpty() ? l : l.with(SheetColumn.SECTION);
             l = n.remark().isEmpty() ? l : l.with(SheetColumn.REMARK);
         }
@@ -138,6 +139,7 @@ public final class ScaleSheetWriter {
             case WINDING_LENGTH -> optionalLength(n.woundLength(), c, layout);
             case BARE_FRONT -> optionalLength(n.bareFront(), c, layout);
             case BARE_BACK -> optionalLength(n.bareBack(), c, layout);
+            case BACK_LENGTH -> optionalLength(n.backLength(), c, layout);
             case SECTION -> CsvCells.safeText(oneLine(n.section()));
             case REMARK -> CsvCells.safeText(oneLine(n.remark()));
         };

@@ -21,11 +21,15 @@ import java.util.function.Consumer;
  * @param remark         free text ("" when none)
  * @param bareFront      bare core at the front end inside the speaking length, m, or empty
  * @param bareBack       bare core at the back end inside the speaking length, m, or empty
+ * @param backLength     back length, from the back termination of the speaking length (bridge pin)
+ *                       to the hitch pin, m, &gt; 0, or empty; with the stretched length, shorter
+ *                       than stretched less speaking length
  */
 public record Note(int key, int strings, double speakingLength, CoreWire wire, Wrap wrap,
                    OptionalDouble pitchHz, double cents, OptionalDouble strikePoint,
                    OptionalDouble stretchedLength, OptionalDouble woundLength,
-                   String section, String remark, OptionalDouble bareFront, OptionalDouble bareBack) {
+                   String section, String remark, OptionalDouble bareFront, OptionalDouble bareBack,
+                   OptionalDouble backLength) {
 
     /**
      * How far the wound length and the two bare ends may fall from the speaking length, m
@@ -43,12 +47,21 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         }
     }
 
-    /** A note without bare ends given. */
+    /** A note without a back length given. */
+    public Note(int key, int strings, double speakingLength, CoreWire wire, Wrap wrap,
+                OptionalDouble pitchHz, double cents, OptionalDouble strikePoint,
+                OptionalDouble stretchedLength, OptionalDouble woundLength, String section, String remark,
+                OptionalDouble bareFront, OptionalDouble bareBack) {
+        this(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint, stretchedLength, woundLength,
+                section, remark, bareFront, bareBack, OptionalDouble.empty());
+    }
+
+    /** A note without bare ends or back length given. */
     public Note(int key, int strings, double speakingLength, CoreWire wire, Wrap wrap,
                 OptionalDouble pitchHz, double cents, OptionalDouble strikePoint,
                 OptionalDouble stretchedLength, OptionalDouble woundLength, String section, String remark) {
         this(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint, stretchedLength, woundLength,
-                section, remark, OptionalDouble.empty(), OptionalDouble.empty());
+                section, remark, OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
     }
 
     public Note {
@@ -72,6 +85,15 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         bareBack = orEmpty(bareBack);
         bareFront.ifPresent(v -> Checks.nonNegative("bare core at the front", v, "mm", 1e3));
         bareBack.ifPresent(v -> Checks.nonNegative("bare core at the back", v, "mm", 1e3));
+        backLength = orEmpty(backLength);
+        backLength.ifPresent(v -> Checks.positive("back length", v, "mm", 1e3));
+        if (backLength.isPresent() && stretchedLength.isPresent()
+                && backLength.getAsDouble() + speakingLength >= stretchedLength.getAsDouble()) {
+            throw new IllegalArgumentException("key " + key + ": back length " + Checks.format(backLength.getAsDouble()
+                    * 1e3) + " mm + speaking length " + Checks.format(speakingLength * 1e3) + " mm leave nothing of "
+                    + "the stretched length " + Checks.format(stretchedLength.getAsDouble() * 1e3) + " mm (hitch pin "
+                    + "to tuning pin) for the front length to the tuning pin");
+        }
         if (wrap == null && (bareFront.isPresent() || bareBack.isPresent())) {
             throw new IllegalArgumentException("key " + key + ": bare core at the ends belongs to a wound string");
         }
@@ -227,6 +249,7 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         private String remark;
         private OptionalDouble bareFront;
         private OptionalDouble bareBack;
+        private final OptionalDouble backLength;
 
         Edit(Note n) {
             key = n.key;
@@ -243,11 +266,12 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
             remark = n.remark;
             bareFront = n.bareFront;
             bareBack = n.bareBack;
+            backLength = n.backLength;
         }
 
         Note note() {
             return new Note(key, strings, speakingLength, wire, wrap, pitchHz, cents, strikePoint,
-                    stretchedLength, woundLength, section, remark, bareFront, bareBack);
+                    stretchedLength, woundLength, section, remark, bareFront, bareBack, backLength);
         }
     }
 }

@@ -26,6 +26,8 @@ public enum SheetColumn {
     BARE_FRONT("bare_front", true),
     /** Bare core at the back end inside the speaking length. */
     BARE_BACK("bare_back", true),
+    /** Back length, bridge pin to hitch pin: where the winding starts, measured from the hitch. */
+    BACK_LENGTH("back", true),
     SECTION("section", false),
     REMARK("remark", false);
 
@@ -42,7 +44,7 @@ public enum SheetColumn {
      *         entry, or a detail): left out of the layout of a scale that has none yet
      */
     public boolean onlyWhereNeeded() {
-        return this == OD || this == OD1 || this == BARE_FRONT || this == BARE_BACK;
+        return this == OD || this == OD1 || this == BARE_FRONT || this == BARE_BACK || this == BACK_LENGTH;
     }
 
     /** @return the column name without unit suffix */

@@ -189,7 +189,8 @@ public final class PdfReportWriter {
                 + "times as its count: " + r.woundOrder().totalStrings() + " wound strings on " + r.woundOrder().notes()
                 + " notes in " + r.woundOrder().rows().size() + " designs. "
                 + (imp ? "Inches, with millimetres in brackets." : "Millimetres.")
-                + " Core with its music-wire size; OD = outside diameter over the winding.");
+                + " Core with its music-wire size; OD = outside diameter over the winding; ≈ marks a winding start "
+                + "estimated from the stretched length, to be checked on the instrument.");
         // the cells are the CSV's own, so the page and wound-order.csv print the same figures
         CsvSheet sheet = WoundOrderCsv.sheet(r.woundOrder(), r.units(), List.of());
         List<String> h = sheet.header();
@@ -207,7 +208,10 @@ public final class PdfReportWriter {
             c.add(both(row, h, "wrap2", imp));
             c.add(row.get(h.indexOf("wrap_metal")));
             for (String q : lengths) {
-                c.add(both(row, h, q, imp));
+                String cell = both(row, h, q, imp);
+                boolean estimate = q.equals("winding_start_from_hitch") && !cell.isEmpty()
+                        && row.get(h.indexOf("winding_start_by")).equals("estimate");
+                c.add(estimate ? "≈" + cell : cell);
             }
             c.add(row.get(h.indexOf("bare_ends")));
             rows.add(c);

@@ -26,7 +26,9 @@ public final class WoundOrderCsv {
         h.addAll(List.of("wrap_metal", "winding"));
         h.addAll(Cells.lengthHeaders(units, "od", "speaking_length", "wound_length", "bare_front", "bare_back"));
         h.add("bare_ends");
-        h.addAll(Cells.lengthHeaders(units, "winding_start_from_hitch", "stretched_length"));
+        h.addAll(Cells.lengthHeader("winding_start_from_hitch", units));
+        h.add("winding_start_by");
+        h.addAll(Cells.lengthHeader("stretched_length", units));
         List<List<String>> rows = new ArrayList<>();
         for (WoundOrderRow r : order.rows()) {
             List<String> c = new ArrayList<>(List.of(join(r.keys().stream().map(String::valueOf).toList()),
@@ -43,6 +45,7 @@ public final class WoundOrderCsv {
             }
             c.add(r.bareEnds().word());
             Cells.length(c, r.windingStart(), imp);
+            c.add(r.windingStartFrom().word());
             Cells.length(c, r.stretchedLength(), imp);
             rows.add(c);
         }
@@ -62,9 +65,10 @@ public final class WoundOrderCsv {
                 "bare_front / bare_back: bare core inside the speaking length at the front (tuning-pin side) and the "
                         + "back (bridge side) end; 'split equally' where only the wound length was given, the bare "
                         + "core split equally between the two ends; 'none given': the winding fills the speaking length",
-                "winding_start_from_hitch = back length + bare_back; the back length is taken as half of stretched "
-                        + "less speaking length (the sheet does not divide them): check on the instrument; blank "
-                        + "where the stretched length is not given",
+                "winding_start_from_hitch = back length (bridge pin to hitch pin) + bare_back; winding_start_by "
+                        + "'back length' where the sheet gives the back length, 'estimate' where it gives only the "
+                        + "stretched length and the back length is taken as half of stretched less speaking length: "
+                        + "check an estimate on the instrument; blank where neither is given",
                 "stretched length = hitch pin to tuning pin");
     }
 

@@ -174,6 +174,26 @@ class MeasuredWindingSheetTest {
         refused(head + "10,2,1500,1.3,1.05,,-1,700\n", 2, "bare_front_mm", "must be 0 or more");
     }
 
+    @Test
+    @DisplayName("a back length is read, kept through a write in its own unit, and refused where it leaves no front length")
+    void backLength() throws Exception {
+        String text = "key,strings,length_in,wire,wrap1_in,total_in,back_in\n1,1,76,17,0.04,84,3.5\n40,3,27.5,15,,31,\n";
+        Scale s = read(text);
+        assertEquals(3.5 * 0.0254, s.notes().get(0).backLength().getAsDouble(), 1e-12);
+        assertTrue(s.notes().get(1).backLength().isEmpty());
+        String written = ScaleSheetWriter.toText(s);
+        assertEquals(cells(text), cells(written), written);
+        assertEquals(s.notes(), ScaleSheetReader.standard().read(file("again.csv", written)).notes());
+        // a sheet without the column is written without it
+        assertFalse(ScaleSheetWriter.toText(read("key,strings,length_mm,wire\n40,3,700,15\n")).contains("back"));
+        String head = "key,strings,length_mm,wire_mm,wrap1_mm,total_mm,back_mm\n";
+        read(head + "10,2,1500,1.3,1.05,1700,199.9\n");
+        refused(head + "10,2,1500,1.3,1.05,1700,200\n", 2, "back_mm",
+                "the back length 200 mm and the speaking length 1500 mm leave nothing of the stretched length 1700 mm");
+        refused(head + "10,2,1500,1.3,1.05,1700,0\n", 2, "back_mm", "must be greater than 0");
+        refused(head + "10,2,1500,1.3,1.05,1700,-5\n", 2, "back_mm", "must be greater than 0");
+    }
+
     private static final String MIXED = """
             # title: measured bass
             # a4_hz: 440

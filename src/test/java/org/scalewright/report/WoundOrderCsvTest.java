@@ -59,7 +59,8 @@ class WoundOrderCsvTest {
         List<String[]> rows = csv(scale(List.of(doubleByOd(), singleBare(2, 0.9))));
         assertEquals(List.of("keys", "notes", "count", "core_mm", "core_size", "wrap1_mm", "wrap2_mm", "wrap_metal",
                 "winding", "od_mm", "speaking_length_mm", "wound_length_mm", "bare_front_mm", "bare_back_mm",
-                "bare_ends", "winding_start_from_hitch_mm", "stretched_length_mm"), Arrays.asList(rows.get(0)));
+                "bare_ends", "winding_start_from_hitch_mm", "winding_start_by", "stretched_length_mm"),
+                Arrays.asList(rows.get(0)));
         assertEquals(3, rows.size());
         // hand-worked, key 1 (A0): core 1.5, OD1 3.9, OD 5.9 → wrap1 (3.9 − 1.5)/2 = 1.2, wrap2 (5.9 − 3.9)/2 = 1.0;
         // OD as given 5.9; winding 1340 of 1400 → 60 mm bare, split equally 30 + 30;
@@ -79,6 +80,7 @@ class WoundOrderCsvTest {
         assertEquals("30", cell(rows, 1, "bare_back_mm"));
         assertEquals("split equally", cell(rows, 1, "bare_ends"));
         assertEquals("130", cell(rows, 1, "winding_start_from_hitch_mm"));
+        assertEquals("estimate", cell(rows, 1, "winding_start_by"));
         assertEquals("1600", cell(rows, 1, "stretched_length_mm"));
         // hand-worked, key 2 (A#0): core #15 1.3, wrap 0.9 → OD 1.3 + 2 × 0.9 = 3.1; bare 20 + 35 given,
         // wound 1300 − 20 − 35 = 1245; no stretched length → no winding start; two strings → count 2
@@ -96,7 +98,28 @@ class WoundOrderCsvTest {
         assertEquals("35", cell(rows, 2, "bare_back_mm"));
         assertEquals("given", cell(rows, 2, "bare_ends"));
         assertEquals("", cell(rows, 2, "winding_start_from_hitch_mm"));
+        assertEquals("", cell(rows, 2, "winding_start_by"));
         assertEquals("", cell(rows, 2, "stretched_length_mm"));
+    }
+
+    @Test
+    void aBackLengthOnTheSheetGivesTheWindingStartExactly() throws Exception {
+        // key 3: speaking 1300, stretched 1500, back length 120 given, bare core 20 front and 35 back;
+        // hand-worked: the winding starts 120 + 35 = 155 mm from the hitch pin (the estimate would
+        // have taken the back length as (1500 − 1300)/2 = 100, so 135)
+        Note withBack = new Note(3, 2, 1.3, CoreWire.ofSize(15, 1.3e-3), Wrap.single(0.9e-3, WrapMetal.COPPER), NONE,
+                0, NONE, mm(1500), NONE, "", "", mm(20), mm(35), mm(120));
+        List<String[]> rows = csv(scale(List.of(doubleByOd(), withBack)));
+        assertEquals("155", cell(rows, 2, "winding_start_from_hitch_mm"));
+        assertEquals("back length", cell(rows, 2, "winding_start_by"));
+        assertEquals("130", cell(rows, 1, "winding_start_from_hitch_mm"));
+        assertEquals("estimate", cell(rows, 1, "winding_start_by"));
+        ReportContent c = ReportFixtures.content(scale(List.of(withBack)), ReportUnits.METRIC);
+        byte[] bytes = ReportPackage.files(c, ReportFixtures.charts()).content(ReportPackage.PDF);
+        try (PDDocument doc = Loader.loadPDF(bytes)) {
+            String all = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(all.contains("20.0 35.0 155.0 1500.0 given"), all);
+        }
     }
 
     @Test
@@ -134,7 +157,9 @@ class WoundOrderCsvTest {
                 assertTrue(page.contains(s), "'" + s + "' missing: " + page);
             }
             // key 1: OD 5.9, 1400 speaking, 1340 wound, 30 and 30 bare, start 130, 1600 stretched (hand-worked above)
-            assertTrue(page.contains("1 A0 1 1.500 1.200 1.000 copper 5.900 1400.0 1340.0 30.0 30.0 130.0 1600.0 split equally"), page);
+            // the start of key 1 is estimated from its stretched length, and marked so
+            assertTrue(page.contains("1 A0 1 1.500 1.200 1.000 copper 5.900 1400.0 1340.0 30.0 30.0 ≈130.0 1600.0 split equally"), page);
+            assertTrue(page.contains("≈ marks a winding start estimated from the stretched length"), page);
             // key 2: #15 core, OD 3.1, wound 1245, bare 20 and 35, no start or stretched length
             assertTrue(page.contains("2 A#0 2 1.300 #15 0.900 copper 3.100 1300.0 1245.0 20.0 35.0 given"), page);
         }

@@ -50,7 +50,8 @@ public record WoundOrder(List<WoundOrderRow> rows) {
             rows.add(new WoundOrderRow(keys, keys.stream().map(names::get).toList(),
                     g.stream().mapToInt(Note::strings).sum(), one.coreDiameter(), one.coreSize(), one.wrapInner(),
                     one.wrapOuter(), one.metal(), one.outsideDiameter(), one.speakingLength(), one.woundLength(),
-                    one.bareFront(), one.bareBack(), one.bareEnds(), one.stretchedLength(), one.windingStart()));
+                    one.bareFront(), one.bareBack(), one.bareEnds(), one.stretchedLength(), one.windingStart(),
+                    one.windingStartFrom()));
         }
         return new WoundOrder(rows);
     }
@@ -70,22 +71,29 @@ public record WoundOrder(List<WoundOrderRow> rows) {
         return new WoundOrderRow(List.of(n.key()), noteName, n.strings(), n.wire().diameter(),
                 n.wire().musicWireSize(), n.wrap().inner(), n.wrap().outer(), n.wrap().metal(),
                 n.outsideDiameter(), n.speakingLength(), wound, bare.front(), bare.back(), from,
-                n.stretchedLength(), windingStart(n.stretchedLength(), n.speakingLength(), bare.back()));
+                n.stretchedLength(), windingStart(n, bare.back()), n.backLength().isPresent()
+                        ? WoundOrderRow.WindingStartFrom.BACK_LENGTH : WoundOrderRow.WindingStartFrom.ESTIMATE);
     }
 
     /**
      * Where the winding starts, measured from the hitch pin: the back length (hitch pin to the
-     * bridge) plus the bare core at the back end. The sheet gives the stretched length but not how
-     * it divides between the front and the back length, so the back length is taken as half of
-     * stretched less speaking length — to be checked on the instrument before winding.
+     * bridge pin) plus the bare core at the back end. The back length is the sheet's where it gives
+     * one; else, with the stretched length, it is taken as half of stretched less speaking length
+     * (the sheet does not say how the rest divides between the front and the back) — an estimate
+     * to be checked on the instrument before winding.
      *
-     * @return the distance, m; empty where the stretched length is not known
+     * @param n        a note
+     * @param bareBack bare core at the back end inside the speaking length, m, &ge; 0
+     * @return the distance, m; empty where neither the back nor the stretched length is known
      */
-    public static OptionalDouble windingStart(OptionalDouble stretched, double speaking, double bareBack) {
-        if (stretched.isEmpty()) {
+    public static OptionalDouble windingStart(Note n, double bareBack) {
+        if (n.backLength().isPresent()) {
+            return OptionalDouble.of(n.backLength().getAsDouble() + bareBack);
+        }
+        if (n.stretchedLength().isEmpty()) {
             return OptionalDouble.empty();
         }
-        double back = Math.max(0, stretched.getAsDouble() - speaking) / 2;
+        double back = Math.max(0, n.stretchedLength().getAsDouble() - n.speakingLength()) / 2;
         return OptionalDouble.of(back + bareBack);
     }
 
@@ -96,7 +104,7 @@ public record WoundOrder(List<WoundOrderRow> rows) {
                 len(r.bareBack()), r.bareEnds().name(), r.coreSize().isPresent() ? NumberText.plain(
                         r.coreSize().getAsDouble()) : "", r.stretchedLength().isPresent()
                         ? len(r.stretchedLength().getAsDouble()) : "", r.windingStart().isPresent()
-                        ? len(r.windingStart().getAsDouble()) : "");
+                        ? len(r.windingStart().getAsDouble()) : "", r.windingStartFrom().name());
     }
 
     private static String d(double metres) {

@@ -26,13 +26,37 @@ import org.scalewright.model.WrapMetal;
  * @param bareEnds         how the bare ends were found
  * @param stretchedLength  stretched length hitch pin to tuning pin, m, where the sheet gives it
  * @param windingStart     where the winding starts measured from the hitch pin, m: back length + bare
- *                         back, where the stretched length is known (see {@link WoundOrder#windingStart})
+ *                         back, where the back length or the stretched length is known (see
+ *                         {@link WoundOrder#windingStart})
+ * @param windingStartFrom how the winding start was found
  */
 public record WoundOrderRow(List<Integer> keys, List<String> noteNames, int count,
                             double coreDiameter, OptionalDouble coreSize, double wrapInner, double wrapOuter,
                             WrapMetal metal, double outsideDiameter, double speakingLength, double woundLength,
                             double bareFront, double bareBack, BareEndsFrom bareEnds,
-                            OptionalDouble stretchedLength, OptionalDouble windingStart) {
+                            OptionalDouble stretchedLength, OptionalDouble windingStart,
+                            WindingStartFrom windingStartFrom) {
+
+    /** How a row's winding start was found. */
+    public enum WindingStartFrom {
+        /** from the back length the sheet gives */
+        BACK_LENGTH("back length"),
+        /** the back length taken as half of stretched less speaking length: to be checked */
+        ESTIMATE("estimate"),
+        /** neither back nor stretched length given: no winding start */
+        UNKNOWN("");
+
+        private final String word;
+
+        WindingStartFrom(String word) {
+            this.word = word;
+        }
+
+        /** @return the word written in the order; blank where there is no winding start */
+        public String word() {
+            return word;
+        }
+    }
 
     /** Where a row's bare ends come from. */
     public enum BareEndsFrom {
@@ -61,6 +85,9 @@ public record WoundOrderRow(List<Integer> keys, List<String> noteNames, int coun
         coreSize = coreSize == null ? OptionalDouble.empty() : coreSize;
         stretchedLength = stretchedLength == null ? OptionalDouble.empty() : stretchedLength;
         windingStart = windingStart == null ? OptionalDouble.empty() : windingStart;
+        windingStartFrom = windingStart.isEmpty() ? WindingStartFrom.UNKNOWN
+                : windingStartFrom == null || windingStartFrom == WindingStartFrom.UNKNOWN ? WindingStartFrom.ESTIMATE
+                : windingStartFrom;
         if (keys.isEmpty() || keys.size() != noteNames.size()) {
             throw new IllegalArgumentException("a wound-order row needs one note name per key, keys " + keys);
         }
