@@ -107,6 +107,14 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
             throw new IllegalArgumentException(windingMismatch(key, speakingLength, woundLength.getAsDouble(),
                     bareFront.getAsDouble(), bareBack.getAsDouble()));
         }
+        if (woundLength.isPresent() && bareFront.isPresent() != bareBack.isPresent()) {
+            boolean front = bareFront.isPresent();
+            double end = front ? bareFront.getAsDouble() : bareBack.getAsDouble();
+            if (woundLength.getAsDouble() + end > speakingLength + WINDING_TOLERANCE) {
+                throw new IllegalArgumentException(windingTooLong(key, speakingLength, woundLength.getAsDouble(),
+                        end, front));
+            }
+        }
         if (wrap != null && wrap.givenByOd()) {
             double d = wire.diameter();
             if (Math.abs(d + 2 * wrap.inner() + 2 * wrap.outer() - wrap.od()) > 1e-9
@@ -135,6 +143,13 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
                 + Checks.format((wound + front + back) * 1e3) + " mm, but the speaking length is "
                 + Checks.format(length * 1e3) + " mm (they must agree within "
                 + Checks.format(WINDING_TOLERANCE * 1e3) + " mm)";
+    }
+
+    /** @return the message for a wound length and one bare end that are longer than the speaking length */
+    public static String windingTooLong(int key, double length, double wound, double end, boolean front) {
+        return "key " + key + ": winding " + Checks.format(wound * 1e3) + " mm and " + Checks.format(end * 1e3)
+                + " mm of bare core at the " + (front ? "front" : "back") + " are longer than the speaking length "
+                + Checks.format(length * 1e3) + " mm";
     }
 
     /**
@@ -219,6 +234,35 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         return edited(e -> e.remark = newRemark);
     }
 
+    /** @param newStrikePoint strike point from the front termination, m, or empty */
+    public Note withStrikePoint(OptionalDouble newStrikePoint) {
+        return edited(e -> e.strikePoint = newStrikePoint);
+    }
+
+    /** @param newStretchedLength stretched length hitch pin to tuning pin, m, or empty */
+    public Note withStretchedLength(OptionalDouble newStretchedLength) {
+        return edited(e -> e.stretchedLength = newStretchedLength);
+    }
+
+    /** @param newBackLength back length bridge pin to hitch pin, m, or empty */
+    public Note withBackLength(OptionalDouble newBackLength) {
+        return edited(e -> e.backLength = newBackLength);
+    }
+
+    /**
+     * @param newWoundLength wound length inside the speaking length, m, or empty
+     * @param newBareFront   bare core at the front end, m, or empty
+     * @param newBareBack    bare core at the back end, m, or empty
+     * @return this note with another winding; checked together, as the three must agree
+     */
+    public Note withWinding(OptionalDouble newWoundLength, OptionalDouble newBareFront, OptionalDouble newBareBack) {
+        return edited(e -> {
+            e.woundLength = newWoundLength;
+            e.bareFront = newBareFront;
+            e.bareBack = newBareBack;
+        });
+    }
+
     public Note withPitch(OptionalDouble newPitchHz, double newCents) {
         return edited(e -> {
             e.pitchHz = newPitchHz;
@@ -242,14 +286,14 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         private Wrap wrap;
         private OptionalDouble pitchHz;
         private double cents;
-        private final OptionalDouble strikePoint;
-        private final OptionalDouble stretchedLength;
-        private final OptionalDouble woundLength;
+        private OptionalDouble strikePoint;
+        private OptionalDouble stretchedLength;
+        private OptionalDouble woundLength;
         private String section;
         private String remark;
         private OptionalDouble bareFront;
         private OptionalDouble bareBack;
-        private final OptionalDouble backLength;
+        private OptionalDouble backLength;
 
         Edit(Note n) {
             key = n.key;

@@ -115,6 +115,16 @@ class ScreenFitWindowTest {
         robot.interact(() -> view.table().node().scrollToColumn(view.table().tableColumn(NoteColumn.HEADROOM)));
         look(robot, "imperial-table", clipped);
 
+        // the lengths measured for the string maker, shown from the column chooser
+        robot.interact(() -> {
+            for (NoteColumn c : List.of(NoteColumn.STRETCHED, NoteColumn.BACK, NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+                    NoteColumn.BARE_BACK, NoteColumn.STRIKE)) {
+                view.table().tableColumn(c).setVisible(true);
+            }
+            view.table().node().scrollToColumn(view.table().tableColumn(NoteColumn.METAL));
+        });
+        look(robot, "measured-lengths", clipped);
+
         assertEquals(List.of(), clipped, "cut short or illegible at " + WIDTH + "×" + HEIGHT);
     }
 

@@ -24,6 +24,12 @@ public enum NoteColumn {
     OD("OD", Group.SPEC),
     OD1("OD1", Group.SPEC),
     METAL("wrap metal", Group.SPEC),
+    STRETCHED("stretched", Group.SPEC),
+    BACK("back", Group.SPEC),
+    WOUND("wound", Group.SPEC),
+    BARE_FRONT("bare front", Group.SPEC),
+    BARE_BACK("bare back", Group.SPEC),
+    STRIKE("strike", Group.SPEC),
     PITCH("pitch", Group.COMPUTED),
     TENSION("T/string", Group.COMPUTED),
     NOTE_TENSION("T/note", Group.COMPUTED),
@@ -57,6 +63,12 @@ public enum NoteColumn {
             case LENGTH -> "speaking length";
             case OD -> "outside diameter";
             case OD1 -> "diameter over the first layer";
+            case STRETCHED -> "stretched length";
+            case BACK -> "back length";
+            case WOUND -> "wound length";
+            case BARE_FRONT -> "bare core at the front";
+            case BARE_BACK -> "bare core at the back";
+            case STRIKE -> "strike point";
             default -> name;
         };
     }
@@ -90,6 +102,7 @@ public enum NoteColumn {
             case OD -> "OD\n" + u.length().symbol();
             case OD1 -> "OD1\n" + u.length().symbol();
             case METAL -> "wrap\nmetal";
+            case STRETCHED, BACK, WOUND, BARE_FRONT, BARE_BACK, STRIKE -> name + "\n" + u.length().symbol();
             case PITCH -> "pitch\nHz";
             case TENSION -> "T/string\n" + u.force().symbol();
             case NOTE_TENSION -> "T/note\n" + u.force().symbol();
@@ -136,6 +149,15 @@ public enum NoteColumn {
             case OD1 -> "diameter over the first layer of a double-wound string; entering it works out both wraps "
                     + "from the core and the OD";
             case METAL -> "wrap metal: copper, iron or steel";
+            case STRETCHED -> "stretched length, hitch pin to tuning pin; used for the elongation of a pitch raise";
+            case BACK -> "back length, bridge pin to hitch pin; makes the wound-string order's winding start exact";
+            case WOUND -> "wound length inside the speaking length, for the wound-string order; with both bare ends "
+                    + "given, a new wound length changes the bare core at the back";
+            case BARE_FRONT -> "bare core of a wound string between the front termination and the winding; with "
+                    + "the wound length and the other end given, the wound length follows";
+            case BARE_BACK -> "bare core of a wound string between the winding and the bridge pin; with the wound "
+                    + "length and the other end given, the wound length follows";
+            case STRIKE -> "strike point, from the front termination";
             case PITCH -> "working pitch";
             case TENSION -> "tension per string";
             case NOTE_TENSION -> "tension of all strings of the note";
@@ -170,6 +192,12 @@ public enum NoteColumn {
             case OD1 -> n.isWound() && n.wrap().isDouble()
                     ? DisplayFormat.diameter(n.wrap().firstLayerDiameter(n.wire().diameter()), u) : "";
             case METAL -> n.isWound() ? n.wrap().metal().sheetName() : "";
+            case STRETCHED -> optionalLength(n.stretchedLength(), u);
+            case BACK -> optionalLength(n.backLength(), u);
+            case WOUND -> optionalLength(n.woundLength(), u);
+            case BARE_FRONT -> optionalLength(n.bareFront(), u);
+            case BARE_BACK -> optionalLength(n.bareBack(), u);
+            case STRIKE -> optionalLength(n.strikePoint(), u);
             case PITCH -> DisplayFormat.fixed(r.frequency(), 2);
             case TENSION -> DisplayFormat.force(r.tension(), u);
             case NOTE_TENSION -> DisplayFormat.force(r.noteTension(), u);
@@ -184,6 +212,10 @@ public enum NoteColumn {
                     100 * (r.inharmonicity() / ref.inharmonicity() - 1));
             case REMARK -> n.remark();
         };
+    }
+
+    private static String optionalLength(java.util.OptionalDouble metres, DisplayUnits u) {
+        return metres.isPresent() ? DisplayFormat.length(metres.getAsDouble(), u) : "";
     }
 
     /** @return the hover text of a row's flags, one per line, or "" */

@@ -2,6 +2,7 @@ package org.scalewright.app.table;
 
 import java.util.Locale;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.TypedEntry;
 import org.scalewright.model.CoreWire;
@@ -48,6 +49,12 @@ final class NoteEdits {
             case OD -> od(note, t, units);
             case OD1 -> od1(note, t, units);
             case METAL -> metal(note, t);
+            case STRETCHED -> note.withStretchedLength(optional("stretched length", t, units));
+            case BACK -> note.withBackLength(optional("back length", t, units));
+            case STRIKE -> note.withStrikePoint(optional("strike point", t, units));
+            case WOUND -> wound(note, t, units);
+            case BARE_FRONT -> bareEnd(note, true, t, units);
+            case BARE_BACK -> bareEnd(note, false, t, units);
             default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
         };
     }
@@ -162,6 +169,53 @@ final class NoteEdits {
                     + " must lie between the core, " + shown(core, units) + ", and the OD, " + shown(od, units));
         }
         return note.withWrap(Wrap.fromOd(core, od1, od, old.metal()));
+    }
+
+    /**
+     * The wound length. With both bare ends given the three must make the speaking length, so the
+     * bare core at the back takes what the new winding and the front leave.
+     */
+    private static Note wound(Note note, String t, DisplayUnits units) {
+        OptionalDouble wound = optional("wound length", t, units);
+        OptionalDouble back = note.bareBack();
+        if (wound.isPresent() && note.bareFront().isPresent() && back.isPresent()) {
+            double front = note.bareFront().getAsDouble();
+            double left = note.speakingLength() - wound.getAsDouble() - front;
+            if (left < 0) {
+                throw new IllegalArgumentException(Note.windingTooLong(note.key(), note.speakingLength(),
+                        wound.getAsDouble(), front, true).replaceFirst("^key \\d+: ", ""));
+            }
+            back = OptionalDouble.of(left);
+        }
+        return note.withWinding(wound, note.bareFront(), back);
+    }
+
+    /**
+     * The bare core at one end (0 or more). With the wound length and the other end given, the
+     * wound length follows, so that the three still make the speaking length.
+     */
+    private static Note bareEnd(Note note, boolean front, String t, DisplayUnits units) {
+        OptionalDouble end = OptionalDouble.empty();
+        if (!t.isEmpty()) {
+            Quantity q = quantity(t, units);
+            LengthUnit unit = q.unit().orElse(units.length());
+            if (!(q.value() >= 0)) {
+                throw new IllegalArgumentException("bare core must be 0 or more " + unit.symbol() + ", was "
+                        + DisplayFormat.decimals(q.value(), 0, 4));
+            }
+            end = OptionalDouble.of(unit.toMetres(q.value()));
+        }
+        OptionalDouble bareFront = front ? end : note.bareFront();
+        OptionalDouble bareBack = front ? note.bareBack() : end;
+        OptionalDouble wound = note.woundLength();
+        if (wound.isPresent() && bareFront.isPresent() && bareBack.isPresent()) {
+            wound = OptionalDouble.of(note.speakingLength() - bareFront.getAsDouble() - bareBack.getAsDouble());
+        }
+        return note.withWinding(wound, bareFront, bareBack);
+    }
+
+    private static OptionalDouble optional(String what, String t, DisplayUnits units) {
+        return t.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(length(what, t, units));
     }
 
     private static String shown(double metres, DisplayUnits units) {

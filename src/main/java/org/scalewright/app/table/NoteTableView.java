@@ -55,8 +55,12 @@ public final class NoteTableView {
                 columns.get(c).visibleProperty().bind(model.showDifferencesProperty());
             }
         }
-        // the remark is shown from the table's column menu (the + at the top right)
-        columns.get(NoteColumn.REMARK).setVisible(false);
+        // the remark and the lengths measured for the string maker are shown from the table's
+        // column menu (the + at the top right)
+        for (NoteColumn c : List.of(NoteColumn.REMARK, NoteColumn.STRETCHED, NoteColumn.BACK, NoteColumn.WOUND,
+                NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK, NoteColumn.STRIKE)) {
+            columns.get(c).setVisible(false);
+        }
         table.setRowFactory(t -> new FlaggedRow());
         table.addEventFilter(KeyEvent.KEY_PRESSED, this::onKeyPressed);
         table.addEventHandler(KeyEvent.KEY_TYPED, this::onKeyTyped);
@@ -129,6 +133,7 @@ public final class NoteTableView {
             case WIRE -> 62;
             case WRAP1, WRAP2, OD, OD1 -> 48;
             case METAL -> 54;
+            case STRETCHED, BACK, WOUND, BARE_FRONT, BARE_BACK, STRIKE -> 60;
             case TENSION, NOTE_TENSION -> 58;
             case STRESS, BREAK_PCT -> 50;
             case INHARMONICITY -> 62;
