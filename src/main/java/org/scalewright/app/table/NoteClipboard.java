@@ -1,9 +1,12 @@
 package org.scalewright.app.table;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.regex.Pattern;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.io.BadInputException;
@@ -21,6 +24,10 @@ import org.scalewright.model.Scale;
  * told with its row and column and nothing changes.
  */
 public final class NoteClipboard {
+    /** The columns of a wound string's winding, taken together from a pasted row. */
+    private static final Set<NoteColumn> WINDING = EnumSet.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+            NoteColumn.BARE_BACK);
+
     private static final Pattern NUMBER = Pattern.compile("[+-]?\\d+\\.\\d+");
 
     private final ScaleSession session;
@@ -108,6 +115,8 @@ public final class NoteClipboard {
         for (int r = 0; r < height; r++) {
             NoteRow row = table.rows().get(firstRow + r);
             Note note = changed.getOrDefault(row.key(), row.note());
+            // the wound length and bare ends of a row are taken together, as a sheet's row is
+            Map<NoteColumn, String> winding = new EnumMap<>(NoteColumn.class);
             for (int c = 0; c < width; c++) {
                 NoteColumn col = columns.get(c);
                 String cell = c < block.get(r).size() ? block.get(r).get(c) : "";
@@ -115,6 +124,10 @@ public final class NoteClipboard {
                     session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + col.word()
                             + " is computed from the other columns and cannot be pasted into");
                     return false;
+                }
+                if (WINDING.contains(col)) {
+                    winding.put(col, cell);
+                    continue;
                 }
                 if (cell.equals(table.text(row, col))) {
                     continue;
@@ -124,6 +137,18 @@ public final class NoteClipboard {
                     cells++;
                 } catch (IllegalArgumentException e) {
                     session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + e.getMessage());
+                    return false;
+                }
+            }
+            if (!winding.isEmpty()) {
+                try {
+                    Note wound = edits.winding(note, winding, session.units());
+                    cells += wound.equals(note) ? 0 : 1;
+                    note = wound;
+                } catch (IllegalArgumentException e) {
+                    session.complain("nothing pasted: row " + (r + 1) + " of the block (key " + row.key() + " "
+                            + KeyNames.name(row.key()) + "), wound length and bare ends: "
+                            + e.getMessage().replaceFirst("^key \\d+: ", ""));
                     return false;
                 }
             }

@@ -1,6 +1,7 @@
 package org.scalewright.app.table;
 
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.scalewright.app.session.DisplayFormat;
@@ -52,9 +53,7 @@ final class NoteEdits {
             case STRETCHED -> note.withStretchedLength(optional("stretched length", t, units));
             case BACK -> note.withBackLength(optional("back length", t, units));
             case STRIKE -> note.withStrikePoint(optional("strike point", t, units));
-            case WOUND -> wound(note, t, units);
-            case BARE_FRONT -> bareEnd(note, true, t, units);
-            case BARE_BACK -> bareEnd(note, false, t, units);
+            case WOUND, BARE_FRONT, BARE_BACK -> winding(note, Map.of(column, t), units);
             default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
         };
     }
@@ -172,46 +171,58 @@ final class NoteEdits {
     }
 
     /**
-     * The wound length. With both bare ends given the three must make the speaking length, so the
-     * bare core at the back takes what the new winding and the front leave.
+     * The wound length and the bare core at each end, typed together (a pasted row) or one of
+     * them alone (a cell). The three must make the speaking length (within
+     * {@link Note#WINDING_TOLERANCE}), so where all three end up given and not all were typed,
+     * one follows from the others: the wound length when it was not typed, else the bare core at
+     * the back, else at the front. Three typed at once are taken as typed, and checked.
+     *
+     * @param typed the entries by column: {@link NoteColumn#WOUND}, {@link NoteColumn#BARE_FRONT},
+     *              {@link NoteColumn#BARE_BACK}; blank for none
+     * @throws IllegalArgumentException when an entry is not a length or the three cannot agree
      */
-    private static Note wound(Note note, String t, DisplayUnits units) {
-        OptionalDouble wound = optional("wound length", t, units);
-        OptionalDouble back = note.bareBack();
-        if (wound.isPresent() && note.bareFront().isPresent() && back.isPresent()) {
-            double front = note.bareFront().getAsDouble();
-            double left = note.speakingLength() - wound.getAsDouble() - front;
-            if (left < 0) {
-                throw new IllegalArgumentException(Note.windingTooLong(note.key(), note.speakingLength(),
-                        wound.getAsDouble(), front, true).replaceFirst("^key \\d+: ", ""));
+    Note winding(Note note, Map<NoteColumn, String> typed, DisplayUnits units) {
+        OptionalDouble wound = typed.containsKey(NoteColumn.WOUND)
+                ? optional("wound length", typed.get(NoteColumn.WOUND).trim(), units) : note.woundLength();
+        OptionalDouble front = typed.containsKey(NoteColumn.BARE_FRONT)
+                ? bare(typed.get(NoteColumn.BARE_FRONT).trim(), units) : note.bareFront();
+        OptionalDouble back = typed.containsKey(NoteColumn.BARE_BACK)
+                ? bare(typed.get(NoteColumn.BARE_BACK).trim(), units) : note.bareBack();
+        if (wound.isPresent() && front.isPresent() && back.isPresent() && typed.size() < 3) {
+            double l = note.speakingLength();
+            if (!typed.containsKey(NoteColumn.WOUND)) {
+                wound = OptionalDouble.of(l - front.getAsDouble() - back.getAsDouble());
+            } else if (!typed.containsKey(NoteColumn.BARE_BACK)) {
+                back = OptionalDouble.of(left(note, wound.getAsDouble(), front.getAsDouble(), true));
+            } else {
+                front = OptionalDouble.of(left(note, wound.getAsDouble(), back.getAsDouble(), false));
             }
-            back = OptionalDouble.of(left);
         }
-        return note.withWinding(wound, note.bareFront(), back);
+        return note.withWinding(wound, front, back);
     }
 
-    /**
-     * The bare core at one end (0 or more). With the wound length and the other end given, the
-     * wound length follows, so that the three still make the speaking length.
-     */
-    private static Note bareEnd(Note note, boolean front, String t, DisplayUnits units) {
-        OptionalDouble end = OptionalDouble.empty();
-        if (!t.isEmpty()) {
-            Quantity q = quantity(t, units);
-            LengthUnit unit = q.unit().orElse(units.length());
-            if (!(q.value() >= 0)) {
-                throw new IllegalArgumentException("bare core must be 0 or more " + unit.symbol() + ", was "
-                        + DisplayFormat.decimals(q.value(), 0, 4));
-            }
-            end = OptionalDouble.of(unit.toMetres(q.value()));
+    /** @return the bare core the speaking length leaves at one end beside the winding and the other end, m */
+    private static double left(Note note, double wound, double otherEnd, boolean otherIsFront) {
+        double left = note.speakingLength() - wound - otherEnd;
+        if (left < 0) {
+            throw new IllegalArgumentException(Note.windingTooLong(note.key(), note.speakingLength(), wound, otherEnd,
+                    otherIsFront).replaceFirst("^key \\d+: ", ""));
         }
-        OptionalDouble bareFront = front ? end : note.bareFront();
-        OptionalDouble bareBack = front ? note.bareBack() : end;
-        OptionalDouble wound = note.woundLength();
-        if (wound.isPresent() && bareFront.isPresent() && bareBack.isPresent()) {
-            wound = OptionalDouble.of(note.speakingLength() - bareFront.getAsDouble() - bareBack.getAsDouble());
+        return left;
+    }
+
+    /** @return a bare end typed: 0 or more, blank for none */
+    private static OptionalDouble bare(String t, DisplayUnits units) {
+        if (t.isEmpty()) {
+            return OptionalDouble.empty();
         }
-        return note.withWinding(wound, bareFront, bareBack);
+        Quantity q = quantity(t, units);
+        LengthUnit unit = q.unit().orElse(units.length());
+        if (!(q.value() >= 0)) {
+            throw new IllegalArgumentException("bare core must be 0 or more " + unit.symbol() + ", was "
+                    + DisplayFormat.decimals(q.value(), 0, 4));
+        }
+        return OptionalDouble.of(unit.toMetres(q.value()));
     }
 
     private static OptionalDouble optional(String what, String t, DisplayUnits units) {

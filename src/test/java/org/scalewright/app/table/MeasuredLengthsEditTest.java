@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -103,6 +104,35 @@ class MeasuredLengthsEditTest {
         assertTrue(session.messageProperty().get().contains("strike point must be > 0"),
                 session.messageProperty().get());
         assertSame(before, session.scale());
+    }
+
+    @Test
+    void aPastedWindingAndBareEndsMustMakeTheSpeakingLength() {
+        List<NoteColumn> cols = List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK);
+        int row = table.indexOf(10);
+        assertTrue(table.clipboard().paste(row, cols, "1400\t50\t50\n"));
+        assertEquals(1.400, note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.050, note(10).bareBack().getAsDouble(), 1e-12);
+        // 1399 + 50 + 50.7 = 1499.7 mm, within 0.5 mm as a sheet may be: the wound length stays as pasted
+        assertTrue(table.clipboard().paste(row, cols, "1399\t50\t50.7\n"));
+        assertEquals(1.399, note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.0507, note(10).bareBack().getAsDouble(), 1e-12);
+        // a whole new winding pasted over the old one: taken as it is, whatever the old bare ends were
+        assertTrue(table.clipboard().paste(row, cols, "1470\t15\t15\n"));
+        assertEquals(1.470, note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.015, note(10).bareFront().getAsDouble(), 1e-12);
+        // the wound length alone: the bare core at the back follows
+        assertTrue(table.clipboard().paste(table.indexOf(10), List.of(NoteColumn.WOUND), "1460\n"));
+        assertEquals(0.025, note(10).bareBack().getAsDouble(), 1e-12, "1500 − 1460 − 15");
+        assertTrue(table.clipboard().paste(row, List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK),
+                "1450\t\t20\n"), "a blank front with the wound length and back given");
+        assertTrue(note(10).bareFront().isEmpty());
+        Scale before = session.scale();
+        // 1400 + 50 + 60 = 1510 mm: as a sheet with these cells is refused, so is the paste
+        assertFalse(table.clipboard().paste(row, cols, "1400\t50\t60\n"));
+        assertSame(before, session.scale());
+        assertTrue(session.messageProperty().get().contains("winding 1400 mm + bare core 50 mm (front) + 60 mm (back) "
+                + "= 1510 mm, but the speaking length is 1500 mm"), session.messageProperty().get());
     }
 
     @Test
