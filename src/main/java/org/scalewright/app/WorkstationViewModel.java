@@ -1,5 +1,7 @@
 package org.scalewright.app;
 
+import org.scalewright.app.table.NoteColumn;
+import java.util.Set;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
@@ -85,6 +87,7 @@ public final class WorkstationViewModel {
         this.recent = new RecentFiles(settings);
         restoreSettings();
         this.table = new NoteTableViewModel(session);
+        restoreShownColumns();
         this.curves = new CurvesViewModel(session);
         this.flags = new FlagsViewModel(session);
         this.status = new StatusViewModel(session);
@@ -199,6 +202,25 @@ public final class WorkstationViewModel {
         settings.strength().ifPresent(this::restoreStrength);
         session.unitsProperty().addListener((o, a, b) -> settings.units(b));
         session.strengthProperty().addListener((o, a, b) -> settings.strength(b));
+    }
+
+    /** The note table's columns shown from its column menu, as last time; each choice kept as made. */
+    private void restoreShownColumns() {
+        Set<String> kept = settings.shownColumns();
+        for (NoteColumn c : NoteColumn.values()) {
+            if (c.shownWhenChosen()) {
+                table.shownProperty(c).set(kept.contains(c.settingName()));
+                table.shownProperty(c).addListener((o, a, b) -> {
+                    Set<String> now = new java.util.TreeSet<>(settings.shownColumns());
+                    if (b) {
+                        now.add(c.settingName());
+                    } else {
+                        now.remove(c.settingName());
+                    }
+                    settings.shownColumns(now);
+                });
+            }
+        }
     }
 
     private void restoreStrength(String kept) {

@@ -73,6 +73,22 @@ class DeskHabitsTest {
     }
 
     @Test
+    void columnsShownFromTheColumnMenuAreShownAgainAfterARestart() {
+        WorkstationViewModel first = start();
+        assertFalse(first.table().shownProperty(NoteColumn.BACK).get(), "hidden until chosen");
+        first.table().shownProperty(NoteColumn.BACK).set(true);
+        first.table().shownProperty(NoteColumn.BARE_FRONT).set(true);
+        first.table().shownProperty(NoteColumn.BARE_FRONT).set(false);
+
+        WorkstationViewModel again = start();
+        assertTrue(again.table().shownProperty(NoteColumn.BACK).get());
+        assertFalse(again.table().shownProperty(NoteColumn.BARE_FRONT).get());
+        assertFalse(again.table().shownProperty(NoteColumn.REMARK).get());
+        again.table().shownProperty(NoteColumn.BACK).set(false);
+        assertFalse(start().table().shownProperty(NoteColumn.BACK).get());
+    }
+
+    @Test
     void aMakersTableIsReadAgainAtTheNextStartAndAMissingOneFallsBackToTheMinimum() throws Exception {
         Path table = TestSheets.write(dir, "maker.csv", Files.readString(Path.of("scales", "wire-makers")
                 .resolve(firstMakerTable())));

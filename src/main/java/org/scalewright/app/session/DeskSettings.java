@@ -2,6 +2,8 @@ package org.scalewright.app.session;
 
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
+import java.util.TreeSet;
+import java.util.Set;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
@@ -26,6 +28,7 @@ public final class DeskSettings {
     static final String DIVIDERS = "dividers.";
     static final String LAST_FOLDER = "last-folder";
     static final String RECENT = "recent-files";
+    static final String SHOWN_COLUMNS = "shown-columns";
 
     /** What the strength setting holds for the built-in tables; a maker's table is kept as its path. */
     public static final String STRENGTH_MINIMUM = "astm-a228-minimum";
@@ -104,6 +107,22 @@ public final class DeskSettings {
 
     public void lastFolder(Path folder) {
         store.put(LAST_FOLDER, folder.toAbsolutePath().toString());
+    }
+
+    /** @return the names of the note table's columns shown from its column menu, as kept */
+    public Set<String> shownColumns() {
+        Set<String> out = new TreeSet<>();
+        store.get(SHOWN_COLUMNS).ifPresent(v -> Arrays.stream(v.split(",")).map(String::trim)
+                .filter(n -> !n.isEmpty()).forEach(out::add));
+        return out;
+    }
+
+    public void shownColumns(Set<String> names) {
+        if (names.isEmpty()) {
+            store.remove(SHOWN_COLUMNS);
+        } else {
+            store.put(SHOWN_COLUMNS, String.join(",", new TreeSet<>(names)));
+        }
     }
 
     /** @return the recent files, newest first, as kept (some may no longer exist) */

@@ -73,6 +73,22 @@ public enum NoteColumn {
         };
     }
 
+    /**
+     * @return true for the columns hidden until chosen in the table's column menu (the remark and
+     *         the lengths measured for the string maker); the choice is remembered between starts
+     */
+    public boolean shownWhenChosen() {
+        return switch (this) {
+            case REMARK, STRETCHED, BACK, WOUND, BARE_FRONT, BARE_BACK, STRIKE -> true;
+            default -> false;
+        };
+    }
+
+    /** @return the column's name in the settings: {@code bare-front} */
+    public String settingName() {
+        return name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
     /** @return true for the string specification, which the user edits */
     boolean editable() {
         return group == Group.SPEC;

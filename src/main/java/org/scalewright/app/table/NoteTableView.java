@@ -57,9 +57,10 @@ public final class NoteTableView {
         }
         // the remark and the lengths measured for the string maker are shown from the table's
         // column menu (the + at the top right)
-        for (NoteColumn c : List.of(NoteColumn.REMARK, NoteColumn.STRETCHED, NoteColumn.BACK, NoteColumn.WOUND,
-                NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK, NoteColumn.STRIKE)) {
-            columns.get(c).setVisible(false);
+        for (NoteColumn c : NoteColumn.values()) {
+            if (c.shownWhenChosen()) {
+                columns.get(c).visibleProperty().bindBidirectional(model.shownProperty(c));
+            }
         }
         table.setRowFactory(t -> new FlaggedRow());
         table.addEventFilter(KeyEvent.KEY_PRESSED, this::onKeyPressed);

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.ObjectProperty;
@@ -31,6 +33,7 @@ public final class NoteTableViewModel {
     private final ObservableList<NoteRow> rows = FXCollections.observableArrayList();
     private final Map<NoteColumn, StringBinding> headers = new EnumMap<>(NoteColumn.class);
     private final NoteClipboard clipboard;
+    private final Map<NoteColumn, BooleanProperty> shown = new EnumMap<>(NoteColumn.class);
 
     public NoteTableViewModel(ScaleSession session) {
         this.session = session;
@@ -40,6 +43,9 @@ public final class NoteTableViewModel {
         for (NoteColumn c : NoteColumn.values()) {
             headers.put(c, Bindings.createStringBinding(() -> c.headerLines(session.units()),
                     session.unitsProperty()));
+            if (c.shownWhenChosen()) {
+                shown.put(c, new SimpleBooleanProperty(false));
+            }
         }
         refresh();
     }
@@ -51,6 +57,18 @@ public final class NoteTableViewModel {
     /** @return whether the difference-from-reference columns are shown */
     public ObservableBooleanValue showDifferencesProperty() {
         return session.showDifferencesProperty();
+    }
+
+    /**
+     * @param c a column {@linkplain NoteColumn#shownWhenChosen() shown when chosen}
+     * @return whether it is shown (false at first)
+     */
+    public BooleanProperty shownProperty(NoteColumn c) {
+        BooleanProperty p = shown.get(c);
+        if (p == null) {
+            throw new IllegalArgumentException(c + " is always shown");
+        }
+        return p;
     }
 
     /** @return copying and pasting blocks of cells */
