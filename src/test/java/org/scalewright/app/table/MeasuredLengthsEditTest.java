@@ -5,18 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.scalewright.app.session.ScaleSession;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.io.ScaleSheetWriter;
 import org.scalewright.model.DisplayUnits;
-import org.scalewright.model.Note;
 import org.scalewright.model.Scale;
 
 /**
@@ -27,41 +24,29 @@ import org.scalewright.model.Scale;
 class MeasuredLengthsEditTest {
     @TempDir
     Path dir;
-    private ScaleSession session;
-    private NoteTableViewModel table;
+    private TableOnSheet t;
 
     @BeforeEach
     void open() throws Exception {
-        Path sheet = Files.writeString(dir.resolve("bass.csv"), """
+        t = new TableOnSheet(dir, """
                 key,strings,length_mm,wire_mm,wrap1_mm,total_mm,back_mm,winding_mm,bare_front_mm,bare_back_mm,strike_mm
                 10,2,1500,1.3,1.05,1700,120,1420,40,40,180
                 40,3,690,1.05,,800,,,,,
                 """);
-        session = new ScaleSession();
-        session.open(sheet, true);
-        table = new NoteTableViewModel(session);
-    }
-
-    private String text(int key, NoteColumn c) {
-        return c.text(table.rows().get(table.indexOf(key)), session.units());
-    }
-
-    private Note note(int key) {
-        return session.scale().note(key).orElseThrow();
     }
 
     @Test
     void theMeasuredLengthsAreShownInTheDisplayUnit() {
-        assertEquals("1700.0", text(10, NoteColumn.STRETCHED));
-        assertEquals("120.0", text(10, NoteColumn.BACK));
-        assertEquals("1420.0", text(10, NoteColumn.WOUND));
-        assertEquals("40.0", text(10, NoteColumn.BARE_FRONT));
-        assertEquals("40.0", text(10, NoteColumn.BARE_BACK));
-        assertEquals("180.0", text(10, NoteColumn.STRIKE));
-        assertEquals("", text(40, NoteColumn.BACK));
-        assertEquals("", text(40, NoteColumn.WOUND));
-        session.unitsProperty().set(DisplayUnits.IMPERIAL);
-        assertEquals("4.72", text(10, NoteColumn.BACK), "120 mm in inches (1 in = 25.4 mm, NIST SP 811)");
+        assertEquals("1700.0", t.text(10, NoteColumn.STRETCHED));
+        assertEquals("120.0", t.text(10, NoteColumn.BACK));
+        assertEquals("1420.0", t.text(10, NoteColumn.WOUND));
+        assertEquals("40.0", t.text(10, NoteColumn.BARE_FRONT));
+        assertEquals("40.0", t.text(10, NoteColumn.BARE_BACK));
+        assertEquals("180.0", t.text(10, NoteColumn.STRIKE));
+        assertEquals("", t.text(40, NoteColumn.BACK));
+        assertEquals("", t.text(40, NoteColumn.WOUND));
+        t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        assertEquals("4.72", t.text(10, NoteColumn.BACK), "120 mm in inches (1 in = 25.4 mm, NIST SP 811)");
         for (NoteColumn c : new NoteColumn[] {NoteColumn.STRETCHED, NoteColumn.BACK, NoteColumn.WOUND,
                 NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK, NoteColumn.STRIKE}) {
             assertTrue(c.editable(), c.name());
@@ -70,79 +55,79 @@ class MeasuredLengthsEditTest {
 
     @Test
     void aBackLengthIsEnteredAsOneUndoableEditAndKeptInTheSheet() throws Exception {
-        Scale before = session.scale();
-        assertTrue(table.edit(40, NoteColumn.BACK, "75"));
-        assertEquals(0.075, note(40).backLength().getAsDouble(), 1e-12);
-        assertTrue(table.edit(40, NoteColumn.BACK, "3 in"), "an entry may name its unit");
-        assertEquals(3 * 0.0254, note(40).backLength().getAsDouble(), 1e-12);
-        session.undo();
-        session.undo();
-        assertSame(before, session.scale());
-        assertTrue(table.edit(40, NoteColumn.BACK, "75"));
+        Scale before = t.session.scale();
+        assertTrue(t.table.edit(40, NoteColumn.BACK, "75"));
+        assertEquals(0.075, t.note(40).backLength().getAsDouble(), 1e-12);
+        assertTrue(t.table.edit(40, NoteColumn.BACK, "3 in"), "an entry may name its unit");
+        assertEquals(3 * 0.0254, t.note(40).backLength().getAsDouble(), 1e-12);
+        t.session.undo();
+        t.session.undo();
+        assertSame(before, t.session.scale());
+        assertTrue(t.table.edit(40, NoteColumn.BACK, "75"));
         Path saved = dir.resolve("saved.csv");
-        ScaleSheetWriter.write(session.scale(), saved, false);
-        assertEquals(session.scale().notes(), ScaleSheetReader.standard().read(saved).notes());
-        assertTrue(table.edit(40, NoteColumn.BACK, ""), "blank: no back length");
-        assertEquals(OptionalDouble.empty(), note(40).backLength());
+        ScaleSheetWriter.write(t.session.scale(), saved, false);
+        assertEquals(t.session.scale().notes(), ScaleSheetReader.standard().read(saved).notes());
+        assertTrue(t.table.edit(40, NoteColumn.BACK, ""), "blank: no back length");
+        assertEquals(OptionalDouble.empty(), t.note(40).backLength());
     }
 
     @Test
     void lengthsThatDoNotFitTheStringAreRefusedAndChangeNothing() {
-        Scale before = session.scale();
+        Scale before = t.session.scale();
         // 120 + 1500 = 1620 mm of a 1610 mm stretched length: nothing left to the tuning pin
-        assertFalse(table.edit(10, NoteColumn.STRETCHED, "1610"));
-        assertTrue(session.messageProperty().get().contains("leave nothing of the stretched length"),
-                session.messageProperty().get());
+        assertFalse(t.table.edit(10, NoteColumn.STRETCHED, "1610"));
+        assertTrue(t.session.messageProperty().get().contains("leave nothing of the stretched length"),
+                t.session.messageProperty().get());
         // a winding that with the 40 mm bare at the front is longer than the speaking length
-        assertFalse(table.edit(10, NoteColumn.WOUND, "1470"));
-        assertTrue(session.messageProperty().get().contains("winding 1470 mm and 40 mm of bare core at the front are "
-                + "longer than the speaking length 1500 mm"), session.messageProperty().get());
-        assertFalse(table.edit(40, NoteColumn.BARE_FRONT, "10"));
-        assertTrue(session.messageProperty().get().contains("belongs to a wound string"),
-                session.messageProperty().get());
-        assertFalse(table.edit(40, NoteColumn.STRIKE, "-3"));
-        assertTrue(session.messageProperty().get().contains("strike point must be > 0"),
-                session.messageProperty().get());
-        assertSame(before, session.scale());
+        assertFalse(t.table.edit(10, NoteColumn.WOUND, "1470"));
+        assertTrue(t.session.messageProperty().get().contains("winding 1470 mm and 40 mm of bare core at the front are "
+                + "longer than the speaking length 1500 mm"), t.session.messageProperty().get());
+        assertFalse(t.table.edit(40, NoteColumn.BARE_FRONT, "10"));
+        assertTrue(t.session.messageProperty().get().contains("belongs to a wound string"),
+                t.session.messageProperty().get());
+        assertFalse(t.table.edit(40, NoteColumn.STRIKE, "-3"));
+        assertTrue(t.session.messageProperty().get().contains("strike point must be > 0"),
+                t.session.messageProperty().get());
+        assertSame(before, t.session.scale());
     }
 
     @Test
     void aPastedWindingAndBareEndsMustMakeTheSpeakingLength() {
         List<NoteColumn> cols = List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK);
-        int row = table.indexOf(10);
-        assertTrue(table.clipboard().paste(row, cols, "1400\t50\t50\n"));
-        assertEquals(1.400, note(10).woundLength().getAsDouble(), 1e-12);
-        assertEquals(0.050, note(10).bareBack().getAsDouble(), 1e-12);
+        int row = t.table.indexOf(10);
+        assertTrue(t.table.clipboard().paste(row, cols, "1400\t50\t50\n"));
+        assertEquals(1.400, t.note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.050, t.note(10).bareBack().getAsDouble(), 1e-12);
         // 1399 + 50 + 50.7 = 1499.7 mm, within 0.5 mm as a sheet may be: the wound length stays as pasted
-        assertTrue(table.clipboard().paste(row, cols, "1399\t50\t50.7\n"));
-        assertEquals(1.399, note(10).woundLength().getAsDouble(), 1e-12);
-        assertEquals(0.0507, note(10).bareBack().getAsDouble(), 1e-12);
+        assertTrue(t.table.clipboard().paste(row, cols, "1399\t50\t50.7\n"));
+        assertEquals(1.399, t.note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.0507, t.note(10).bareBack().getAsDouble(), 1e-12);
         // a whole new winding pasted over the old one: taken as it is, whatever the old bare ends were
-        assertTrue(table.clipboard().paste(row, cols, "1470\t15\t15\n"));
-        assertEquals(1.470, note(10).woundLength().getAsDouble(), 1e-12);
-        assertEquals(0.015, note(10).bareFront().getAsDouble(), 1e-12);
+        assertTrue(t.table.clipboard().paste(row, cols, "1470\t15\t15\n"));
+        assertEquals(1.470, t.note(10).woundLength().getAsDouble(), 1e-12);
+        assertEquals(0.015, t.note(10).bareFront().getAsDouble(), 1e-12);
         // the wound length alone: the bare core at the back follows
-        assertTrue(table.clipboard().paste(table.indexOf(10), List.of(NoteColumn.WOUND), "1460\n"));
-        assertEquals(0.025, note(10).bareBack().getAsDouble(), 1e-12, "1500 − 1460 − 15");
-        assertTrue(table.clipboard().paste(row, List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK),
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(10), List.of(NoteColumn.WOUND), "1460\n"));
+        assertEquals(0.025, t.note(10).bareBack().getAsDouble(), 1e-12, "1500 − 1460 − 15");
+        assertTrue(t.table.clipboard().paste(row, List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK),
                 "1450\t\t20\n"), "a blank front with the wound length and back given");
-        assertTrue(note(10).bareFront().isEmpty());
-        Scale before = session.scale();
+        assertTrue(t.note(10).bareFront().isEmpty());
+        Scale before = t.session.scale();
         // 1400 + 50 + 60 = 1510 mm: as a sheet with these cells is refused, so is the paste
-        assertFalse(table.clipboard().paste(row, cols, "1400\t50\t60\n"));
-        assertSame(before, session.scale());
-        assertTrue(session.messageProperty().get().contains("winding 1400 mm + bare core 50 mm (front) + 60 mm (back) "
-                + "= 1510 mm, but the speaking length is 1500 mm"), session.messageProperty().get());
+        assertFalse(t.table.clipboard().paste(row, cols, "1400\t50\t60\n"));
+        assertSame(before, t.session.scale());
+        assertTrue(t.session.messageProperty().get().contains("winding 1400 mm + bare core 50 mm (front) + 60 mm (back) "
+                + "= 1510 mm, but the speaking length is 1500 mm"), t.session.messageProperty().get());
     }
 
     @Test
     void theBareEndsAndTheWindingAreEditedTogetherConsistently() {
         // with all three given, changing one bare end alone would break the sum: the winding follows
-        assertTrue(table.edit(10, NoteColumn.BARE_FRONT, "30"));
-        assertEquals(0.030, note(10).bareFront().getAsDouble(), 1e-12);
-        assertEquals(1.430, note(10).woundLength().getAsDouble(), 1e-12, "1500 − 30 − 40");
-        assertTrue(table.edit(10, NoteColumn.WOUND, "1400"), "a new winding takes its bare core from the back end");
-        assertEquals(0.030, note(10).bareFront().getAsDouble(), 1e-12);
-        assertEquals(0.070, note(10).bareBack().getAsDouble(), 1e-12, "1500 − 1400 − 30");
+        assertTrue(t.table.edit(10, NoteColumn.BARE_FRONT, "30"));
+        assertEquals(0.030, t.note(10).bareFront().getAsDouble(), 1e-12);
+        assertEquals(1.430, t.note(10).woundLength().getAsDouble(), 1e-12, "1500 − 30 − 40");
+        assertTrue(t.table.edit(10, NoteColumn.WOUND, "1400"), "a new winding takes its bare core from the back end");
+        assertEquals(0.030, t.note(10).bareFront().getAsDouble(), 1e-12);
+        assertEquals(0.070, t.note(10).bareBack().getAsDouble(), 1e-12, "1500 − 1400 − 30");
     }
 }
