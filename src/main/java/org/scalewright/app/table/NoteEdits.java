@@ -43,7 +43,7 @@ final class NoteEdits {
             case SECTION -> note.withSection(t);
             case REMARK -> note.withRemark(t);
             case STRINGS -> note.withStrings(strings(t));
-            case LENGTH -> note.withSpeakingLength(length("speaking length", t, units));
+            case LENGTH -> speakingLength(note, length("speaking length", t, units));
             case WIRE -> note.withWire(wire(t, units));
             case WRAP1 -> wrap1(note, t, units);
             case WRAP2 -> wrap2(note, t, units);
@@ -168,6 +168,25 @@ final class NoteEdits {
                     + " must lie between the core, " + shown(core, units) + ", and the OD, " + shown(od, units));
         }
         return note.withWrap(Wrap.fromOd(core, od1, od, old.metal()));
+    }
+
+    /**
+     * A new speaking length. Where the wound length and both bare ends are given, the bare ends
+     * stay (they are set by the terminations) and the wound length follows, so that the three
+     * still make the speaking length.
+     */
+    private static Note speakingLength(Note note, double length) {
+        if (note.woundLength().isEmpty() || note.bareFront().isEmpty() || note.bareBack().isEmpty()) {
+            return note.withSpeakingLength(length);
+        }
+        double bare = note.bareFront().getAsDouble() + note.bareBack().getAsDouble();
+        if (!(length > bare)) {
+            throw new IllegalArgumentException("the bare core at the ends, " + DisplayFormat.decimals(bare * 1e3, 0, 1)
+                    + " mm, would leave no winding in a speaking length of " + DisplayFormat.decimals(length * 1e3, 0, 1)
+                    + " mm");
+        }
+        return note.withWinding(OptionalDouble.empty(), note.bareFront(), note.bareBack()).withSpeakingLength(length)
+                .withWinding(OptionalDouble.of(length - bare), note.bareFront(), note.bareBack());
     }
 
     /**

@@ -121,6 +121,20 @@ class MeasuredLengthsEditTest {
     }
 
     @Test
+    void aNewSpeakingLengthMovesTheWindingAndKeepsTheBareEnds() {
+        assertTrue(t.table.edit(10, NoteColumn.LENGTH, "1510"));
+        assertEquals(1.430, t.note(10).woundLength().getAsDouble(), 1e-12, "1510 − 40 − 40");
+        assertEquals(0.040, t.note(10).bareBack().getAsDouble(), 1e-12);
+        // a speaking length the bare ends alone fill is refused, and nothing changes
+        Scale before = t.session.scale();
+        assertFalse(t.table.edit(10, NoteColumn.LENGTH, "80"));
+        assertTrue(t.session.messageProperty().get().contains("the bare core at the ends, 80 mm, would leave no winding"),
+                t.session.messageProperty().get());
+        assertSame(before, t.session.scale());
+        assertTrue(t.table.edit(40, NoteColumn.LENGTH, "700"), "plain wire: only the speaking length changes");
+    }
+
+    @Test
     void theBareEndsAndTheWindingAreEditedTogetherConsistently() {
         // with all three given, changing one bare end alone would break the sum: the winding follows
         assertTrue(t.table.edit(10, NoteColumn.BARE_FRONT, "30"));
