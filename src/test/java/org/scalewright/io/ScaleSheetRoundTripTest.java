@@ -139,6 +139,23 @@ class ScaleSheetRoundTripTest {
     }
 
     @Test
+    @DisplayName("a back length given in code gets its column in the default layout, a scale without one none")
+    void backLengthMadeInCode() throws Exception {
+        Note wound = new Note(1, 1, 1.5, CoreWire.ofDiameter(1.5e-3), Wrap.single(1.2e-3, WrapMetal.COPPER),
+                OptionalDouble.empty(), 0, OptionalDouble.empty(), OptionalDouble.of(1.65), OptionalDouble.empty(),
+                "", "", OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.of(0.0925));
+        Scale s = new Scale("made in code", new PitchStandard(440), List.of(wound,
+                Note.plain(40, 3, 0.62, CoreWire.ofSize(16, 0.037 * 0.0254))), null);
+        String text = ScaleSheetWriter.toText(s);
+        assertTrue(text.contains("back_mm"), text);
+        assertTrue(text.contains(",92.5\n"), text);
+        assertEquals(s.notes(), read(text).notes());
+        Scale without = new Scale("made in code", new PitchStandard(440), List.of(wound.withBackLength(
+                OptionalDouble.empty())), null);
+        assertFalse(ScaleSheetWriter.toText(without).contains("back_mm"));
+    }
+
+    @Test
     @DisplayName("write() replaces the file atomically and can keep the previous one as .bak")
     void writeToDisk() throws Exception {
         Path f = dir.resolve("out.csv");
