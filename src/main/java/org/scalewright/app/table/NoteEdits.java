@@ -43,7 +43,7 @@ final class NoteEdits {
             case SECTION -> note.withSection(t);
             case REMARK -> note.withRemark(t);
             case STRINGS -> note.withStrings(strings(t));
-            case LENGTH -> speakingLength(note, length("speaking length", t, units));
+            case LENGTH -> speakingLength(note, length("speaking length", t, units), units);
             case WIRE -> note.withWire(wire(t, units));
             case WRAP1 -> wrap1(note, t, units);
             case WRAP2 -> wrap2(note, t, units);
@@ -175,15 +175,14 @@ final class NoteEdits {
      * stay (they are set by the terminations) and the wound length follows, so that the three
      * still make the speaking length.
      */
-    private static Note speakingLength(Note note, double length) {
+    private static Note speakingLength(Note note, double length, DisplayUnits units) {
         if (note.woundLength().isEmpty() || note.bareFront().isEmpty() || note.bareBack().isEmpty()) {
             return note.withSpeakingLength(length);
         }
         double bare = note.bareFront().getAsDouble() + note.bareBack().getAsDouble();
         if (!(length > bare)) {
-            throw new IllegalArgumentException("the bare core at the ends, " + DisplayFormat.decimals(bare * 1e3, 0, 1)
-                    + " mm, would leave no winding in a speaking length of " + DisplayFormat.decimals(length * 1e3, 0, 1)
-                    + " mm");
+            throw new IllegalArgumentException("the bare core at the ends, " + lengthText(bare, units)
+                    + ", would leave no winding in a speaking length of " + lengthText(length, units));
         }
         return note.withWinding(OptionalDouble.empty(), note.bareFront(), note.bareBack()).withSpeakingLength(length)
                 .withWinding(OptionalDouble.of(length - bare), note.bareFront(), note.bareBack());
@@ -212,22 +211,29 @@ final class NoteEdits {
             if (!typed.containsKey(NoteColumn.WOUND)) {
                 wound = OptionalDouble.of(l - front.getAsDouble() - back.getAsDouble());
             } else if (!typed.containsKey(NoteColumn.BARE_BACK)) {
-                back = OptionalDouble.of(left(note, wound.getAsDouble(), front.getAsDouble(), true));
+                back = OptionalDouble.of(left(note, wound.getAsDouble(), front.getAsDouble(), true, units));
             } else {
-                front = OptionalDouble.of(left(note, wound.getAsDouble(), back.getAsDouble(), false));
+                front = OptionalDouble.of(left(note, wound.getAsDouble(), back.getAsDouble(), false, units));
             }
         }
         return note.withWinding(wound, front, back);
     }
 
     /** @return the bare core the speaking length leaves at one end beside the winding and the other end, m */
-    private static double left(Note note, double wound, double otherEnd, boolean otherIsFront) {
+    private static double left(Note note, double wound, double otherEnd, boolean otherIsFront, DisplayUnits units) {
         double left = note.speakingLength() - wound - otherEnd;
         if (left < 0) {
-            throw new IllegalArgumentException(Note.windingTooLong(note.key(), note.speakingLength(), wound, otherEnd,
-                    otherIsFront).replaceFirst("^key \\d+: ", ""));
+            throw new IllegalArgumentException("winding " + lengthText(wound, units) + " and " + lengthText(otherEnd, units)
+                    + " of bare core at the " + (otherIsFront ? "front" : "back") + " are longer than the speaking "
+                    + "length " + lengthText(note.speakingLength(), units));
         }
         return left;
+    }
+
+    /** @return a length in the display unit with the unit: {@code 1470 mm}, {@code 57.87 in} */
+    private static String lengthText(double metres, DisplayUnits units) {
+        double v = units.length().fromMetres(metres);
+        return DisplayFormat.decimals(v, 0, units.length() == LengthUnit.MM ? 1 : 2) + " " + units.length().symbol();
     }
 
     /** @return a bare end typed: 0 or more, blank for none */

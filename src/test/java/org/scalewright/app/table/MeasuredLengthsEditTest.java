@@ -121,6 +121,15 @@ class MeasuredLengthsEditTest {
     }
 
     @Test
+    void aRefusalIsWordedInTheDisplayUnit() {
+        t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        // 58 in of winding and 40 mm (1.57 in) bare at the front are longer than 1500 mm (59.06 in)
+        assertFalse(t.table.edit(10, NoteColumn.WOUND, "58"));
+        assertTrue(t.session.messageProperty().get().contains("winding 58 in and 1.57 in of bare core at the front are "
+                + "longer than the speaking length 59.06 in"), t.session.messageProperty().get());
+    }
+
+    @Test
     void aNewSpeakingLengthMovesTheWindingAndKeepsTheBareEnds() {
         assertTrue(t.table.edit(10, NoteColumn.LENGTH, "1510"));
         assertEquals(1.430, t.note(10).woundLength().getAsDouble(), 1e-12, "1510 − 40 − 40");
