@@ -218,8 +218,26 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         });
     }
 
+    /**
+     * @param newLength the new speaking length, m, &gt; 0
+     * @return this note with another speaking length; a wound length given moves by the same
+     *         amount, so the bare core at the ends (given, or what the winding leaves) stays as it
+     *         was, as on a string made again for the new length
+     * @throws IllegalArgumentException when the bare core at the ends would leave no winding
+     */
     public Note withSpeakingLength(double newLength) {
-        return edited(e -> e.speakingLength = newLength);
+        return edited(e -> {
+            if (e.woundLength.isPresent()) {
+                double wound = e.woundLength.getAsDouble() + newLength - e.speakingLength;
+                if (!(wound > WINDING_TOLERANCE)) {
+                    throw new IllegalArgumentException("key " + key + ": the bare core at the ends, "
+                            + Checks.format((e.speakingLength - e.woundLength.getAsDouble()) * 1e3) + " mm, leaves no "
+                            + "winding in a speaking length of " + Checks.format(newLength * 1e3) + " mm");
+                }
+                e.woundLength = OptionalDouble.of(wound);
+            }
+            e.speakingLength = newLength;
+        });
     }
 
     public Note withStrings(int newStrings) {

@@ -51,6 +51,24 @@ class DiagnoseCommandTest {
     }
 
     @Test
+    void aWoundStringGivenWithItsWindingAndOneBareEndIsDiagnosedAndGivenAShorterLength() throws IOException {
+        // the shorter-length remedy shortens the winding with the speaking length, the bare end staying
+        StringBuilder b = new StringBuilder("key,strings,length_mm,wire_mm,wrap1_mm,winding_mm,bare_front_mm,section\n");
+        for (int k = 1; k <= 20; k++) {
+            double l = 1500 * Math.pow(0.97, k - 1) * (k == 10 ? 1.75 : 1.0);
+            b.append(k).append(",1,").append(String.format(java.util.Locale.ROOT, "%.1f,1.3,0.9,%.1f,20,bass%n", l,
+                    l - 40));
+        }
+        Path p = Files.writeString(dir.resolve("bass.csv"), b);
+        CheckWireCommandTest.Run r = CheckWireCommandTest.run("diagnose", p.toString(), "--keys", "1-20");
+        assertEquals(0, r.rc(), r.err() + r.out());
+        // the remedy is computed on the shortened string: its winding of 1955.6 mm with 20 mm bare at the
+        // front would not fit 1879.5 mm unless it is shortened with the speaking length
+        assertTrue(r.out().replaceAll("\\s+", " ").contains("Shorter speaking lengths: key 10 1879.5 mm (now 1995.6, "
+                + "116.1 mm shorter)"), r.out());
+    }
+
+    @Test
     void badArgumentsGiveExitTwoAndNoFile() throws IOException {
         Path sheet = sheet(1.0);
         Path out = dir.resolve("never.csv");
