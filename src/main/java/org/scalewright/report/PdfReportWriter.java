@@ -189,8 +189,8 @@ public final class PdfReportWriter {
                 + "times as its count: " + r.woundOrder().totalStrings() + " wound strings on " + r.woundOrder().notes()
                 + " notes in " + r.woundOrder().rows().size() + " designs. "
                 + (imp ? "Inches, with millimetres in brackets." : "Millimetres.")
-                + " Core with its music-wire size; OD = outside diameter over the winding; ≈ marks a winding start "
-                + "estimated from the stretched length, to be checked on the instrument.");
+                + " Core with its music-wire size; OD = outside diameter over the winding; ≈ marks an estimated winding "
+                + "start, to be checked on the instrument.");
         // the cells are the CSV's own, so the page and wound-order.csv print the same figures
         CsvSheet sheet = WoundOrderCsv.sheet(r.woundOrder(), r.units(), List.of());
         List<String> h = sheet.header();

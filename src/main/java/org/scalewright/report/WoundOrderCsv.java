@@ -65,10 +65,11 @@ public final class WoundOrderCsv {
                 "bare_front / bare_back: bare core inside the speaking length at the front (tuning-pin side) and the "
                         + "back (bridge side) end; 'split equally' where only the wound length was given, the bare "
                         + "core split equally between the two ends; 'none given': the winding fills the speaking length",
-                "winding_start_from_hitch = back length (bridge pin to hitch pin) + bare_back; winding_start_by "
-                        + "'back length' where the sheet gives the back length, 'estimate' where it gives only the "
-                        + "stretched length and the back length is taken as half of stretched less speaking length: "
-                        + "check an estimate on the instrument; blank where neither is given",
+                "winding start from the hitch = back length (bridge pin to hitch pin) + bare core at the back; from "
+                        + "the sheet's back length ('back length') or an estimate ('estimate', ≈ on the PDF page) where "
+                        + "the sheet gives only the stretched length (the back length then taken as half of stretched "
+                        + "less speaking length) or only the wound length (the bare core split equally): check an "
+                        + "estimate on the instrument; blank where neither back nor stretched length is given",
                 "stretched length = hitch pin to tuning pin");
     }
 

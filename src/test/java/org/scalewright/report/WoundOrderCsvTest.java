@@ -112,6 +112,13 @@ class WoundOrderCsvTest {
         List<String[]> rows = csv(scale(List.of(doubleByOd(), withBack)));
         assertEquals("155", cell(rows, 2, "winding_start_from_hitch_mm"));
         assertEquals("back length", cell(rows, 2, "winding_start_by"));
+        // the back length given but only the wound length (1240 of 1300): the bare core at the back is
+        // taken as half of the 60 mm left, so the start, 120 + 30 = 150 mm, is an estimate
+        Note splitEnds = new Note(3, 2, 1.3, CoreWire.ofSize(15, 1.3e-3), Wrap.single(0.9e-3, WrapMetal.COPPER), NONE,
+                0, NONE, mm(1500), mm(1240), "", "", NONE, NONE, mm(120));
+        List<String[]> split = csv(scale(List.of(splitEnds)));
+        assertEquals("150", cell(split, 1, "winding_start_from_hitch_mm"));
+        assertEquals("estimate", cell(split, 1, "winding_start_by"));
         assertEquals("130", cell(rows, 1, "winding_start_from_hitch_mm"));
         assertEquals("estimate", cell(rows, 1, "winding_start_by"));
         ReportContent c = ReportFixtures.content(scale(List.of(withBack)), ReportUnits.METRIC);
@@ -159,7 +166,7 @@ class WoundOrderCsvTest {
             // key 1: OD 5.9, 1400 speaking, 1340 wound, 30 and 30 bare, start 130, 1600 stretched (hand-worked above)
             // the start of key 1 is estimated from its stretched length, and marked so
             assertTrue(page.contains("1 A0 1 1.500 1.200 1.000 copper 5.900 1400.0 1340.0 30.0 30.0 ≈130.0 1600.0 split equally"), page);
-            assertTrue(page.contains("≈ marks a winding start estimated from the stretched length"), page);
+            assertTrue(page.contains("≈ marks an estimated winding start"), page);
             // key 2: #15 core, OD 3.1, wound 1245, bare 20 and 35, no start or stretched length
             assertTrue(page.contains("2 A#0 2 1.300 #15 0.900 copper 3.100 1300.0 1245.0 20.0 35.0 given"), page);
         }

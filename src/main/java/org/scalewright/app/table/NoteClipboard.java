@@ -27,6 +27,9 @@ public final class NoteClipboard {
     /** The columns of a wound string's winding, taken together from a pasted row. */
     private static final Set<NoteColumn> WINDING = EnumSet.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
             NoteColumn.BARE_BACK);
+    /** The speaking, stretched and back length, taken together from a pasted row. */
+    private static final Set<NoteColumn> LENGTHS = EnumSet.of(NoteColumn.LENGTH, NoteColumn.STRETCHED,
+            NoteColumn.BACK);
 
     private static final Pattern NUMBER = Pattern.compile("[+-]?\\d+\\.\\d+");
 
@@ -115,8 +118,10 @@ public final class NoteClipboard {
         for (int r = 0; r < height; r++) {
             NoteRow row = table.rows().get(firstRow + r);
             Note note = changed.getOrDefault(row.key(), row.note());
-            // the wound length and bare ends of a row are taken together, as a sheet's row is
+            // lengths that depend on each other are taken together, as a sheet's row is
+            Map<NoteColumn, String> lengths = new EnumMap<>(NoteColumn.class);
             Map<NoteColumn, String> winding = new EnumMap<>(NoteColumn.class);
+            Set<NoteColumn> windingAsShown = EnumSet.noneOf(NoteColumn.class);
             for (int c = 0; c < width; c++) {
                 NoteColumn col = columns.get(c);
                 String cell = c < block.get(r).size() ? block.get(r).get(c) : "";
@@ -125,32 +130,47 @@ public final class NoteClipboard {
                             + " is computed from the other columns and cannot be pasted into");
                     return false;
                 }
+                boolean asShown = cell.equals(table.text(row, col));
+                if (WINDING.contains(col) || LENGTHS.contains(col)) {
+                    try {
+                        MeasuredLengthEdits.read(col, cell, session.units());
+                    } catch (IllegalArgumentException e) {
+                        session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + e.getMessage());
+                        return false;
+                    }
+                }
                 if (WINDING.contains(col)) {
                     winding.put(col, cell);
+                    if (asShown) {
+                        windingAsShown.add(col);
+                    }
                     continue;
                 }
-                if (cell.equals(table.text(row, col))) {
+                if (asShown) {
+                    continue;
+                }
+                if (LENGTHS.contains(col)) {
+                    lengths.put(col, cell);
                     continue;
                 }
                 try {
                     note = edits.apply(note, col, cell, session.units());
                     cells++;
                 } catch (IllegalArgumentException e) {
-                    session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + e.getMessage());
+                    session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + withoutKey(e));
                     return false;
                 }
             }
-            if (!winding.isEmpty()) {
-                try {
-                    Note wound = edits.winding(note, winding, session.units());
-                    cells += wound.equals(note) ? 0 : 1;
-                    note = wound;
-                } catch (IllegalArgumentException e) {
-                    session.complain("nothing pasted: row " + (r + 1) + " of the block (key " + row.key() + " "
-                            + KeyNames.name(row.key()) + "), wound length and bare ends: "
-                            + e.getMessage().replaceFirst("^key \\d+: ", ""));
-                    return false;
-                }
+            try {
+                Note measured = MeasuredLengthEdits.winding(lengths.isEmpty() ? note
+                        : MeasuredLengthEdits.lengths(note, lengths, session.units()), winding, windingAsShown,
+                        session.units());
+                cells += measured.equals(note) ? 0 : 1;
+                note = measured;
+            } catch (IllegalArgumentException e) {
+                session.complain("nothing pasted: row " + (r + 1) + " of the block (key " + row.key() + " "
+                        + KeyNames.name(row.key()) + "): " + withoutKey(e));
+                return false;
             }
             changed.put(row.key(), note);
         }
@@ -160,6 +180,11 @@ public final class NoteClipboard {
         }
         String description = "paste of " + height + " × " + width + " cells at key " + table.rows().get(firstRow).key();
         return session.edit(description, s -> withNotes(s, changed));
+    }
+
+    /** @return the refusal without the key the model puts first (the place already names it) */
+    static String withoutKey(IllegalArgumentException e) {
+        return e.getMessage().replaceFirst("^key -?\\d+: ", "");
     }
 
     private static Scale withNotes(Scale s, Map<Integer, Note> notes) {

@@ -3,7 +3,7 @@ package org.scalewright.app.table;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.OptionalDouble;
+import java.util.Set;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.TypedEntry;
 import org.scalewright.model.CoreWire;
@@ -43,17 +43,15 @@ final class NoteEdits {
             case SECTION -> note.withSection(t);
             case REMARK -> note.withRemark(t);
             case STRINGS -> note.withStrings(strings(t));
-            case LENGTH -> speakingLength(note, length("speaking length", t, units), units);
+            case LENGTH, STRETCHED, BACK -> MeasuredLengthEdits.lengths(note, Map.of(column, t), units);
             case WIRE -> note.withWire(wire(t, units));
             case WRAP1 -> wrap1(note, t, units);
             case WRAP2 -> wrap2(note, t, units);
             case OD -> od(note, t, units);
             case OD1 -> od1(note, t, units);
             case METAL -> metal(note, t);
-            case STRETCHED -> note.withStretchedLength(optional("stretched length", t, units));
-            case BACK -> note.withBackLength(optional("back length", t, units));
-            case STRIKE -> note.withStrikePoint(optional("strike point", t, units));
-            case WOUND, BARE_FRONT, BARE_BACK -> winding(note, Map.of(column, t), units);
+            case STRIKE -> note.withStrikePoint(MeasuredLengthEdits.optional("strike point", t, units));
+            case WOUND, BARE_FRONT, BARE_BACK -> MeasuredLengthEdits.winding(note, Map.of(column, t), Set.of(), units);
             default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
         };
     }
@@ -170,90 +168,6 @@ final class NoteEdits {
         return note.withWrap(Wrap.fromOd(core, od1, od, old.metal()));
     }
 
-    /**
-     * A new speaking length. Where the wound length and both bare ends are given, the bare ends
-     * stay (they are set by the terminations) and the wound length follows, so that the three
-     * still make the speaking length.
-     */
-    private static Note speakingLength(Note note, double length, DisplayUnits units) {
-        if (note.woundLength().isEmpty() || note.bareFront().isEmpty() || note.bareBack().isEmpty()) {
-            return note.withSpeakingLength(length);
-        }
-        double bare = note.bareFront().getAsDouble() + note.bareBack().getAsDouble();
-        if (!(length > bare)) {
-            throw new IllegalArgumentException("the bare core at the ends, " + lengthText(bare, units)
-                    + ", would leave no winding in a speaking length of " + lengthText(length, units));
-        }
-        return note.withWinding(OptionalDouble.empty(), note.bareFront(), note.bareBack()).withSpeakingLength(length)
-                .withWinding(OptionalDouble.of(length - bare), note.bareFront(), note.bareBack());
-    }
-
-    /**
-     * The wound length and the bare core at each end, typed together (a pasted row) or one of
-     * them alone (a cell). The three must make the speaking length (within
-     * {@link Note#WINDING_TOLERANCE}), so where all three end up given and not all were typed,
-     * one follows from the others: the wound length when it was not typed, else the bare core at
-     * the back, else at the front. Three typed at once are taken as typed, and checked.
-     *
-     * @param typed the entries by column: {@link NoteColumn#WOUND}, {@link NoteColumn#BARE_FRONT},
-     *              {@link NoteColumn#BARE_BACK}; blank for none
-     * @throws IllegalArgumentException when an entry is not a length or the three cannot agree
-     */
-    Note winding(Note note, Map<NoteColumn, String> typed, DisplayUnits units) {
-        OptionalDouble wound = typed.containsKey(NoteColumn.WOUND)
-                ? optional("wound length", typed.get(NoteColumn.WOUND).trim(), units) : note.woundLength();
-        OptionalDouble front = typed.containsKey(NoteColumn.BARE_FRONT)
-                ? bare(typed.get(NoteColumn.BARE_FRONT).trim(), units) : note.bareFront();
-        OptionalDouble back = typed.containsKey(NoteColumn.BARE_BACK)
-                ? bare(typed.get(NoteColumn.BARE_BACK).trim(), units) : note.bareBack();
-        if (wound.isPresent() && front.isPresent() && back.isPresent() && typed.size() < 3) {
-            double l = note.speakingLength();
-            if (!typed.containsKey(NoteColumn.WOUND)) {
-                wound = OptionalDouble.of(l - front.getAsDouble() - back.getAsDouble());
-            } else if (!typed.containsKey(NoteColumn.BARE_BACK)) {
-                back = OptionalDouble.of(left(note, wound.getAsDouble(), front.getAsDouble(), true, units));
-            } else {
-                front = OptionalDouble.of(left(note, wound.getAsDouble(), back.getAsDouble(), false, units));
-            }
-        }
-        return note.withWinding(wound, front, back);
-    }
-
-    /** @return the bare core the speaking length leaves at one end beside the winding and the other end, m */
-    private static double left(Note note, double wound, double otherEnd, boolean otherIsFront, DisplayUnits units) {
-        double left = note.speakingLength() - wound - otherEnd;
-        if (left < 0) {
-            throw new IllegalArgumentException("winding " + lengthText(wound, units) + " and " + lengthText(otherEnd, units)
-                    + " of bare core at the " + (otherIsFront ? "front" : "back") + " are longer than the speaking "
-                    + "length " + lengthText(note.speakingLength(), units));
-        }
-        return left;
-    }
-
-    /** @return a length in the display unit with the unit: {@code 1470 mm}, {@code 57.87 in} */
-    private static String lengthText(double metres, DisplayUnits units) {
-        double v = units.length().fromMetres(metres);
-        return DisplayFormat.decimals(v, 0, units.length() == LengthUnit.MM ? 1 : 2) + " " + units.length().symbol();
-    }
-
-    /** @return a bare end typed: 0 or more, blank for none */
-    private static OptionalDouble bare(String t, DisplayUnits units) {
-        if (t.isEmpty()) {
-            return OptionalDouble.empty();
-        }
-        Quantity q = quantity(t, units);
-        LengthUnit unit = q.unit().orElse(units.length());
-        if (!(q.value() >= 0)) {
-            throw new IllegalArgumentException("bare core must be 0 or more " + unit.symbol() + ", was "
-                    + DisplayFormat.decimals(q.value(), 0, 4));
-        }
-        return OptionalDouble.of(unit.toMetres(q.value()));
-    }
-
-    private static OptionalDouble optional(String what, String t, DisplayUnits units) {
-        return t.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(length(what, t, units));
-    }
-
     private static String shown(double metres, DisplayUnits units) {
         return DisplayFormat.diameter(metres, units) + " " + units.length().symbol();
     }
@@ -278,7 +192,8 @@ final class NoteEdits {
         throw new IllegalArgumentException("wrap metal must be copper, iron or steel, was '" + t + "'");
     }
 
-    private static double length(String what, String t, DisplayUnits units) {
+    /** @return a required length typed in a cell, m, &gt; 0 */
+    static double length(String what, String t, DisplayUnits units) {
         if (t.isEmpty()) {
             throw new IllegalArgumentException(what + " is required (a number in " + units.length().symbol() + ")");
         }
@@ -295,10 +210,11 @@ final class NoteEdits {
     }
 
     /** A number with the unit it was written with, if any. */
-    private record Quantity(double value, Optional<LengthUnit> unit) {
+    record Quantity(double value, Optional<LengthUnit> unit) {
     }
 
-    private static Quantity quantity(String t, DisplayUnits units) {
+    /** @return a number typed with or without a length unit */
+    static Quantity quantity(String t, DisplayUnits units) {
         String s = t.trim();
         Optional<LengthUnit> unit = Optional.empty();
         for (LengthUnit u : LengthUnit.values()) {

@@ -131,7 +131,8 @@ public final class NoteTableViewModel {
         try {
             changed = edits.apply(note, column, text, session.units());
         } catch (IllegalArgumentException e) {
-            session.complain("key " + key + " (" + KeyNames.name(key) + "), " + label + ": " + e.getMessage());
+            session.complain("key " + key + " (" + KeyNames.name(key) + "), " + label + ": "
+                    + NoteClipboard.withoutKey(e));
             return false;
         }
         String description = label + " of key " + key + " " + KeyNames.name(key);

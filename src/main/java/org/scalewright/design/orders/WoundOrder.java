@@ -71,7 +71,8 @@ public record WoundOrder(List<WoundOrderRow> rows) {
         return new WoundOrderRow(List.of(n.key()), noteName, n.strings(), n.wire().diameter(),
                 n.wire().musicWireSize(), n.wrap().inner(), n.wrap().outer(), n.wrap().metal(),
                 n.outsideDiameter(), n.speakingLength(), wound, bare.front(), bare.back(), from,
-                n.stretchedLength(), windingStart(n, bare.back()), n.backLength().isPresent()
+                n.stretchedLength(), windingStart(n, bare.back()),
+                n.backLength().isPresent() && from != WoundOrderRow.BareEndsFrom.SPLIT
                         ? WoundOrderRow.WindingStartFrom.BACK_LENGTH : WoundOrderRow.WindingStartFrom.ESTIMATE);
     }
 

@@ -39,9 +39,12 @@ public record WoundOrderRow(List<Integer> keys, List<String> noteNames, int coun
 
     /** How a row's winding start was found. */
     public enum WindingStartFrom {
-        /** from the back length the sheet gives */
+        /** from the back length the sheet gives and the bare core at the back as given */
         BACK_LENGTH("back length"),
-        /** the back length taken as half of stretched less speaking length: to be checked */
+        /**
+         * the back length taken as half of stretched less speaking length, or the bare core at the
+         * back taken as half of what the winding leaves: to be checked
+         */
         ESTIMATE("estimate"),
         /** neither back nor stretched length given: no winding start */
         UNKNOWN("");

@@ -121,12 +121,54 @@ class MeasuredLengthsEditTest {
     }
 
     @Test
+    void aWindingThatFillsTheRestExactlyIsTakenAndOneThatLeavesNoneIsRefused() {
+        // 1500 − 1460 − 40 = 0 mm of winding left by a bare front of 1460 mm
+        assertFalse(t.table.edit(10, NoteColumn.BARE_FRONT, "1460"));
+        assertTrue(t.session.messageProperty().get().contains("the bare core at the ends, 1500 mm, leaves no winding"),
+                t.session.messageProperty().get());
+        // 1481 + 19 = 1500 mm: no bare core left at the back, though binary fractions make it -1e-16
+        assertTrue(t.table.edit(10, NoteColumn.BARE_FRONT, "19"));
+        assertTrue(t.table.edit(10, NoteColumn.WOUND, "1481"));
+        assertEquals(0.0, t.note(10).bareBack().getAsDouble(), 0.0);
+        assertEquals("", t.session.messageIsProblemProperty().get() ? t.session.messageProperty().get() : "");
+    }
+
+    @Test
+    void pastingBackWhatTheTableShowsChangesNothingEvenInInches() {
+        t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        List<NoteColumn> cols = List.of(NoteColumn.STRETCHED, NoteColumn.BACK, NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+                NoteColumn.BARE_BACK);
+        int row = t.table.indexOf(10);
+        String shown = t.table.clipboard().copy(List.of(row), cols, false, '.');
+        Scale before = t.session.scale();
+        assertFalse(t.table.clipboard().paste(row, cols, shown), shown);
+        assertSame(before, t.session.scale(), "the rounded inches shown are not written back over the millimetres");
+    }
+
+    @Test
+    void aPastedRowOfSpeakingStretchedAndBackLengthsIsCheckedAsAWhole() {
+        // 1600 stretched with 50 back fits; alone, 1600 would not fit the old back length of 120 with 1500 speaking
+        List<NoteColumn> cols = List.of(NoteColumn.STRETCHED, NoteColumn.BACK);
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(10), cols, "1600\t50\n"),
+                t.session.messageProperty().get());
+        assertEquals(1.6, t.note(10).stretchedLength().getAsDouble(), 1e-12);
+        assertEquals(0.05, t.note(10).backLength().getAsDouble(), 1e-12);
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(10), List.of(NoteColumn.LENGTH, NoteColumn.STRETCHED),
+                "1540\t1800\n"), t.session.messageProperty().get());
+        assertEquals(1.46, t.note(10).woundLength().getAsDouble(), 1e-12, "the winding moves with the speaking length");
+    }
+
+    @Test
     void aRefusalIsWordedInTheDisplayUnit() {
         t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
         // 58 in of winding and 40 mm (1.57 in) bare at the front are longer than 1500 mm (59.06 in)
         assertFalse(t.table.edit(10, NoteColumn.WOUND, "58"));
         assertTrue(t.session.messageProperty().get().contains("winding 58 in and 1.57 in of bare core at the front are "
                 + "longer than the speaking length 59.06 in"), t.session.messageProperty().get());
+        assertFalse(t.table.edit(10, NoteColumn.STRETCHED, "63"));
+        assertEquals("key 10 (F#1), stretched length: the back length 4.72 in and the speaking length 59.06 in leave "
+                + "nothing of the stretched length 63 in for the front length to the tuning pin",
+                t.session.messageProperty().get());
     }
 
     @Test
