@@ -141,7 +141,8 @@ final class MeasuredLengthEdits {
             throw new IllegalArgumentException("bare core must be 0 or more " + unit.symbol() + ", was "
                     + DisplayFormat.decimals(q.value(), 0, 4));
         }
-        return OptionalDouble.of(unit.toMetres(q.value()));
+        return OptionalDouble.of(q.value() == 0 ? 0 : NoteEdits.withinSheetLimits("bare core", unit.toMetres(q.value()),
+                unit));
     }
 
     /** @return a length typed, &gt; 0; blank for none */

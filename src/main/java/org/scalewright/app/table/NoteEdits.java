@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.Set;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.app.session.TypedEntry;
+import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.CoreWire;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.InvalidInput;
@@ -206,7 +207,22 @@ final class NoteEdits {
             throw new IllegalArgumentException(what + " must be > 0 " + unit.symbol() + ", was "
                     + DisplayFormat.decimals(q.value(), 0, 4));
         }
-        return unit.toMetres(q.value());
+        return withinSheetLimits(what, unit.toMetres(q.value()), unit);
+    }
+
+    /**
+     * @return {@code metres} when a sheet may hold it ({@link ScaleSheetReader#SMALLEST_LENGTH} to
+     *         {@link ScaleSheetReader#LARGEST_LENGTH}), so that what is typed is saved in a sheet that opens again
+     * @throws IllegalArgumentException otherwise, with the limits in the unit typed
+     */
+    static double withinSheetLimits(String what, double metres, LengthUnit unit) {
+        if (metres < ScaleSheetReader.SMALLEST_LENGTH || metres > ScaleSheetReader.LARGEST_LENGTH) {
+            throw new IllegalArgumentException(what + " must be " + DisplayFormat.decimals(unit.fromMetres(
+                    ScaleSheetReader.SMALLEST_LENGTH), 0, 5) + " to " + DisplayFormat.decimals(unit.fromMetres(
+                    ScaleSheetReader.LARGEST_LENGTH), 0, 1) + " " + unit.symbol() + ", was "
+                    + DisplayFormat.decimals(unit.fromMetres(metres), 0, 4));
+        }
+        return metres;
     }
 
     /** A number with the unit it was written with, if any. */

@@ -85,6 +85,10 @@ class MeasuredLengthsEditTest {
         assertFalse(t.table.edit(40, NoteColumn.BARE_FRONT, "10"));
         assertTrue(t.session.messageProperty().get().contains("belongs to a wound string"),
                 t.session.messageProperty().get());
+        // a length no sheet may hold (over 10 m) would be saved in a sheet that does not open again
+        assertFalse(t.table.edit(40, NoteColumn.STRETCHED, "20000"));
+        assertTrue(t.session.messageProperty().get().contains("stretched length must be 0.001 to 10000 mm, was 20000"),
+                t.session.messageProperty().get());
         assertFalse(t.table.edit(40, NoteColumn.STRIKE, "-3"));
         assertTrue(t.session.messageProperty().get().contains("strike point must be > 0"),
                 t.session.messageProperty().get());
