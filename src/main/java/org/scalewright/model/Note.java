@@ -207,11 +207,12 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         });
     }
 
-    /** @return this note with another wrap; without a wrap (plain wire) it has no bare ends either */
+    /** @return this note with another wrap; without a wrap (plain wire) it has no winding or bare ends either */
     public Note withWrap(Wrap newWrap) {
         return edited(e -> {
             e.wrap = newWrap;
             if (newWrap == null) {
+                e.woundLength = OptionalDouble.empty();
                 e.bareFront = OptionalDouble.empty();
                 e.bareBack = OptionalDouble.empty();
             }

@@ -1,101 +1,138 @@
 package org.scalewright.app.table;
 
+import java.util.EnumSet;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.Set;
+import java.util.function.Function;
 import org.scalewright.app.session.DisplayFormat;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
 
 /**
- * Entries of the lengths measured along a string that depend on each other: the speaking,
- * stretched and back length (back + speaking must leave a front length within the stretched
- * length), and a wound string's winding with its bare core at each end (the three make the
- * speaking length). Typed into one cell or pasted as a row, they are checked together and any
- * refusal is worded in the display unit.
+ * Entries of the lengths measured along a string that depend on each other, typed into one cell
+ * or pasted as a row, worked out together and refused in the display unit:
+ * <ul>
+ *   <li>speaking, stretched and back length: back + speaking must leave a front length within the
+ *       stretched length;</li>
+ *   <li>a wound string's winding and its bare core at each end: the three make the speaking
+ *       length within {@link Note#WINDING_TOLERANCE}; a bare end alone needs the wound length.</li>
+ * </ul>
+ * Where all three of the winding end up given and not all were entered, one follows from the
+ * others: the wound length when it was not entered, else the bare core at the back, else at the
+ * front. A new speaking length carries a given winding with it (the bare ends stay) unless the
+ * winding is entered too.
  */
 final class MeasuredLengthEdits {
+    /** The columns whose entries are worked out together here. */
+    static final Set<NoteColumn> COLUMNS = EnumSet.of(NoteColumn.LENGTH, NoteColumn.STRETCHED, NoteColumn.BACK,
+            NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK);
+    private static final Set<NoteColumn> WINDING = EnumSet.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+            NoteColumn.BARE_BACK);
+
     private MeasuredLengthEdits() {
     }
 
     /**
-     * The speaking, stretched and back length. A new speaking length carries a given winding with
-     * it, so the bare core at the ends stays as it was (as on a string made again).
-     *
-     * @param typed entries by column: {@link NoteColumn#LENGTH} (required), {@link NoteColumn#STRETCHED},
-     *              {@link NoteColumn#BACK} (blank for none)
-     * @throws IllegalArgumentException when an entry is not a length, or the lengths do not fit together
+     * @param typed   entries by column, of {@link #COLUMNS}; blank for none (the speaking length is required)
+     * @param asShown those of them that hold what the table shows: they count as entered but keep
+     *                the note's own value (a shown value is rounded)
+     * @return the note with the entries taken; the note itself when every entry is as shown
+     * @throws IllegalArgumentException when an entry is not a length the column takes, or the
+     *                                  lengths do not fit together
      */
-    static Note lengths(Note note, Map<NoteColumn, String> typed, DisplayUnits units) {
-        double speaking = typed.containsKey(NoteColumn.LENGTH)
-                ? NoteEdits.length("speaking length", typed.get(NoteColumn.LENGTH).trim(), units) : note.speakingLength();
-        OptionalDouble stretched = typed.containsKey(NoteColumn.STRETCHED)
-                ? optional("stretched length", typed.get(NoteColumn.STRETCHED).trim(), units) : note.stretchedLength();
-        OptionalDouble back = typed.containsKey(NoteColumn.BACK)
-                ? optional("back length", typed.get(NoteColumn.BACK).trim(), units) : note.backLength();
-        if (back.isPresent() && stretched.isPresent() && back.getAsDouble() + speaking >= stretched.getAsDouble()) {
-            throw new IllegalArgumentException("the back length " + text(back.getAsDouble(), units)
-                    + " and the speaking length " + text(speaking, units) + " leave nothing of the stretched length "
-                    + text(stretched.getAsDouble(), units) + " for the front length to the tuning pin");
-        }
-        if (note.woundLength().isPresent()) {
-            double bare = note.speakingLength() - note.woundLength().getAsDouble();
-            if (!(speaking - bare > Note.WINDING_TOLERANCE)) {
-                throw new IllegalArgumentException("the bare core at the ends, " + text(bare, units)
-                        + ", would leave no winding in a speaking length of " + text(speaking, units));
-            }
-        }
-        Note loose = note.withBackLength(OptionalDouble.empty()).withStretchedLength(OptionalDouble.empty());
-        if (speaking != note.speakingLength()) {
-            loose = loose.withSpeakingLength(speaking);
-        }
-        return loose.withStretchedLength(stretched).withBackLength(back);
-    }
-
-    /**
-     * The wound length and the bare core at each end, typed together (a pasted row) or one of
-     * them alone (a cell). The three must make the speaking length (within
-     * {@link Note#WINDING_TOLERANCE}), so where all three end up given and not all were typed,
-     * one follows from the others: the wound length when it was not typed, else the bare core at
-     * the back, else at the front. Three typed at once are taken as typed, and checked.
-     *
-     * @param typed   entries by column: {@link NoteColumn#WOUND}, {@link NoteColumn#BARE_FRONT},
-     *                {@link NoteColumn#BARE_BACK}; blank for none
-     * @param asShown those of them that hold what the table shows: they count as typed but keep the
-     *                note's own value (a shown value is rounded)
-     * @return the note with its winding changed; the note itself when every entry is as shown
-     * @throws IllegalArgumentException when an entry is not a length or the three cannot agree
-     */
-    static Note winding(Note note, Map<NoteColumn, String> typed, Set<NoteColumn> asShown, DisplayUnits units) {
+    static Note apply(Note note, Map<NoteColumn, String> typed, Set<NoteColumn> asShown, DisplayUnits units) {
         if (asShown.containsAll(typed.keySet())) {
             return note;
         }
-        OptionalDouble wound = entry(typed, asShown, NoteColumn.WOUND, note.woundLength(),
-                t -> optional("wound length", t, units));
+        double speaking = entry(typed, asShown, NoteColumn.LENGTH, OptionalDouble.of(note.speakingLength()),
+                t -> OptionalDouble.of(NoteEdits.length("speaking length", t, units))).getAsDouble();
+        OptionalDouble stretched = entry(typed, asShown, NoteColumn.STRETCHED, note.stretchedLength(),
+                t -> optional("stretched length", t, units));
+        OptionalDouble backLength = entry(typed, asShown, NoteColumn.BACK, note.backLength(),
+                t -> optional("back length", t, units));
+        if (backLength.isPresent() && stretched.isPresent()
+                && backLength.getAsDouble() + speaking >= stretched.getAsDouble()) {
+            throw new IllegalArgumentException("the back length " + text(backLength.getAsDouble(), units)
+                    + " and the speaking length " + text(speaking, units) + " leave nothing of the stretched length "
+                    + text(stretched.getAsDouble(), units) + " for the front length to the tuning pin");
+        }
+        boolean windingEntered = typed.keySet().stream().anyMatch(WINDING::contains);
+        if (!note.isWound() && windingEntered && typed.keySet().stream().filter(WINDING::contains)
+                .anyMatch(c -> !typed.get(c).isBlank())) {
+            throw new IllegalArgumentException("a winding and its bare ends belong to a wound string; this note is "
+                    + "plain wire (give it a wrap 1 or an OD first)");
+        }
+        OptionalDouble wound = note.woundLength();
+        if (note.isWound() && wound.isPresent() && speaking != note.speakingLength()) {
+            // the winding moves with the speaking length, the bare core at the ends staying
+            wound = OptionalDouble.of(wound.getAsDouble() + speaking - note.speakingLength());
+        }
+        wound = entry(typed, asShown, NoteColumn.WOUND, wound, t -> optional("wound length", t, units));
         OptionalDouble front = entry(typed, asShown, NoteColumn.BARE_FRONT, note.bareFront(), t -> bare(t, units));
         OptionalDouble back = entry(typed, asShown, NoteColumn.BARE_BACK, note.bareBack(), t -> bare(t, units));
-        if (wound.isPresent() && front.isPresent() && back.isPresent() && typed.size() < 3) {
-            if (!typed.containsKey(NoteColumn.WOUND)) {
-                double w = note.speakingLength() - front.getAsDouble() - back.getAsDouble();
-                if (!(w > Note.WINDING_TOLERANCE)) {
-                    throw new IllegalArgumentException("the bare core at the ends, "
-                            + text(front.getAsDouble() + back.getAsDouble(), units) + ", leaves no winding in the "
-                            + "speaking length " + text(note.speakingLength(), units));
-                }
-                wound = OptionalDouble.of(w);
-            } else if (!typed.containsKey(NoteColumn.BARE_BACK)) {
-                back = OptionalDouble.of(left(note, wound.getAsDouble(), front.getAsDouble(), true, units));
-            } else {
-                front = OptionalDouble.of(left(note, wound.getAsDouble(), back.getAsDouble(), false, units));
+        long windingTyped = typed.keySet().stream().filter(WINDING::contains).count();
+        if (wound.isPresent() && front.isPresent() && back.isPresent()) {
+            double mismatch = wound.getAsDouble() + front.getAsDouble() + back.getAsDouble() - speaking;
+            boolean followRule = windingTyped < 3;
+            // a row copied from the table in inches carries each length rounded to half a shown step
+            boolean rounded = windingTyped == 3 && Math.abs(mismatch) > Note.WINDING_TOLERANCE
+                    && Math.abs(mismatch) <= Note.WINDING_TOLERANCE + roundingSlack(units);
+            if (followRule && !typed.containsKey(NoteColumn.WOUND) || rounded) {
+                wound = OptionalDouble.of(speaking - front.getAsDouble() - back.getAsDouble());
+            } else if (followRule && !typed.containsKey(NoteColumn.BARE_BACK)) {
+                back = OptionalDouble.of(left(speaking, wound.getAsDouble(), front.getAsDouble(), true, units));
+            } else if (followRule) {
+                front = OptionalDouble.of(left(speaking, wound.getAsDouble(), back.getAsDouble(), false, units));
             }
         }
-        return note.withWinding(wound, front, back);
+        if (note.isWound()) {
+            checkWinding(speaking, wound, front, back, units);
+        }
+        return note.withWinding(OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty())
+                .withBackLength(OptionalDouble.empty()).withStretchedLength(OptionalDouble.empty())
+                .withSpeakingLength(speaking).withStretchedLength(stretched).withBackLength(backLength)
+                .withWinding(wound, front, back);
+    }
+
+    /** The checks a sheet's row gets (the reader's), worded in the display unit. */
+    private static void checkWinding(double speaking, OptionalDouble wound, OptionalDouble front, OptionalDouble back,
+                                     DisplayUnits units) {
+        double bare = front.orElse(0) + back.orElse(0);
+        if (wound.isPresent() && !(wound.getAsDouble() > Note.WINDING_TOLERANCE)) {
+            throw new IllegalArgumentException("the bare core at the ends, " + text(speaking - wound.getAsDouble(),
+                    units) + ", leaves no winding in the speaking length " + text(speaking, units));
+        }
+        if (bare > speaking) {
+            throw new IllegalArgumentException("the bare core at the ends, " + text(bare, units) + " together, is "
+                    + "longer than the speaking length " + text(speaking, units));
+        }
+        if (wound.isEmpty() && front.isPresent() != back.isPresent()) {
+            throw new IllegalArgumentException("give both bare ends, or one of them with the wound length");
+        }
+        if (wound.isPresent() && front.isPresent() && back.isPresent()
+                && Math.abs(wound.getAsDouble() + bare - speaking) > Note.WINDING_TOLERANCE) {
+            throw new IllegalArgumentException("winding " + text(wound.getAsDouble(), units) + " + bare core "
+                    + text(front.getAsDouble(), units) + " (front) + " + text(back.getAsDouble(), units) + " (back) = "
+                    + text(wound.getAsDouble() + bare, units) + ", but the speaking length is " + text(speaking, units)
+                    + " (they must agree within " + text(Note.WINDING_TOLERANCE, units) + ")");
+        }
+        if (wound.isPresent() && front.isPresent() != back.isPresent()) {
+            boolean atFront = front.isPresent();
+            left(speaking, wound.getAsDouble(), atFront ? front.getAsDouble() : back.getAsDouble(), atFront, units);
+        }
+    }
+
+    /** @return how far lengths copied from the table may miss by rounding: half a shown step on each of four cells, m */
+    private static double roundingSlack(DisplayUnits units) {
+        double step = units.length() == LengthUnit.MM ? 0.1e-3 : LengthUnit.IN.toMetres(0.01);
+        return 4 * step / 2;
     }
 
     /**
      * Reads one entry of these columns alone, so that a paste can name the cell a bad entry is in
-     * before the row's lengths are checked together.
+     * before the row's lengths are worked out together.
      *
      * @throws IllegalArgumentException when the entry is not a length the column takes
      */
@@ -112,7 +149,7 @@ final class MeasuredLengthEdits {
     }
 
     private static OptionalDouble entry(Map<NoteColumn, String> typed, Set<NoteColumn> asShown, NoteColumn c,
-                                        OptionalDouble now, java.util.function.Function<String, OptionalDouble> read) {
+                                        OptionalDouble now, Function<String, OptionalDouble> read) {
         return !typed.containsKey(c) || asShown.contains(c) ? now : read.apply(typed.get(c).trim());
     }
 
@@ -120,12 +157,13 @@ final class MeasuredLengthEdits {
      * @return the bare core the speaking length leaves at one end beside the winding and the other
      *         end, m; 0 where it falls short by no more than {@link Note#WINDING_TOLERANCE}
      */
-    private static double left(Note note, double wound, double otherEnd, boolean otherIsFront, DisplayUnits units) {
-        double left = note.speakingLength() - wound - otherEnd;
+    private static double left(double speaking, double wound, double otherEnd, boolean otherIsFront,
+                               DisplayUnits units) {
+        double left = speaking - wound - otherEnd;
         if (left < -Note.WINDING_TOLERANCE) {
             throw new IllegalArgumentException("winding " + text(wound, units) + " and " + text(otherEnd, units)
                     + " of bare core at the " + (otherIsFront ? "front" : "back") + " are longer than the speaking "
-                    + "length " + text(note.speakingLength(), units));
+                    + "length " + text(speaking, units));
         }
         return Math.max(0, left);
     }

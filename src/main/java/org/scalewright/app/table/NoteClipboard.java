@@ -24,13 +24,6 @@ import org.scalewright.model.Scale;
  * told with its row and column and nothing changes.
  */
 public final class NoteClipboard {
-    /** The columns of a wound string's winding, taken together from a pasted row. */
-    private static final Set<NoteColumn> WINDING = EnumSet.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
-            NoteColumn.BARE_BACK);
-    /** The speaking, stretched and back length, taken together from a pasted row. */
-    private static final Set<NoteColumn> LENGTHS = EnumSet.of(NoteColumn.LENGTH, NoteColumn.STRETCHED,
-            NoteColumn.BACK);
-
     private static final Pattern NUMBER = Pattern.compile("[+-]?\\d+\\.\\d+");
 
     private final ScaleSession session;
@@ -119,9 +112,8 @@ public final class NoteClipboard {
             NoteRow row = table.rows().get(firstRow + r);
             Note note = changed.getOrDefault(row.key(), row.note());
             // lengths that depend on each other are taken together, as a sheet's row is
-            Map<NoteColumn, String> lengths = new EnumMap<>(NoteColumn.class);
-            Map<NoteColumn, String> winding = new EnumMap<>(NoteColumn.class);
-            Set<NoteColumn> windingAsShown = EnumSet.noneOf(NoteColumn.class);
+            Map<NoteColumn, String> measured = new EnumMap<>(NoteColumn.class);
+            Set<NoteColumn> measuredAsShown = EnumSet.noneOf(NoteColumn.class);
             for (int c = 0; c < width; c++) {
                 NoteColumn col = columns.get(c);
                 String cell = c < block.get(r).size() ? block.get(r).get(c) : "";
@@ -131,26 +123,20 @@ public final class NoteClipboard {
                     return false;
                 }
                 boolean asShown = cell.equals(table.text(row, col));
-                if (WINDING.contains(col) || LENGTHS.contains(col)) {
+                if (MeasuredLengthEdits.COLUMNS.contains(col)) {
                     try {
                         MeasuredLengthEdits.read(col, cell, session.units());
                     } catch (IllegalArgumentException e) {
                         session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + e.getMessage());
                         return false;
                     }
-                }
-                if (WINDING.contains(col)) {
-                    winding.put(col, cell);
+                    measured.put(col, cell);
                     if (asShown) {
-                        windingAsShown.add(col);
+                        measuredAsShown.add(col);
                     }
                     continue;
                 }
                 if (asShown) {
-                    continue;
-                }
-                if (LENGTHS.contains(col)) {
-                    lengths.put(col, cell);
                     continue;
                 }
                 try {
@@ -162,11 +148,9 @@ public final class NoteClipboard {
                 }
             }
             try {
-                Note measured = MeasuredLengthEdits.winding(lengths.isEmpty() ? note
-                        : MeasuredLengthEdits.lengths(note, lengths, session.units()), winding, windingAsShown,
-                        session.units());
-                cells += measured.equals(note) ? 0 : 1;
-                note = measured;
+                Note after = MeasuredLengthEdits.apply(note, measured, measuredAsShown, session.units());
+                cells += after.equals(note) ? 0 : 1;
+                note = after;
             } catch (IllegalArgumentException e) {
                 session.complain("nothing pasted: row " + (r + 1) + " of the block (key " + row.key() + " "
                         + KeyNames.name(row.key()) + "): " + withoutKey(e));

@@ -44,7 +44,8 @@ final class NoteEdits {
             case SECTION -> note.withSection(t);
             case REMARK -> note.withRemark(t);
             case STRINGS -> note.withStrings(strings(t));
-            case LENGTH, STRETCHED, BACK -> MeasuredLengthEdits.lengths(note, Map.of(column, t), units);
+            case LENGTH, STRETCHED, BACK, WOUND, BARE_FRONT, BARE_BACK ->
+                    MeasuredLengthEdits.apply(note, Map.of(column, t), Set.of(), units);
             case WIRE -> note.withWire(wire(t, units));
             case WRAP1 -> wrap1(note, t, units);
             case WRAP2 -> wrap2(note, t, units);
@@ -52,7 +53,6 @@ final class NoteEdits {
             case OD1 -> od1(note, t, units);
             case METAL -> metal(note, t);
             case STRIKE -> note.withStrikePoint(MeasuredLengthEdits.optional("strike point", t, units));
-            case WOUND, BARE_FRONT, BARE_BACK -> MeasuredLengthEdits.winding(note, Map.of(column, t), Set.of(), units);
             default -> throw new IllegalArgumentException(column.header(units) + " is computed and cannot be edited");
         };
     }
@@ -220,7 +220,7 @@ final class NoteEdits {
             throw new IllegalArgumentException(what + " must be " + DisplayFormat.decimals(unit.fromMetres(
                     ScaleSheetReader.SMALLEST_LENGTH), 0, 5) + " to " + DisplayFormat.decimals(unit.fromMetres(
                     ScaleSheetReader.LARGEST_LENGTH), 0, 1) + " " + unit.symbol() + ", was "
-                    + DisplayFormat.decimals(unit.fromMetres(metres), 0, 4));
+                    + DisplayFormat.decimals(unit.fromMetres(metres), 0, 6));
         }
         return metres;
     }

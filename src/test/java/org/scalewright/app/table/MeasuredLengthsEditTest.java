@@ -31,6 +31,7 @@ class MeasuredLengthsEditTest {
         t = new TableOnSheet(dir, """
                 key,strings,length_mm,wire_mm,wrap1_mm,total_mm,back_mm,winding_mm,bare_front_mm,bare_back_mm,strike_mm
                 10,2,1500,1.3,1.05,1700,120,1420,40,40,180
+                20,2,1150,1.1,0.45,,,,,,
                 40,3,690,1.05,,800,,,,,
                 """);
     }
@@ -83,7 +84,7 @@ class MeasuredLengthsEditTest {
         assertTrue(t.session.messageProperty().get().contains("winding 1470 mm and 40 mm of bare core at the front are "
                 + "longer than the speaking length 1500 mm"), t.session.messageProperty().get());
         assertFalse(t.table.edit(40, NoteColumn.BARE_FRONT, "10"));
-        assertTrue(t.session.messageProperty().get().contains("belongs to a wound string"),
+        assertTrue(t.session.messageProperty().get().contains("belong to a wound string"),
                 t.session.messageProperty().get());
         // a length no sheet may hold (over 10 m) would be saved in a sheet that does not open again
         assertFalse(t.table.edit(40, NoteColumn.STRETCHED, "20000"));
@@ -163,6 +164,55 @@ class MeasuredLengthsEditTest {
     }
 
     @Test
+    void entriesASheetWouldRefuseAreRefusedHere() {
+        // one bare end without the wound length: a sheet with it does not open
+        assertFalse(t.table.edit(20, NoteColumn.BARE_FRONT, "10"));
+        assertTrue(t.session.messageProperty().get().contains("give both bare ends, or one of them with the wound "
+                + "length"), t.session.messageProperty().get());
+        assertTrue(t.table.edit(20, NoteColumn.WOUND, "1100"));
+        assertTrue(t.table.edit(20, NoteColumn.BARE_FRONT, "10"), "with the wound length it may be");
+        // a winding on plain wire
+        assertFalse(t.table.edit(40, NoteColumn.WOUND, "600"));
+        assertTrue(t.session.messageProperty().get().contains("belong to a wound string"),
+                t.session.messageProperty().get());
+        // a value too small to be written, told as typed
+        t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        assertFalse(t.table.edit(40, NoteColumn.BACK, "0.00003"));
+        assertTrue(t.session.messageProperty().get().endsWith("was 0.00003"), t.session.messageProperty().get());
+    }
+
+    @Test
+    void aRowCopiedInInchesPastesOntoAnotherKeyThoughEachCellIsRounded() {
+        t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
+        List<NoteColumn> cols = List.of(NoteColumn.LENGTH, NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK);
+        // key 10 agrees within 0.01 mm; shown to 0.01 in, 39.37, 38.01, 0.69 and 0.69, it is 0.508 mm out
+        assertTrue(t.table.edit(10, NoteColumn.LENGTH, "39.3749"));
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(10), List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+                NoteColumn.BARE_BACK), "38.0051\t0.6851\t0.6851\n"), t.session.messageProperty().get());
+        String row = t.table.clipboard().copy(List.of(t.table.indexOf(10)), cols, false, '.');
+        assertEquals("39.37\t38.01\t0.69\t0.69\n", row);
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(20), cols, row), t.session.messageProperty().get());
+        double sum = t.note(20).woundLength().getAsDouble() + t.note(20).bareFront().getAsDouble()
+                + t.note(20).bareBack().getAsDouble();
+        assertEquals(t.note(20).speakingLength(), sum, 1e-12, "the wound length takes what the rounding left");
+        // off by a whole inch is no rounding
+        assertFalse(t.table.clipboard().paste(t.table.indexOf(10), List.of(NoteColumn.WOUND, NoteColumn.BARE_FRONT,
+                NoteColumn.BARE_BACK), "45\t1\t1\n"));
+        assertTrue(t.session.messageProperty().get().contains("winding 45 in + bare core 1 in (front) + 1 in (back) = "
+                + "47 in, but the speaking length is 39.37 in (they must agree within 0.02 in)"),
+                t.session.messageProperty().get());
+    }
+
+    @Test
+    void aPastedRowWithANewSpeakingLengthAndANewWindingIsTakenAsAWhole() {
+        // 30 + 5 + 5 = 40 mm: the old bare core (80 mm) would leave no winding in 40 mm, but the row replaces it
+        List<NoteColumn> cols = List.of(NoteColumn.LENGTH, NoteColumn.WOUND, NoteColumn.BARE_FRONT, NoteColumn.BARE_BACK);
+        assertTrue(t.table.clipboard().paste(t.table.indexOf(10), cols, "40\t30\t5\t5\n"),
+                t.session.messageProperty().get());
+        assertEquals(0.030, t.note(10).woundLength().getAsDouble(), 1e-12);
+    }
+
+    @Test
     void aRefusalIsWordedInTheDisplayUnit() {
         t.session.unitsProperty().set(DisplayUnits.IMPERIAL);
         // 58 in of winding and 40 mm (1.57 in) bare at the front are longer than 1500 mm (59.06 in)
@@ -183,7 +233,7 @@ class MeasuredLengthsEditTest {
         // a speaking length the bare ends alone fill is refused, and nothing changes
         Scale before = t.session.scale();
         assertFalse(t.table.edit(10, NoteColumn.LENGTH, "80"));
-        assertTrue(t.session.messageProperty().get().contains("the bare core at the ends, 80 mm, would leave no winding"),
+        assertTrue(t.session.messageProperty().get().contains("the bare core at the ends, 80 mm, leaves no winding"),
                 t.session.messageProperty().get());
         assertSame(before, t.session.scale());
         assertTrue(t.table.edit(40, NoteColumn.LENGTH, "700"), "plain wire: only the speaking length changes");
