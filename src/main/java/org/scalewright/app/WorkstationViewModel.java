@@ -1,11 +1,11 @@
 package org.scalewright.app;
 
-import org.scalewright.app.table.NoteColumn;
-import java.util.Set;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
 import javafx.beans.property.BooleanProperty;
@@ -25,6 +25,7 @@ import org.scalewright.app.session.StrengthChoice;
 import org.scalewright.app.session.TypedEntry;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.app.table.FlagsViewModel;
+import org.scalewright.app.table.NoteColumn;
 import org.scalewright.app.table.NoteTableViewModel;
 import javafx.collections.ObservableList;
 import org.scalewright.io.AtomicFiles;
@@ -211,7 +212,7 @@ public final class WorkstationViewModel {
             if (c.shownWhenChosen()) {
                 table.shownProperty(c).set(kept.contains(c.settingName()));
                 table.shownProperty(c).addListener((o, a, b) -> {
-                    Set<String> now = new java.util.TreeSet<>(settings.shownColumns());
+                    Set<String> now = new TreeSet<>(settings.shownColumns());
                     if (b) {
                         now.add(c.settingName());
                     } else {

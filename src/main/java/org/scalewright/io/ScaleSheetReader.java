@@ -19,6 +19,7 @@ import org.scalewright.model.SheetColumn;
 import org.scalewright.model.WireSize;
 import org.scalewright.model.WireNotation;
 import org.scalewright.model.WireSizeTable;
+import org.scalewright.model.WindingFit;
 import org.scalewright.model.Wrap;
 import org.scalewright.model.WrapMetal;
 
@@ -168,7 +169,7 @@ public final class ScaleSheetReader {
             Double front = bare(SheetColumn.BARE_FRONT);
             Double back = bare(SheetColumn.BARE_BACK);
             Double backLength = length(SheetColumn.BACK_LENGTH, false);
-            if (backLength != null && total != null && length != null && backLength + length >= total) {
+            if (length != null && !Note.backLengthFits(opt(backLength), length, opt(total))) {
                 problem(SheetColumn.BACK_LENGTH, "the back length " + withUnit(SheetColumn.BACK_LENGTH) + " and the "
                         + "speaking length " + withUnit(SheetColumn.SPEAKING_LENGTH) + " leave nothing of the stretched "
                         + "length " + withUnit(SheetColumn.TOTAL_LENGTH) + " (" + header.name(SheetColumn.TOTAL_LENGTH)
@@ -309,47 +310,34 @@ public final class ScaleSheetReader {
          * @return true when they agree (or none is given)
          */
         private boolean bareEndsAgree(Wrap wrap, double length, Double winding, Double front, Double back) {
-            if (front == null && back == null) {
-                return true;
-            }
+            WindingFit fit = WindingFit.of(wrap != null, length, opt(winding), opt(front), opt(back));
             SheetColumn given = front != null ? SheetColumn.BARE_FRONT : SheetColumn.BARE_BACK;
-            if (wrap == null) {
-                problem(given, "bare core at the ends belongs to a wound string; this row has no winding (give "
-                        + header.name(SheetColumn.WRAP1) + " or " + header.name(SheetColumn.OD) + ")");
-                return false;
-            }
-            double l = length;
             double sum = (front == null ? 0 : front) + (back == null ? 0 : back);
-            if (sum > l) {
-                problem(given, "bare core at the ends, " + lengthText(sum, header.unit(given)) + " together, is longer "
-                        + "than the speaking length, " + lengthText(l, header.unit(given)));
-                return false;
-            }
-            if (front == null || back == null) {
-                if (winding == null) {
-                    problem(given, "give both " + header.name(SheetColumn.BARE_FRONT) + " and "
-                            + header.name(SheetColumn.BARE_BACK) + ", or one of them with the wound length ("
-                            + header.name(SheetColumn.WINDING_LENGTH) + ")");
-                    return false;
+            switch (fit) {
+                case FITS -> {
+                    return true;
                 }
-                if (winding + sum > l + Note.WINDING_TOLERANCE) {
-                    problem(SheetColumn.WINDING_LENGTH, "the winding " + cell(SheetColumn.WINDING_LENGTH) + " "
-                            + unitOf(SheetColumn.WINDING_LENGTH) + " and the bare core " + cell(given) + " "
-                            + unitOf(given) + " are longer than the speaking length together");
-                    return false;
-                }
-                return true;
-            }
-            if (winding != null && Math.abs(winding + sum - l) > Note.WINDING_TOLERANCE) {
-                problem(SheetColumn.WINDING_LENGTH, "winding + bare core at the front + at the back must add up to "
-                        + "the speaking length within " + lengthText(Note.WINDING_TOLERANCE, LengthUnit.MM) + ": "
-                        + cell(SheetColumn.WINDING_LENGTH) + " + " + cell(SheetColumn.BARE_FRONT) + " + "
-                        + cell(SheetColumn.BARE_BACK) + " is " + lengthText(winding + sum,
+                case BARE_ON_PLAIN_WIRE -> problem(given, "bare core at the ends belongs to a wound string; this row "
+                        + "has no winding (give " + header.name(SheetColumn.WRAP1) + " or " + header.name(SheetColumn.OD)
+                        + ")");
+                case BARE_LONGER_THAN_SPEAKING -> problem(given, "bare core at the ends, " + lengthText(sum,
+                        header.unit(given)) + " together, is longer than the speaking length, " + lengthText(length,
+                        header.unit(given)));
+                case ONE_END_WITHOUT_WINDING -> problem(given, "give both " + header.name(SheetColumn.BARE_FRONT)
+                        + " and " + header.name(SheetColumn.BARE_BACK) + ", or one of them with the wound length ("
+                        + header.name(SheetColumn.WINDING_LENGTH) + ")");
+                case WINDING_AND_END_TOO_LONG -> problem(SheetColumn.WINDING_LENGTH, "the winding "
+                        + cell(SheetColumn.WINDING_LENGTH) + " " + unitOf(SheetColumn.WINDING_LENGTH)
+                        + " and the bare core " + cell(given) + " " + unitOf(given)
+                        + " are longer than the speaking length together");
+                case DO_NOT_ADD_UP -> problem(SheetColumn.WINDING_LENGTH, "winding + bare core at the front + at the "
+                        + "back must add up to the speaking length within " + lengthText(Note.WINDING_TOLERANCE,
+                        LengthUnit.MM) + ": " + cell(SheetColumn.WINDING_LENGTH) + " + " + cell(SheetColumn.BARE_FRONT)
+                        + " + " + cell(SheetColumn.BARE_BACK) + " is " + lengthText(winding + sum,
                         header.unit(SheetColumn.WINDING_LENGTH)) + ", the speaking length "
-                        + lengthText(l, header.unit(SheetColumn.WINDING_LENGTH)));
-                return false;
+                        + lengthText(length, header.unit(SheetColumn.WINDING_LENGTH)));
             }
-            return true;
+            return false;
         }
 
         /** @return a bare end in metres: 0 (winding right to the termination) or a length as {@link #length} */

@@ -87,33 +87,16 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
         bareBack.ifPresent(v -> Checks.nonNegative("bare core at the back", v, "mm", 1e3));
         backLength = orEmpty(backLength);
         backLength.ifPresent(v -> Checks.positive("back length", v, "mm", 1e3));
-        if (backLength.isPresent() && stretchedLength.isPresent()
-                && backLength.getAsDouble() + speakingLength >= stretchedLength.getAsDouble()) {
+        if (!backLengthFits(backLength, speakingLength, stretchedLength)) {
             throw new IllegalArgumentException("key " + key + ": back length " + Checks.format(backLength.getAsDouble()
                     * 1e3) + " mm + speaking length " + Checks.format(speakingLength * 1e3) + " mm leave nothing of "
                     + "the stretched length " + Checks.format(stretchedLength.getAsDouble() * 1e3) + " mm (hitch pin "
                     + "to tuning pin) for the front length to the tuning pin");
         }
-        if (wrap == null && (bareFront.isPresent() || bareBack.isPresent())) {
-            throw new IllegalArgumentException("key " + key + ": bare core at the ends belongs to a wound string");
-        }
-        double bareSum = bareFront.orElse(0) + bareBack.orElse(0);
-        if (bareSum > speakingLength) {
-            throw new IllegalArgumentException("key " + key + ": bare core at the ends (" + Checks.format(bareSum * 1e3)
-                    + " mm) is longer than the speaking length " + Checks.format(speakingLength * 1e3) + " mm");
-        }
-        if (bareFront.isPresent() && bareBack.isPresent() && woundLength.isPresent()
-                && Math.abs(woundLength.getAsDouble() + bareSum - speakingLength) > WINDING_TOLERANCE) {
-            throw new IllegalArgumentException(windingMismatch(key, speakingLength, woundLength.getAsDouble(),
-                    bareFront.getAsDouble(), bareBack.getAsDouble()));
-        }
-        if (woundLength.isPresent() && bareFront.isPresent() != bareBack.isPresent()) {
-            boolean front = bareFront.isPresent();
-            double end = front ? bareFront.getAsDouble() : bareBack.getAsDouble();
-            if (woundLength.getAsDouble() + end > speakingLength + WINDING_TOLERANCE) {
-                throw new IllegalArgumentException(windingTooLong(key, speakingLength, woundLength.getAsDouble(),
-                        end, front));
-            }
+        WindingFit fit = WindingFit.of(wrap != null, speakingLength, woundLength, bareFront, bareBack);
+        if (fit != WindingFit.FITS) {
+            throw new IllegalArgumentException("key " + key + ": " + fit.words(speakingLength, woundLength, bareFront,
+                    bareBack, v -> Checks.format(v * 1e3) + " mm"));
         }
         if (wrap != null && wrap.givenByOd()) {
             double d = wire.diameter();
@@ -136,20 +119,14 @@ public record Note(int key, int strings, double speakingLength, CoreWire wire, W
                 OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(), "", "");
     }
 
-    /** @return the message for a wound length and bare ends that do not add up to the speaking length */
-    public static String windingMismatch(int key, double length, double wound, double front, double back) {
-        return "key " + key + ": winding " + Checks.format(wound * 1e3) + " mm + bare core "
-                + Checks.format(front * 1e3) + " mm (front) + " + Checks.format(back * 1e3) + " mm (back) = "
-                + Checks.format((wound + front + back) * 1e3) + " mm, but the speaking length is "
-                + Checks.format(length * 1e3) + " mm (they must agree within "
-                + Checks.format(WINDING_TOLERANCE * 1e3) + " mm)";
-    }
-
-    /** @return the message for a wound length and one bare end that are longer than the speaking length */
-    public static String windingTooLong(int key, double length, double wound, double end, boolean front) {
-        return "key " + key + ": winding " + Checks.format(wound * 1e3) + " mm and " + Checks.format(end * 1e3)
-                + " mm of bare core at the " + (front ? "front" : "back") + " are longer than the speaking length "
-                + Checks.format(length * 1e3) + " mm";
+    /**
+     * The back length and the speaking length must leave a front length to the tuning pin within
+     * the stretched length (hitch pin to tuning pin): one rule for the reader, the model and the window.
+     *
+     * @return true when they do, or when the back or the stretched length is not given
+     */
+    public static boolean backLengthFits(OptionalDouble back, double speaking, OptionalDouble stretched) {
+        return back.isEmpty() || stretched.isEmpty() || back.getAsDouble() + speaking < stretched.getAsDouble();
     }
 
     /**

@@ -2,14 +2,14 @@ package org.scalewright.app.session;
 
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
-import java.util.TreeSet;
-import java.util.Set;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.TreeSet;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.ForceUnit;
 import org.scalewright.model.LengthUnit;

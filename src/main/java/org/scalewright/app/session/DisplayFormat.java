@@ -27,8 +27,12 @@ public final class DisplayFormat {
 
     /** @return a speaking length (m) in the display length unit: {@code 1480.0} mm or {@code 58.27} in */
     public static String length(double metres, DisplayUnits u) {
-        double v = u.length().fromMetres(metres);
-        return u.length() == LengthUnit.MM ? fixed(v, 1) : fixed(v, 2);
+        return fixed(u.length().fromMetres(metres), lengthDecimals(u));
+    }
+
+    /** @return the decimals a length is shown with: 1 in mm (0.1 mm), 2 in inches (0.01 in) */
+    public static int lengthDecimals(DisplayUnits u) {
+        return u.length() == LengthUnit.MM ? 1 : 2;
     }
 
     /** @return a wire diameter (m) in the display length unit: {@code 1.100} mm or {@code 0.0433} in */

@@ -6,9 +6,11 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.Function;
 import org.scalewright.app.session.DisplayFormat;
+import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.DisplayUnits;
 import org.scalewright.model.LengthUnit;
 import org.scalewright.model.Note;
+import org.scalewright.model.WindingFit;
 
 /**
  * Entries of the lengths measured along a string that depend on each other, typed into one cell
@@ -52,14 +54,12 @@ final class MeasuredLengthEdits {
                 t -> optional("stretched length", t, units));
         OptionalDouble backLength = entry(typed, asShown, NoteColumn.BACK, note.backLength(),
                 t -> optional("back length", t, units));
-        if (backLength.isPresent() && stretched.isPresent()
-                && backLength.getAsDouble() + speaking >= stretched.getAsDouble()) {
+        if (!Note.backLengthFits(backLength, speaking, stretched)) {
             throw new IllegalArgumentException("the back length " + text(backLength.getAsDouble(), units)
                     + " and the speaking length " + text(speaking, units) + " leave nothing of the stretched length "
                     + text(stretched.getAsDouble(), units) + " for the front length to the tuning pin");
         }
-        boolean windingEntered = typed.keySet().stream().anyMatch(WINDING::contains);
-        if (!note.isWound() && windingEntered && typed.keySet().stream().filter(WINDING::contains)
+        if (!note.isWound() && typed.keySet().stream().filter(WINDING::contains)
                 .anyMatch(c -> !typed.get(c).isBlank())) {
             throw new IllegalArgumentException("a winding and its bare ends belong to a wound string; this note is "
                     + "plain wire (give it a wrap 1 or an OD first)");
@@ -96,37 +96,25 @@ final class MeasuredLengthEdits {
                 .withWinding(wound, front, back);
     }
 
-    /** The checks a sheet's row gets (the reader's), worded in the display unit. */
+    /**
+     * The rule a sheet's row is held to ({@link WindingFit}), worded in the display unit, and a
+     * winding worked out here long enough to be written in a sheet.
+     */
     private static void checkWinding(double speaking, OptionalDouble wound, OptionalDouble front, OptionalDouble back,
                                      DisplayUnits units) {
-        double bare = front.orElse(0) + back.orElse(0);
-        if (wound.isPresent() && !(wound.getAsDouble() > Note.WINDING_TOLERANCE)) {
+        if (wound.isPresent() && !(wound.getAsDouble() >= ScaleSheetReader.SMALLEST_LENGTH)) {
             throw new IllegalArgumentException("the bare core at the ends, " + text(speaking - wound.getAsDouble(),
                     units) + ", leaves no winding in the speaking length " + text(speaking, units));
         }
-        if (bare > speaking) {
-            throw new IllegalArgumentException("the bare core at the ends, " + text(bare, units) + " together, is "
-                    + "longer than the speaking length " + text(speaking, units));
-        }
-        if (wound.isEmpty() && front.isPresent() != back.isPresent()) {
-            throw new IllegalArgumentException("give both bare ends, or one of them with the wound length");
-        }
-        if (wound.isPresent() && front.isPresent() && back.isPresent()
-                && Math.abs(wound.getAsDouble() + bare - speaking) > Note.WINDING_TOLERANCE) {
-            throw new IllegalArgumentException("winding " + text(wound.getAsDouble(), units) + " + bare core "
-                    + text(front.getAsDouble(), units) + " (front) + " + text(back.getAsDouble(), units) + " (back) = "
-                    + text(wound.getAsDouble() + bare, units) + ", but the speaking length is " + text(speaking, units)
-                    + " (they must agree within " + text(Note.WINDING_TOLERANCE, units) + ")");
-        }
-        if (wound.isPresent() && front.isPresent() != back.isPresent()) {
-            boolean atFront = front.isPresent();
-            left(speaking, wound.getAsDouble(), atFront ? front.getAsDouble() : back.getAsDouble(), atFront, units);
+        WindingFit fit = WindingFit.of(true, speaking, wound, front, back);
+        if (fit != WindingFit.FITS) {
+            throw new IllegalArgumentException(fit.words(speaking, wound, front, back, m -> text(m, units)));
         }
     }
 
     /** @return how far lengths copied from the table may miss by rounding: half a shown step on each of four cells, m */
     private static double roundingSlack(DisplayUnits units) {
-        double step = units.length() == LengthUnit.MM ? 0.1e-3 : LengthUnit.IN.toMetres(0.01);
+        double step = units.length().toMetres(Math.pow(10, -DisplayFormat.lengthDecimals(units)));
         return 4 * step / 2;
     }
 
@@ -161,9 +149,10 @@ final class MeasuredLengthEdits {
                                DisplayUnits units) {
         double left = speaking - wound - otherEnd;
         if (left < -Note.WINDING_TOLERANCE) {
-            throw new IllegalArgumentException("winding " + text(wound, units) + " and " + text(otherEnd, units)
-                    + " of bare core at the " + (otherIsFront ? "front" : "back") + " are longer than the speaking "
-                    + "length " + text(speaking, units));
+            OptionalDouble end = OptionalDouble.of(otherEnd);
+            OptionalDouble none = OptionalDouble.empty();
+            throw new IllegalArgumentException(WindingFit.WINDING_AND_END_TOO_LONG.words(speaking,
+                    OptionalDouble.of(wound), otherIsFront ? end : none, otherIsFront ? none : end, m -> text(m, units)));
         }
         return Math.max(0, left);
     }
@@ -190,7 +179,7 @@ final class MeasuredLengthEdits {
 
     /** @return a length in the display unit with the unit: {@code 1470 mm}, {@code 57.87 in} */
     private static String text(double metres, DisplayUnits units) {
-        double v = units.length().fromMetres(metres);
-        return DisplayFormat.decimals(v, 0, units.length() == LengthUnit.MM ? 1 : 2) + " " + units.length().symbol();
+        return DisplayFormat.decimals(units.length().fromMetres(metres), 0, DisplayFormat.lengthDecimals(units)) + " "
+                + units.length().symbol();
     }
 }

@@ -143,7 +143,7 @@ public final class NoteClipboard {
                     note = edits.apply(note, col, cell, session.units());
                     cells++;
                 } catch (IllegalArgumentException e) {
-                    session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + withoutKey(e));
+                    session.complain("nothing pasted: " + place(firstRow, columns, r, c) + ": " + NoteEdits.refusal(e));
                     return false;
                 }
             }
@@ -153,7 +153,7 @@ public final class NoteClipboard {
                 note = after;
             } catch (IllegalArgumentException e) {
                 session.complain("nothing pasted: row " + (r + 1) + " of the block (key " + row.key() + " "
-                        + KeyNames.name(row.key()) + "): " + withoutKey(e));
+                        + KeyNames.name(row.key()) + "): " + NoteEdits.refusal(e));
                 return false;
             }
             changed.put(row.key(), note);
@@ -164,11 +164,6 @@ public final class NoteClipboard {
         }
         String description = "paste of " + height + " × " + width + " cells at key " + table.rows().get(firstRow).key();
         return session.edit(description, s -> withNotes(s, changed));
-    }
-
-    /** @return the refusal without the key the model puts first (the place already names it) */
-    static String withoutKey(IllegalArgumentException e) {
-        return e.getMessage().replaceFirst("^key -?\\d+: ", "");
     }
 
     private static Scale withNotes(Scale s, Map<Integer, Note> notes) {

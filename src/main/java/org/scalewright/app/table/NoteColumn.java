@@ -166,7 +166,7 @@ public enum NoteColumn {
                     + "from the core and the OD";
             case METAL -> "wrap metal: copper, iron or steel";
             case STRETCHED -> "stretched length, hitch pin to tuning pin; used for the elongation of a pitch raise";
-            case BACK -> "back length, bridge pin to hitch pin; makes the wound-string order's winding start exact";
+            case BACK -> "back length, bridge pin to hitch pin; the wound-string order's winding start is measured from it";
             case WOUND -> "wound length inside the speaking length, for the wound-string order; with both bare ends "
                     + "given, a new wound length changes the bare core at the back";
             case BARE_FRONT -> "bare core of a wound string between the front termination and the winding; with "

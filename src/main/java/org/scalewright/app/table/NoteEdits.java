@@ -193,6 +193,14 @@ final class NoteEdits {
         throw new IllegalArgumentException("wrap metal must be copper, iron or steel, was '" + t + "'");
     }
 
+    /**
+     * @return a refusal as the table says it: without the key the model puts first, as the table
+     *         names the key and column itself
+     */
+    static String refusal(IllegalArgumentException e) {
+        return e.getMessage().replaceFirst("^key -?\\d+: ", "");
+    }
+
     /** @return a required length typed in a cell, m, &gt; 0 */
     static double length(String what, String t, DisplayUnits units) {
         if (t.isEmpty()) {

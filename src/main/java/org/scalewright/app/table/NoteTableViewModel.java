@@ -4,11 +4,11 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import javafx.beans.property.SimpleBooleanProperty;
-import javafx.beans.property.BooleanProperty;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.value.ObservableBooleanValue;
 import javafx.beans.value.ObservableValue;
 import javafx.collections.FXCollections;
@@ -132,7 +132,7 @@ public final class NoteTableViewModel {
             changed = edits.apply(note, column, text, session.units());
         } catch (IllegalArgumentException e) {
             session.complain("key " + key + " (" + KeyNames.name(key) + "), " + label + ": "
-                    + NoteClipboard.withoutKey(e));
+                    + NoteEdits.refusal(e));
             return false;
         }
         String description = label + " of key " + key + " " + KeyNames.name(key);
