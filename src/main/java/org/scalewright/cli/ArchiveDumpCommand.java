@@ -27,7 +27,7 @@ public final class ArchiveDumpCommand extends ArchiveSubcommand {
         } catch (IOException e) {
             throw new UserError("cannot write " + out + ": " + e.getMessage());
         }
-        counts.forEach((f, n) -> terminal().println("  " + f + ": " + n + " rows"));
+        printRowCounts(counts);
         terminal().println("wrote " + out);
         return ExitStatus.OK;
     }

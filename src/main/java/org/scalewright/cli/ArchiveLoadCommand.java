@@ -22,7 +22,7 @@ public final class ArchiveLoadCommand extends ArchiveSubcommand {
         try (Archive a = db.open()) {
             counts = ArchiveDump.load(a, folder);
         }
-        counts.forEach((f, n) -> terminal().println("  " + f + ": " + n + " rows"));
+        printRowCounts(counts);
         terminal().println("loaded " + folder + " into " + db.file());
         return ExitStatus.OK;
     }

@@ -1,6 +1,7 @@
 package org.scalewright.cli;
 
 import java.io.PrintWriter;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -17,5 +18,10 @@ abstract class ArchiveSubcommand implements Callable<Integer> {
     /** @return where the command prints its answer */
     final PrintWriter terminal() {
         return spec.commandLine().getOut();
+    }
+
+    /** Prints how many rows each file of a dump holds, one line a file, as {@code dump} and {@code load} tell it. */
+    final void printRowCounts(Map<String, Integer> rowsPerFile) {
+        rowsPerFile.forEach((file, rows) -> terminal().println("  " + file + ": " + rows + " rows"));
     }
 }
