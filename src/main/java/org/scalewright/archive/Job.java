@@ -1,6 +1,7 @@
 package org.scalewright.archive;
 
 import java.time.LocalDate;
+import java.util.List;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 
@@ -16,6 +17,10 @@ import java.util.OptionalInt;
  */
 public record Job(LocalDate date, String kind, String notes, OptionalDouble a4, String strengthTable,
                   OptionalInt version) {
+    /** The kinds of job a workshop usually records, offered first; any other text is a kind as well. */
+    public static final List<String> USUAL_KINDS = List.of("restringing", "pitch raise", "rescale", "tuning",
+            "regulation", "repair");
+
     /** @throws ArchiveRefused when the kind is blank */
     public Job {
         kind = kind == null ? "" : kind.strip();

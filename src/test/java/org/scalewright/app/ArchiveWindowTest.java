@@ -74,6 +74,7 @@ class ArchiveWindowTest {
         TableView<ArchiveViewModel.VersionRow> versions = robot.lookup("#archive-versions").queryAs(TableView.class);
         assertEquals(1, versions.getItems().size());
 
+        robot.clickOn("Broken strings");
         robot.interact(() -> model.session().selectedKeyProperty().set(66));
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(robot.lookup("#archive-break-key").queryLabeled().getText().startsWith("66 D6"));
@@ -101,6 +102,32 @@ class ArchiveWindowTest {
                 "the row is drawn in the list");
         try (Archive a = Archive.open(db)) {
             assertEquals(1, a.breaks("grand-190").size(), "kept in the archive file");
+        }
+    }
+
+    @Test
+    void aJobLoggedFromItsTabShowsInTheListWithTheWorkingPitch(FxRobot robot) {
+        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
+        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
+                .filter(t -> "archive-tab".equals(t.getId())).findFirst().orElseThrow()));
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("Jobs");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("440", robot.lookup("#archive-job-a4").queryTextInputControl().getText(),
+                "the pitch starts as the working A4");
+        robot.clickOn("#archive-job-kind").write("pitch raise");
+        robot.doubleClickOn("#archive-job-notes").write("from 435, two passes");
+        robot.clickOn("#archive-log-job");
+        WaitForAsyncUtils.waitForFxEvents();
+
+        @SuppressWarnings("unchecked")
+        TableView<ArchiveViewModel.JobRow> jobs = robot.lookup("#archive-jobs").queryAs(TableView.class);
+        assertEquals(1, jobs.getItems().size(), robot.lookup("#archive-problem").queryLabeled().getText());
+        assertEquals("pitch raise", jobs.getItems().get(0).kind());
+        assertEquals("440", jobs.getItems().get(0).a4());
+        assertEquals("from 435, two passes", jobs.getItems().get(0).notes());
+        try (Archive a = Archive.open(db)) {
+            assertEquals(1, a.jobs("grand-190").size(), "kept in the archive file");
         }
     }
 }

@@ -6,8 +6,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import javafx.scene.Node;
 import javafx.scene.Parent;
 import javafx.scene.control.Labeled;
@@ -16,12 +19,20 @@ import javafx.scene.control.TableView;
 import javafx.scene.control.TextField;
 import javafx.scene.text.Text;
 import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.ScriptedPrompts;
 import org.scalewright.app.session.TestSheets;
 import org.scalewright.app.table.NoteColumn;
+import org.scalewright.archive.Archive;
+import org.scalewright.archive.Instrument;
+import org.scalewright.archive.Job;
+import org.scalewright.io.ScaleSheetReader;
+import org.scalewright.model.BreakActivity;
+import org.scalewright.model.BreakPlace;
+import org.scalewright.model.StringBreak;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -30,7 +41,8 @@ import org.testfx.util.WaitForAsyncUtils;
 /**
  * The window at an ordinary laptop's 1366×768 (1346×728 inside the frame, as the window opens
  * there), each tab with its tool run on the demo grand: no label, button or table cell on
- * screen is cut short with an ellipsis. With {@code -Dscalewright.tour=FOLDER} it also saves a
+ * screen is cut short with an ellipsis. The instruments tab is looked at on an archive of its own
+ * holding the demo grand with a job and a break. With {@code -Dscalewright.tour=FOLDER} it also saves a
  * picture of each tab there (the pictures the README's window section is checked against).
  */
 @ExtendWith(ApplicationExtension.class)
@@ -40,16 +52,36 @@ class ScreenFitWindowTest {
     private final ScriptedPrompts prompts = new ScriptedPrompts();
     private WorkstationView view;
     private Stage stage;
+    private Path archive;
 
     @Start
-    void start(Stage stage) {
+    void start(Stage stage) throws Exception {
         this.stage = stage;
+        archive = Files.createTempDirectory("scalewright-screen-fit").resolve("workshop.db");
+        try (Archive a = Archive.create(archive)) {
+            a.addInstrument(Instrument.named("grand-190"));
+            a.saveVersion("grand-190", ScaleSheetReader.standard().read(TestSheets.demoGrand()), "as strung",
+                    OptionalInt.empty(), LocalDate.of(2026, 11, 2));
+            a.logJob("grand-190", new Job(LocalDate.of(2026, 11, 2), "restringing", "treble from key 52, new wire",
+                    OptionalDouble.of(440), "ASTM A228 minimum tensile strength", OptionalInt.of(1)));
+            a.logBreak("grand-190", new StringBreak(LocalDate.of(2026, 11, 20), 66, OptionalInt.of(2),
+                    OptionalDouble.of(1178), BreakActivity.PITCH_RAISE, BreakPlace.SPEAKING_LENGTH, "",
+                    "second pass"), OptionalInt.empty());
+        }
+        System.setProperty("scalewright.archive", archive.toString());
         WorkstationViewModel model = new WorkstationViewModel(new ScaleSession(), prompts);
         view = new WorkstationView(stage, model);
         assertTrue(model.openSheet(TestSheets.demoGrand(), false));
         stage.setWidth(WIDTH);
         stage.setHeight(HEIGHT);
         stage.show();
+    }
+
+    @AfterEach
+    void forgetTheArchive() throws IOException {
+        System.clearProperty("scalewright.archive");
+        Files.deleteIfExists(archive);
+        Files.deleteIfExists(archive.getParent());
     }
 
     private void openTab(FxRobot robot, String id) {
@@ -109,6 +141,16 @@ class ScreenFitWindowTest {
 
         openTab(robot, "exports-tab");
         look(robot, "exports-tab", clipped);
+
+        openTab(robot, "archive-tab");
+        look(robot, "archive-versions", clipped);
+        TabPane records = robot.lookup(n -> n instanceof TabPane t && t.getTabs().stream()
+                .anyMatch(tab -> "archive-jobs-tab".equals(tab.getId()))).queryAs(TabPane.class);
+        robot.interact(() -> records.getSelectionModel().select(1));
+        look(robot, "archive-jobs", clipped);
+        robot.interact(() -> view.model().session().selectedKeyProperty().set(66));
+        robot.interact(() -> records.getSelectionModel().select(2));
+        look(robot, "archive-breaks", clipped);
 
         robot.interact(() -> view.model().setUnits(WorkstationViewModel.UnitChoice.IMPERIAL));
         openTab(robot, "flags-tab");

@@ -2,13 +2,13 @@ package org.scalewright.app.archive;
 
 import java.util.List;
 import javafx.beans.binding.Bindings;
-import javafx.geometry.Orientation;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
-import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
 import javafx.scene.control.TableView;
 import javafx.scene.control.Tooltip;
 import javafx.scene.layout.BorderPane;
@@ -18,15 +18,17 @@ import javafx.scene.layout.VBox;
 import javafx.util.StringConverter;
 import org.scalewright.app.tool.Tool;
 import org.scalewright.app.tool.ToolLayout;
+import org.scalewright.archive.Job;
 import org.scalewright.archive.VersionLabel;
 import org.scalewright.model.BreakActivity;
 import org.scalewright.model.BreakPlace;
 
 /**
- * The instruments panel: the archive file and its instruments on top; the chosen instrument's scale
- * versions on the left (open one, use one as the reference, save the working scale as a new one) and
- * its broken strings on the right, under the form that logs a break on the selected key. Binds and
- * lays out {@link ArchiveViewModel} only.
+ * The instruments panel: the archive file and its instruments on top; under them, a tab each for
+ * the chosen instrument's scale versions (open one, use one as the reference, save the working scale
+ * as a new one), its jobs (under the form that logs one) and its broken strings (under the form that
+ * logs a break on the selected key), each the panel's whole width so that a laptop screen shows
+ * their columns. Binds and lays out {@link ArchiveViewModel} only.
  */
 public final class ArchiveView {
     private final BorderPane root = new BorderPane();
@@ -39,7 +41,11 @@ public final class ArchiveView {
         Label file = new Label();
         file.textProperty().bind(Bindings.createStringBinding(() -> String.valueOf(model.fileProperty().get()),
                 model.fileProperty()));
-        file.setMaxWidth(320);
+        file.setMaxWidth(560);
+        file.setTextOverrun(javafx.scene.control.OverrunStyle.CENTER_ELLIPSIS);
+        Tooltip whole = new Tooltip();
+        whole.textProperty().bind(file.textProperty());
+        file.setTooltip(whole);
         Button other = new Button("Other file…");
         other.setTooltip(new Tooltip("use another archive file (remembered for the next start)"));
         other.setOnAction(e -> model.chooseArchive());
@@ -59,10 +65,15 @@ public final class ArchiveView {
         message.textProperty().bind(model.messageProperty());
         root.setTop(new VBox(4, top, problem, message));
 
-        SplitPane center = new SplitPane(versions(model), breaks(model));
-        center.setOrientation(Orientation.HORIZONTAL);
-        center.setDividerPositions(0.45);
-        root.setCenter(center);
+        Tab versions = new Tab("Scale versions", versions(model));
+        versions.setId("archive-versions-tab");
+        Tab jobs = new Tab("Jobs", jobs(model));
+        jobs.setId("archive-jobs-tab");
+        Tab breaks = new Tab("Broken strings", breaks(model));
+        breaks.setId("archive-breaks-tab");
+        TabPane records = new TabPane(versions, jobs, breaks);
+        records.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        root.setCenter(records);
         this.model = model;
     }
 
@@ -71,11 +82,11 @@ public final class ArchiveView {
         table.setId("archive-versions");
         table.setPlaceholder(new Label("No versions yet: save the working scale as the first."));
         table.getColumns().setAll(List.of(
-                ToolLayout.<ArchiveViewModel.VersionRow>column("no.", 36, true, r -> Integer.toString(r.number())),
-                ToolLayout.<ArchiveViewModel.VersionRow>column("date", 84, false, ArchiveViewModel.VersionRow::date),
-                ToolLayout.<ArchiveViewModel.VersionRow>column("label", 96, false, ArchiveViewModel.VersionRow::label),
+                ToolLayout.<ArchiveViewModel.VersionRow>column("no.", 32, true, r -> Integer.toString(r.number())),
+                ToolLayout.<ArchiveViewModel.VersionRow>column("date", 80, false, ArchiveViewModel.VersionRow::date),
+                ToolLayout.<ArchiveViewModel.VersionRow>column("label", 84, false, ArchiveViewModel.VersionRow::label),
                 ToolLayout.<ArchiveViewModel.VersionRow>column("from", 40, true, ArchiveViewModel.VersionRow::from),
-                ToolLayout.<ArchiveViewModel.VersionRow>column("title", 200, false,
+                ToolLayout.<ArchiveViewModel.VersionRow>column("title", 510, false,
                         ArchiveViewModel.VersionRow::title)));
         VBox.setVgrow(table, Priority.ALWAYS);
         Button open = new Button("Open");
@@ -99,7 +110,53 @@ public final class ArchiveView {
         save.setOnAction(e -> model.saveWorkingScale());
         save.disableProperty().bind(model.instrumentProperty().isEmpty());
         FlowPane buttons = new FlowPane(6, 4, open, reference, ToolLayout.field("as", label, save));
-        VBox box = new VBox(4, new Label("Scale versions"), table, buttons);
+        VBox box = new VBox(4, table, buttons);
+        box.setPadding(ToolLayout.padding());
+        return box;
+    }
+
+    private static Node jobs(ArchiveViewModel model) {
+        ComboBox<String> kind = new ComboBox<>();
+        kind.setId("archive-job-kind");
+        kind.setEditable(true);
+        kind.getItems().setAll(Job.USUAL_KINDS);
+        kind.setPromptText("kind of job");
+        kind.valueProperty().bindBidirectional(model.jobKindProperty());
+        kind.setPrefWidth(130);
+        ComboBox<ArchiveViewModel.VersionChoice> version = new ComboBox<>(model.jobVersions());
+        version.setId("archive-job-version");
+        version.setConverter(words(ArchiveViewModel.VersionChoice::text, t -> null));
+        version.valueProperty().bindBidirectional(model.jobVersionProperty());
+        version.setTooltip(new Tooltip("the scale version the job worked to (blank: none)"));
+        Runnable log = model::logJob;
+        Button logButton = new Button("Log job");
+        logButton.setId("archive-log-job");
+        logButton.setOnAction(e -> log.run());
+        logButton.disableProperty().bind(model.instrumentProperty().isEmpty());
+        var table = ToolLayout.entry("archive-job-table", model.jobTableProperty(), 20, log);
+        table.setTooltip(new Tooltip("the strength table the job used; starts as the one chosen above"));
+        var a4 = ToolLayout.entry("archive-job-a4", model.jobA4Property(), 4, log);
+        a4.setTooltip(new Tooltip("the pitch standard the job used (blank: not recorded); starts as the working A4"));
+        FlowPane form = new FlowPane(10, 4,
+                ToolLayout.field("Kind:", kind),
+                ToolLayout.field("Date:", ToolLayout.entry("archive-job-date", model.jobDateProperty(), 8, log)),
+                ToolLayout.field("A4:", a4, new Label("Hz")),
+                ToolLayout.field("Table:", table),
+                ToolLayout.field("To version:", version),
+                ToolLayout.field("Notes:", ToolLayout.entry("archive-job-notes", model.jobNotesProperty(), 16, log)),
+                logButton);
+        TableView<ArchiveViewModel.JobRow> list = new TableView<>(model.jobs());
+        list.setId("archive-jobs");
+        list.setPlaceholder(new Label("No jobs recorded."));
+        list.getColumns().setAll(List.of(
+                ToolLayout.<ArchiveViewModel.JobRow>column("date", 84, false, ArchiveViewModel.JobRow::date),
+                ToolLayout.<ArchiveViewModel.JobRow>column("kind", 96, false, ArchiveViewModel.JobRow::kind),
+                ToolLayout.<ArchiveViewModel.JobRow>column("A4 Hz", 50, true, ArchiveViewModel.JobRow::a4),
+                ToolLayout.<ArchiveViewModel.JobRow>column("table", 250, false, ArchiveViewModel.JobRow::table),
+                ToolLayout.<ArchiveViewModel.JobRow>column("to ver.", 50, true, ArchiveViewModel.JobRow::version),
+                ToolLayout.<ArchiveViewModel.JobRow>column("notes", 220, false, ArchiveViewModel.JobRow::notes)));
+        VBox.setVgrow(list, Priority.ALWAYS);
+        VBox box = new VBox(4, form, list);
         box.setPadding(ToolLayout.padding());
         return box;
     }
@@ -146,11 +203,11 @@ public final class ArchiveView {
                         ArchiveViewModel.BreakRow::stressMpa),
                 ToolLayout.<ArchiveViewModel.BreakRow>column("of table", 60, true, ArchiveViewModel.BreakRow::ratio),
                 ToolLayout.<ArchiveViewModel.BreakRow>column("during", 84, false, ArchiveViewModel.BreakRow::during),
-                ToolLayout.<ArchiveViewModel.BreakRow>column("where", 100, false, ArchiveViewModel.BreakRow::place),
+                ToolLayout.<ArchiveViewModel.BreakRow>column("where", 112, false, ArchiveViewModel.BreakRow::place),
                 ToolLayout.<ArchiveViewModel.BreakRow>column("remark", 140, false,
                         ArchiveViewModel.BreakRow::remark)));
         VBox.setVgrow(table, Priority.ALWAYS);
-        VBox box = new VBox(4, new Label("Broken strings"), form, caution, table);
+        VBox box = new VBox(4, form, caution, table);
         box.setPadding(ToolLayout.padding());
         return box;
     }

@@ -8,6 +8,8 @@ import java.util.OptionalInt;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 import java.util.function.Function;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.ObjectBinding;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -17,11 +19,13 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.scalewright.app.session.ScaleSession;
+import org.scalewright.app.session.TypedEntry;
 import org.scalewright.app.session.UserPrompts;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.ArchiveLocation;
 import org.scalewright.archive.ArchivedBreak;
 import org.scalewright.archive.Instrument;
+import org.scalewright.archive.Job;
 import org.scalewright.archive.JudgedBreak;
 import org.scalewright.archive.ScaleVersion;
 import org.scalewright.archive.VersionLabel;
@@ -30,19 +34,30 @@ import org.scalewright.model.BreakPlace;
 import org.scalewright.model.InvalidInput;
 import org.scalewright.model.KeyNames;
 import org.scalewright.model.NumberText;
+import org.scalewright.model.PitchStandard;
 import org.scalewright.model.Scale;
 import org.scalewright.model.StringBreak;
 import org.scalewright.model.WorkDate;
 
 /**
- * The instruments panel: the workshop archive's instruments, the chosen one's scale versions and
- * broken strings. Opens a version as the working scale or as the reference, saves the working scale
- * as a new version, and logs a break on the selected key. The archive is opened for each action and
- * closed after it, so a command run at the same time sees every change.
+ * The instruments panel: the workshop archive's instruments, the chosen one's scale versions, jobs
+ * and broken strings. Opens a version as the working scale or as the reference, saves the working
+ * scale as a new version, logs a job (its pitch standard and strength table start as the working
+ * ones) and logs a break on the selected key. The archive is opened for each action and closed after
+ * it, so a command run at the same time sees every change.
  */
 public final class ArchiveViewModel {
     /** One scale version as the panel lists it. */
     public record VersionRow(int number, String date, String label, String from, String title) {
+    }
+
+    /** One job as the panel lists it; blank where not recorded. */
+    public record JobRow(String date, String kind, String a4, String table, String version, String notes) {
+    }
+
+    /** A choice of the version a job worked to: a version's number and label, or none (blank). */
+    public record VersionChoice(OptionalInt number, String text) {
+        static final VersionChoice NONE = new VersionChoice(OptionalInt.empty(), "");
     }
 
     /** One break as the panel lists it. */
@@ -67,6 +82,16 @@ public final class ArchiveViewModel {
     private final ObjectProperty<BreakActivity> during = new SimpleObjectProperty<>(BreakActivity.UNKNOWN);
     private final ObjectProperty<BreakPlace> place = new SimpleObjectProperty<>(BreakPlace.UNKNOWN);
     private final StringProperty remark = new SimpleStringProperty("");
+    private final ObservableList<JobRow> jobs = FXCollections.observableArrayList();
+    private final ObservableList<VersionChoice> jobVersions = FXCollections.observableArrayList(VersionChoice.NONE);
+    private final StringProperty jobKind = new SimpleStringProperty("");
+    private final StringProperty jobDate = new SimpleStringProperty(LocalDate.now().toString());
+    private final StringProperty jobA4 = new SimpleStringProperty("");
+    private final StringProperty jobTable = new SimpleStringProperty("");
+    private final StringProperty jobNotes = new SimpleStringProperty("");
+    private final ObjectProperty<VersionChoice> jobVersion = new SimpleObjectProperty<>(VersionChoice.NONE);
+    /** The working A4, Hz: the job form's pitch follows it when it changes (held here, bindings are weak). */
+    private final ObjectBinding<Double> workingA4;
     private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper caution = new ReadOnlyStringWrapper("");
@@ -90,6 +115,10 @@ public final class ArchiveViewModel {
         during.addListener((o, was, now) -> caution.set(now.underRisingTension() ? "Caution: a string breaking "
                 + "during a pitch raise or while being brought up can whip and its wire ends cut. Wear eye "
                 + "protection and raise a large pitch change in stages." : ""));
+        workingA4 = Bindings.createObjectBinding(() -> session.scale().pitch().a4(), session.scaleProperty());
+        workingA4.addListener((o, was, now) -> jobA4.set(NumberText.plain(now)));
+        session.settingsProperty().addListener((o, was, now) -> jobTable.set(now.strength().name()));
+        startJobForm();
     }
 
     // ---- the archive and its instruments
@@ -143,6 +172,8 @@ public final class ArchiveViewModel {
         if (name == null || name.isEmpty()) {
             versions.clear();
             breaks.clear();
+            jobs.clear();
+            jobVersions.setAll(VersionChoice.NONE);
             return;
         }
         act(a -> {
@@ -152,6 +183,12 @@ public final class ArchiveViewModel {
                     a.scaleOf(name, v).title())).toList());
             breaks.setAll(JudgedBreak.all(a, name, session.settingsProperty().get()).stream()
                     .map(ArchiveViewModel::row).toList());
+            jobs.setAll(a.jobs(name).stream().map(ArchiveViewModel::row).toList());
+            VersionChoice chosen = jobVersion.get();
+            jobVersions.setAll(VersionChoice.NONE);
+            all.forEach(v -> jobVersions.add(new VersionChoice(OptionalInt.of(v.number()),
+                    v.number() + " (" + v.label() + ")")));
+            jobVersion.set(jobVersions.contains(chosen) ? chosen : VersionChoice.NONE);
             return true;
         }, null);
     }
@@ -164,6 +201,12 @@ public final class ArchiveViewModel {
                 j.stress().map(s -> NumberText.fixed(s.stress() / 1e6, 0)).orElse(""),
                 j.stress().map(s -> NumberText.fixed(s.ratio(), 2)).orElse(""), b.during().word(), b.place().word(),
                 b.remark());
+    }
+
+    private static JobRow row(Job j) {
+        return new JobRow(j.date().toString(), j.kind(), j.a4().isPresent() ? NumberText.plain(j.a4().getAsDouble())
+                : "", j.strengthTable(), j.version().isPresent() ? Integer.toString(j.version().getAsInt()) : "",
+                j.notes());
     }
 
     // ---- versions
@@ -217,6 +260,46 @@ public final class ArchiveViewModel {
         return name + ", version " + v.number() + " (" + v.label() + ")";
     }
 
+    // ---- jobs
+
+    /**
+     * Logs a job on the chosen instrument from the job form: its kind (required), date, notes, the
+     * pitch standard (blank: not recorded; checked as the A4 field above checks it), the strength
+     * table's name and the version worked to. A refusal changes nothing.
+     */
+    public boolean logJob() {
+        String name = instrument.get();
+        Job job;
+        try {
+            job = new Job(WorkDate.parse(jobDate.get(), LocalDate.now()), jobKind.get(), jobNotes.get(), jobPitch(),
+                    jobTable.get(), jobVersion.get() == null ? OptionalInt.empty() : jobVersion.get().number());
+        } catch (InvalidInput e) {
+            problem.set(e.getMessage());
+            return false;
+        }
+        return act(a -> {
+            a.logJob(name, job);
+            refreshInstrument();
+            jobKind.set("");
+            jobNotes.set("");
+            startJobForm();
+            message.set("logged job '" + job.kind() + "' on '" + name + "', " + job.date());
+            return true;
+        }, null);
+    }
+
+    private OptionalDouble jobPitch() {
+        String typed = jobA4.get() == null ? "" : jobA4.get().strip();
+        return typed.isEmpty() ? OptionalDouble.empty()
+                : OptionalDouble.of(PitchStandard.of(TypedEntry.parse(typed, "A4", "Hz")).a4());
+    }
+
+    /** The job form's pitch standard and strength table as the working ones. */
+    private void startJobForm() {
+        jobA4.set(NumberText.plain(workingA4.get()));
+        jobTable.set(session.settingsProperty().get().strength().name());
+    }
+
     // ---- breaks
 
     /** Logs a break on the key selected in the note table, with the entries of the break form. */
@@ -259,15 +342,8 @@ public final class ArchiveViewModel {
     }
 
     private OptionalDouble parsePitch() {
-        String s = pitch.get() == null ? "" : pitch.get().strip().replace(',', '.').replaceAll("\\s*Hz$", "");
-        if (s.isEmpty()) {
-            return OptionalDouble.empty();
-        }
-        try {
-            return OptionalDouble.of(Double.parseDouble(s));
-        } catch (NumberFormatException e) {
-            throw new InvalidInput("pitch at break must be a frequency in Hz, was '" + pitch.get() + "'");
-        }
+        String s = pitch.get() == null ? "" : pitch.get().strip();
+        return s.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(TypedEntry.parse(s, "pitch at break", "Hz"));
     }
 
     /** Runs one action on the archive; a refusal is shown as the panel's problem and changes nothing. */
@@ -347,6 +423,41 @@ public final class ArchiveViewModel {
 
     public StringProperty remarkProperty() {
         return remark;
+    }
+
+    public ObservableList<JobRow> jobs() {
+        return jobs;
+    }
+
+    /** @return the versions a job may name as worked to, none first */
+    public ObservableList<VersionChoice> jobVersions() {
+        return jobVersions;
+    }
+
+    public StringProperty jobKindProperty() {
+        return jobKind;
+    }
+
+    public StringProperty jobDateProperty() {
+        return jobDate;
+    }
+
+    /** @return the job's pitch standard as typed, A4 in Hz; blank when not recorded */
+    public StringProperty jobA4Property() {
+        return jobA4;
+    }
+
+    /** @return the name of the strength table the job used; blank when not recorded */
+    public StringProperty jobTableProperty() {
+        return jobTable;
+    }
+
+    public StringProperty jobNotesProperty() {
+        return jobNotes;
+    }
+
+    public ObjectProperty<VersionChoice> jobVersionProperty() {
+        return jobVersion;
     }
 
     public ReadOnlyStringProperty problemProperty() {

@@ -6,8 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -16,6 +20,7 @@ import org.scalewright.app.session.ScaleSession;
 import org.scalewright.app.session.ScriptedPrompts;
 import org.scalewright.app.session.TestSheets;
 import org.scalewright.archive.Archive;
+import org.scalewright.archive.Job;
 
 /** The instruments panel through its view model, on a real archive file, without a display. */
 class ArchiveViewModelTest {
@@ -98,5 +103,86 @@ class ArchiveViewModelTest {
         assertEquals(List.of(), remembered);
         assertTrue(archive.useArchive(dir.resolve("other.db")));
         assertEquals(List.of(dir.resolve("other.db")), remembered);
+    }
+
+    private void aGrandWithOneVersion() {
+        assertTrue(archive.refresh(), archive.problemProperty().get());
+        archive.newInstrumentProperty().set("grand-190");
+        assertTrue(archive.addInstrument(), archive.problemProperty().get());
+        archive.labelProperty().set("as strung");
+        assertTrue(archive.saveWorkingScale(), archive.problemProperty().get());
+    }
+
+    @Test
+    void aJobIsLoggedWithThePitchAndTableOfTheWorkAndListed() throws Exception {
+        aGrandWithOneVersion();
+        String table = window.session().settingsProperty().get().strength().name();
+        assertEquals("440", archive.jobA4Property().get(), "the form starts from the working A4");
+        assertEquals(table, archive.jobTableProperty().get(), "and from the working strength table");
+        assertEquals(List.of("", "1 (as strung)"), archive.jobVersions().stream().map(v -> v.text()).toList());
+        archive.jobKindProperty().set("restringing");
+        archive.jobDateProperty().set("2026-11-20");
+        archive.jobNotesProperty().set("treble section, new wire");
+        archive.jobVersionProperty().set(archive.jobVersions().get(1));
+        assertTrue(archive.logJob(), archive.problemProperty().get());
+
+        assertEquals(List.of(new ArchiveViewModel.JobRow("2026-11-20", "restringing", "440", table, "1",
+                "treble section, new wire")), archive.jobs());
+        try (Archive a = Archive.open(dir.resolve("a.db"))) {
+            assertEquals(List.of(new Job(LocalDate.of(2026, 11, 20), "restringing", "treble section, new wire",
+                    OptionalDouble.of(440), table, OptionalInt.of(1))), a.jobs("grand-190"));
+        }
+        assertEquals("", archive.jobKindProperty().get(), "the form is ready for the next job");
+        assertEquals("", archive.jobNotesProperty().get());
+        assertTrue(archive.messageProperty().get().contains("logged job 'restringing'"),
+                archive.messageProperty().get());
+    }
+
+    @Test
+    void aJobWithoutItsKindOrWithAPitchOutOfRangeIsRefusedAndNothingWritten() throws Exception {
+        aGrandWithOneVersion();
+        byte[] before = Files.readAllBytes(dir.resolve("a.db"));
+        assertFalse(archive.logJob());
+        assertTrue(archive.problemProperty().get().contains("a job needs its kind"), archive.problemProperty().get());
+        archive.jobKindProperty().set("pitch raise");
+        archive.jobA4Property().set("1200");
+        assertFalse(archive.logJob());
+        assertEquals("pitch standard A4 must be 300 to 600 Hz, was 1200", archive.problemProperty().get(),
+                "the same words as the A4 field above and the command line");
+        archive.jobA4Property().set("four-forty");
+        assertFalse(archive.logJob());
+        assertEquals("A4: expected a number in Hz, was 'four-forty'", archive.problemProperty().get());
+        archive.jobA4Property().set("440");
+        archive.jobDateProperty().set("2026-31-12");
+        assertFalse(archive.logJob());
+        assertTrue(archive.problemProperty().get().contains("YYYY-MM-DD"), archive.problemProperty().get());
+        assertEquals(List.of(), archive.jobs());
+        assertTrue(Arrays.equals(before, Files.readAllBytes(dir.resolve("a.db"))), "nothing written");
+
+        archive.jobDateProperty().set("2026-12-01");
+        archive.jobA4Property().set("442,5 Hz");
+        archive.jobTableProperty().set("");
+        assertTrue(archive.logJob(), archive.problemProperty().get());
+        try (Archive a = Archive.open(dir.resolve("a.db"))) {
+            Job j = a.jobs("grand-190").get(0);
+            assertEquals(OptionalDouble.of(442.5), j.a4(), "a decimal comma and the unit are taken, as in every field");
+            assertEquals("", j.strengthTable(), "a blank table is not recorded");
+            assertEquals(OptionalInt.empty(), j.version(), "no version chosen");
+        }
+    }
+
+    @Test
+    void theJobFormFollowsTheWorkingPitchAndTheChosenInstrument() {
+        aGrandWithOneVersion();
+        assertTrue(window.session().setA4(442));
+        assertEquals("442", archive.jobA4Property().get());
+        archive.jobKindProperty().set("tuning");
+        assertTrue(archive.logJob(), archive.problemProperty().get());
+        archive.newInstrumentProperty().set("upright");
+        assertTrue(archive.addInstrument(), archive.problemProperty().get());
+        assertEquals(List.of(), archive.jobs(), "the jobs listed are the chosen instrument's");
+        assertEquals(List.of(""), archive.jobVersions().stream().map(v -> v.text()).toList());
+        archive.instrumentProperty().set("grand-190");
+        assertEquals(1, archive.jobs().size());
     }
 }
