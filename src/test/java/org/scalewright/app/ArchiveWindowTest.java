@@ -9,7 +9,6 @@ import java.time.LocalDate;
 import java.util.OptionalInt;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.ComboBox;
-import javafx.scene.control.TabPane;
 import javafx.scene.control.TableView;
 import javafx.stage.Stage;
 import org.junit.jupiter.api.AfterEach;
@@ -63,10 +62,7 @@ class ArchiveWindowTest {
 
     @Test
     void aBreakLoggedOnTheSelectedKeyShowsInTheList(FxRobot robot) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
-                .filter(t -> "archive-tab".equals(t.getId())).findFirst().orElseThrow()));
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.open(robot, "archive-tab");
         @SuppressWarnings("unchecked")
         ComboBox<String> instrument = robot.lookup("#archive-instrument").queryAs(ComboBox.class);
         assertEquals("grand-190", instrument.getValue(), "the archive's one instrument is chosen");
@@ -107,10 +103,7 @@ class ArchiveWindowTest {
 
     @Test
     void aJobLoggedFromItsTabShowsInTheListWithTheWorkingPitch(FxRobot robot) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
-                .filter(t -> "archive-tab".equals(t.getId())).findFirst().orElseThrow()));
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.open(robot, "archive-tab");
         robot.clickOn("Jobs");
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals("440", robot.lookup("#archive-job-a4").queryTextInputControl().getText(),

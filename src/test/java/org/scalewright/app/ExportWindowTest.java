@@ -9,7 +9,6 @@ import java.nio.file.Path;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListView;
-import javafx.scene.control.TabPane;
 import javafx.stage.Stage;
 import org.jfree.chart.fx.ChartViewer;
 import org.jfree.data.xy.XYDataset;
@@ -42,10 +41,7 @@ class ExportWindowTest {
     }
 
     private void selectTab(FxRobot robot, String id) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(
-                tabs.getTabs().stream().filter(t -> id.equals(t.getId())).findFirst().orElseThrow()));
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.open(robot, id);
     }
 
     private static XYDataset stretchData(FxRobot robot) {

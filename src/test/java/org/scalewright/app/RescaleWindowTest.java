@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import javafx.geometry.Point2D;
-import javafx.scene.control.TabPane;
 import javafx.scene.control.TableView;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
@@ -42,10 +41,7 @@ class RescaleWindowTest {
     }
 
     private void openTab(FxRobot robot) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
-                .filter(t -> "rescale-tab".equals(t.getId())).findFirst().orElseThrow()));
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.open(robot, "rescale-tab");
     }
 
     private void type(FxRobot robot, String id, String text) {

@@ -85,10 +85,7 @@ class ScreenFitWindowTest {
     }
 
     private void openTab(FxRobot robot, String id) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
-                .filter(t -> id.equals(t.getId())).findFirst().orElseThrow()));
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.open(robot, id);
     }
 
     private void type(FxRobot robot, String id, String text) {

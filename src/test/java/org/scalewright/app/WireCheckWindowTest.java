@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import javafx.scene.control.TabPane;
 import javafx.scene.control.TableView;
 import javafx.stage.Stage;
 import org.jfree.chart.JFreeChart;
@@ -37,9 +36,7 @@ class WireCheckWindowTest {
 
     @Test
     void aCheckDrawsAfterAndPeakOverThePercentCurve(FxRobot robot) {
-        TabPane tabs = robot.lookup("#tool-tabs").queryAs(TabPane.class);
-        robot.interact(() -> tabs.getSelectionModel().select(tabs.getTabs().stream()
-                .filter(t -> "wire-check-tab".equals(t.getId())).findFirst().orElseThrow()));
+        ToolTabsRobot.open(robot, "wire-check-tab");
         prompts.files.add(Path.of("scales", "wire-makers", "specimen-wire-mill-mm-load-n.csv"));
         robot.clickOn("#wire-check-load-table");
         robot.doubleClickOn("#wire-check-flat").write("40");
