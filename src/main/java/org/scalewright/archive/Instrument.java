@@ -33,6 +33,22 @@ public record Instrument(String name, String maker, String model, String serial,
         return new Instrument(name, "", "", "", "", "");
     }
 
+    /**
+     * @return the description fields given, in words, as the history and the window show them:
+     *         {@code Marrowby & Fenn, 190, serial 40117, owner the school, at the hall}
+     *         (maker, model, serial, owner, place); "" when none is given
+     */
+    public String description() {
+        java.util.List<String> parts = new java.util.ArrayList<>();
+        for (String[] field : new String[][] {{"", maker}, {"", model}, {"serial ", serial}, {"owner ", owner},
+                {"at ", location}}) {
+            if (!field[1].isEmpty()) {
+                parts.add(field[0] + field[1]);
+            }
+        }
+        return String.join(", ", parts);
+    }
+
     private static String clean(String s) {
         return s == null ? "" : s.strip();
     }

@@ -44,7 +44,7 @@ public final class ArchiveHistoryCommand extends InstrumentSubcommand {
         }
         entries.sort(Comparator.comparing(Entry::date).thenComparingInt(Entry::order));
         PrintWriter w = terminal();
-        w.println(i.name() + describe(i));
+        w.println(i.name() + (i.description().isEmpty() ? "" : ": " + i.description()));
         for (Entry e : entries) {
             w.println("  " + e.date() + "  " + e.what());
         }
@@ -52,17 +52,6 @@ public final class ArchiveHistoryCommand extends InstrumentSubcommand {
             w.println("  nothing recorded yet");
         }
         return ExitStatus.OK;
-    }
-
-    private static String describe(Instrument i) {
-        List<String> parts = new ArrayList<>();
-        for (String[] f : new String[][] {{"", i.maker()}, {"", i.model()}, {"serial ", i.serial()},
-                {"owner ", i.owner()}, {"at ", i.location()}}) {
-            if (!f[1].isEmpty()) {
-                parts.add(f[0] + f[1]);
-            }
-        }
-        return parts.isEmpty() ? "" : ": " + String.join(", ", parts);
     }
 
     private static String breakText(StringBreak b) {

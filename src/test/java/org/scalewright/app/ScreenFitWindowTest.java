@@ -59,7 +59,7 @@ class ScreenFitWindowTest {
         this.stage = stage;
         archive = Files.createTempDirectory("scalewright-screen-fit").resolve("workshop.db");
         try (Archive a = Archive.create(archive)) {
-            a.addInstrument(Instrument.named("grand-190"));
+            a.addInstrument(new Instrument("grand-190", "Marrowby & Fenn", "190", "40117", "", "the school hall"));
             a.saveVersion("grand-190", ScaleSheetReader.standard().read(TestSheets.demoGrand()), "as strung",
                     OptionalInt.empty(), LocalDate.of(2026, 11, 2));
             a.logJob("grand-190", new Job(LocalDate.of(2026, 11, 2), "restringing", "treble from key 52, new wire",

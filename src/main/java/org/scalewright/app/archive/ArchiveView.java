@@ -57,8 +57,11 @@ public final class ArchiveView {
         Button add = new Button("Add");
         add.setId("archive-add-instrument");
         add.setOnAction(e -> model.addInstrument());
+        Label description = new Label();
+        description.setId("archive-description");
+        description.textProperty().bind(model.descriptionProperty());
         FlowPane top = new FlowPane(12, 4, ToolLayout.field("Archive:", file, other),
-                ToolLayout.field("Instrument:", instrument, name, add));
+                ToolLayout.field("Instrument:", instrument, name, add, description));
         Label problem = status("archive-problem", "-fx-text-fill: #b00020; -fx-font-weight: bold;");
         problem.textProperty().bind(model.problemProperty());
         Label message = status("archive-message", "-fx-text-fill: #1e5e32;");

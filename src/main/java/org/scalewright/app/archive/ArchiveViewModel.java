@@ -95,6 +95,7 @@ public final class ArchiveViewModel {
     private final ReadOnlyStringWrapper problem = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper("");
     private final ReadOnlyStringWrapper caution = new ReadOnlyStringWrapper("");
+    private final ReadOnlyStringWrapper description = new ReadOnlyStringWrapper("");
     /** The version the working scale came from, when it came from the archive (for "derived from"). */
     private OptionalInt openedVersion = OptionalInt.empty();
 
@@ -174,9 +175,11 @@ public final class ArchiveViewModel {
             breaks.clear();
             jobs.clear();
             jobVersions.setAll(VersionChoice.NONE);
+            description.set("");
             return;
         }
         act(a -> {
+            description.set(a.instrument(name).description());
             List<ScaleVersion> all = a.versions(name);
             versions.setAll(all.stream().map(v -> new VersionRow(v.number(), v.date().toString(), v.label(),
                     v.derivedFrom().isPresent() ? Integer.toString(v.derivedFrom().getAsInt()) : "",
@@ -466,6 +469,11 @@ public final class ArchiveViewModel {
 
     public ReadOnlyStringProperty messageProperty() {
         return message.getReadOnlyProperty();
+    }
+
+    /** @return the chosen instrument's description in words (maker, model, serial, owner, place); "" when none */
+    public ReadOnlyStringProperty descriptionProperty() {
+        return description.getReadOnlyProperty();
     }
 
     public ReadOnlyStringProperty cautionProperty() {

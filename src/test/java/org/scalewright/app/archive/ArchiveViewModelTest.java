@@ -185,4 +185,18 @@ class ArchiveViewModelTest {
         archive.instrumentProperty().set("grand-190");
         assertEquals(1, archive.jobs().size());
     }
+
+    @Test
+    void theChosenInstrumentIsDescribedInWords() throws Exception {
+        try (Archive a = Archive.create(dir.resolve("a.db"))) {
+            a.addInstrument(new org.scalewright.archive.Instrument("grand-190", "Marrowby & Fenn", "190", "40117",
+                    "", "the hall"));
+            a.addInstrument(org.scalewright.archive.Instrument.named("upright"));
+        }
+        assertTrue(archive.refresh(), archive.problemProperty().get());
+        assertEquals("grand-190", archive.instrumentProperty().get());
+        assertEquals("Marrowby & Fenn, 190, serial 40117, at the hall", archive.descriptionProperty().get());
+        archive.instrumentProperty().set("upright");
+        assertEquals("", archive.descriptionProperty().get(), "an instrument given by name alone");
+    }
 }
