@@ -25,11 +25,16 @@ public record Job(LocalDate date, String kind, String notes, OptionalDouble a4, 
     public Job {
         kind = kind == null ? "" : kind.strip();
         if (kind.isEmpty()) {
-            throw new ArchiveRefused("a job needs its kind (restringing, pitch raise, rescale …)");
+            throw new ArchiveRefused("a job needs its kind (" + String.join(", ", USUAL_KINDS) + " or another)");
         }
         notes = notes == null ? "" : notes.strip();
         strengthTable = strengthTable == null ? "" : strengthTable.strip();
         a4 = a4 == null ? OptionalDouble.empty() : a4;
         version = version == null ? OptionalInt.empty() : version;
+    }
+
+    /** @return what logging this job on {@code instrument} is told as: {@code logged job 'tuning' on 'grand-190', 2026-11-20} */
+    public String loggedOn(String instrument) {
+        return "logged job '" + kind + "' on '" + instrument + "', " + date;
     }
 }

@@ -13,4 +13,8 @@ import java.util.OptionalInt;
  * @param sheet       the scale sheet (CSV text, DESIGN §4)
  */
 public record ScaleVersion(int number, LocalDate date, String label, OptionalInt derivedFrom, String sheet) {
+    /** @return the version's number with its label, as lists and messages name it: {@code 2 (planned)} */
+    public String numberAndLabel() {
+        return number + " (" + label + ")";
+    }
 }

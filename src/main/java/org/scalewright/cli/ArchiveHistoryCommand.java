@@ -29,7 +29,7 @@ public final class ArchiveHistoryCommand extends InstrumentSubcommand {
         try (Archive a = db.open()) {
             i = a.instrument(instrument.name);
             for (ScaleVersion v : a.versions(i.name())) {
-                entries.add(new Entry(v.date(), 0, "version " + v.number() + " (" + v.label() + ")"
+                entries.add(new Entry(v.date(), 0, "version " + v.numberAndLabel()
                         + (v.derivedFrom().isPresent() ? ", from version " + v.derivedFrom().getAsInt() : "")));
             }
             for (Job j : a.jobs(i.name())) {

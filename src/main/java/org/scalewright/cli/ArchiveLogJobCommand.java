@@ -41,8 +41,7 @@ public final class ArchiveLogJobCommand extends InstrumentSubcommand {
         try (Archive a = db.open()) {
             a.logJob(instrument.name, job);
         }
-        terminal().println("logged job '" + job.kind() + "' on '" + instrument.name + "', "
-                + job.date());
+        terminal().println(job.loggedOn(instrument.name));
         return ExitStatus.OK;
     }
 }

@@ -70,7 +70,7 @@ class ArchiveWindowTest {
         TableView<ArchiveViewModel.VersionRow> versions = robot.lookup("#archive-versions").queryAs(TableView.class);
         assertEquals(1, versions.getItems().size());
 
-        robot.clickOn("Broken strings");
+        ToolTabsRobot.openInner(robot, "archive-breaks-tab");
         robot.interact(() -> model.session().selectedKeyProperty().set(66));
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(robot.lookup("#archive-break-key").queryLabeled().getText().startsWith("66 D6"));
@@ -104,14 +104,19 @@ class ArchiveWindowTest {
     @Test
     void aJobLoggedFromItsTabShowsInTheListWithTheWorkingPitch(FxRobot robot) {
         ToolTabsRobot.open(robot, "archive-tab");
-        robot.clickOn("Jobs");
-        WaitForAsyncUtils.waitForFxEvents();
+        ToolTabsRobot.openInner(robot, "archive-jobs-tab");
         assertEquals("440", robot.lookup("#archive-job-a4").queryTextInputControl().getText(),
                 "the pitch starts as the working A4");
         robot.clickOn("#archive-job-kind").write("pitch raise");
         robot.doubleClickOn("#archive-job-notes").write("from 435, two passes");
+        @SuppressWarnings("unchecked")
+        ComboBox<ArchiveViewModel.VersionChoice> version = robot.lookup("#archive-job-version").queryAs(ComboBox.class);
+        robot.clickOn(version).clickOn("1 (as measured)");
         robot.clickOn("#archive-log-job");
         WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(1, version.getSelectionModel().getSelectedIndex(), "the version chosen is still shown");
+        assertTrue(robot.lookup("#archive-job-version .list-cell").queryAs(javafx.scene.control.ListCell.class)
+                .getText().equals("1 (as measured)"), "and drawn in the box");
 
         @SuppressWarnings("unchecked")
         TableView<ArchiveViewModel.JobRow> jobs = robot.lookup("#archive-jobs").queryAs(TableView.class);
@@ -119,6 +124,7 @@ class ArchiveWindowTest {
         assertEquals("pitch raise", jobs.getItems().get(0).kind());
         assertEquals("440", jobs.getItems().get(0).a4());
         assertEquals("from 435, two passes", jobs.getItems().get(0).notes());
+        assertEquals("1", jobs.getItems().get(0).version());
         try (Archive a = Archive.open(db)) {
             assertEquals(1, a.jobs("grand-190").size(), "kept in the archive file");
         }

@@ -29,6 +29,7 @@ import org.scalewright.app.table.NoteColumn;
 import org.scalewright.archive.Archive;
 import org.scalewright.archive.Instrument;
 import org.scalewright.archive.Job;
+import org.scalewright.io.BuiltInData;
 import org.scalewright.io.ScaleSheetReader;
 import org.scalewright.model.BreakActivity;
 import org.scalewright.model.BreakPlace;
@@ -63,7 +64,7 @@ class ScreenFitWindowTest {
             a.saveVersion("grand-190", ScaleSheetReader.standard().read(TestSheets.demoGrand()), "as strung",
                     OptionalInt.empty(), LocalDate.of(2026, 11, 2));
             a.logJob("grand-190", new Job(LocalDate.of(2026, 11, 2), "restringing", "treble from key 52, new wire",
-                    OptionalDouble.of(440), "ASTM A228 minimum tensile strength", OptionalInt.of(1)));
+                    OptionalDouble.of(440), BuiltInData.astmMinimum().name(), OptionalInt.of(1)));
             a.logBreak("grand-190", new StringBreak(LocalDate.of(2026, 11, 20), 66, OptionalInt.of(2),
                     OptionalDouble.of(1178), BreakActivity.PITCH_RAISE, BreakPlace.SPEAKING_LENGTH, "",
                     "second pass"), OptionalInt.empty());
@@ -141,12 +142,10 @@ class ScreenFitWindowTest {
 
         openTab(robot, "archive-tab");
         look(robot, "archive-versions", clipped);
-        TabPane records = robot.lookup(n -> n instanceof TabPane t && t.getTabs().stream()
-                .anyMatch(tab -> "archive-jobs-tab".equals(tab.getId()))).queryAs(TabPane.class);
-        robot.interact(() -> records.getSelectionModel().select(1));
+        ToolTabsRobot.openInner(robot, "archive-jobs-tab");
         look(robot, "archive-jobs", clipped);
         robot.interact(() -> view.model().session().selectedKeyProperty().set(66));
-        robot.interact(() -> records.getSelectionModel().select(2));
+        ToolTabsRobot.openInner(robot, "archive-breaks-tab");
         look(robot, "archive-breaks", clipped);
 
         robot.interact(() -> view.model().setUnits(WorkstationViewModel.UnitChoice.IMPERIAL));

@@ -16,4 +16,13 @@ final class ToolTabsRobot {
                 .filter(t -> id.equals(t.getId())).findFirst().orElseThrow()));
         WaitForAsyncUtils.waitForFxEvents();
     }
+
+    /** Chooses the tab with {@code id} in whichever tab pane holds it (a tool's own inner tabs) and waits. */
+    static void openInner(FxRobot robot, String id) {
+        TabPane pane = robot.lookup(n -> n instanceof TabPane t && t.getTabs().stream()
+                .anyMatch(tab -> id.equals(tab.getId()))).queryAs(TabPane.class);
+        robot.interact(() -> pane.getSelectionModel().select(pane.getTabs().stream()
+                .filter(t -> id.equals(t.getId())).findFirst().orElseThrow()));
+        WaitForAsyncUtils.waitForFxEvents();
+    }
 }

@@ -1,12 +1,14 @@
 package org.scalewright.app.archive;
 
 import java.util.List;
+import java.util.function.Function;
 import javafx.beans.binding.Bindings;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
+import javafx.scene.control.OverrunStyle;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
 import javafx.scene.control.TableView;
@@ -42,7 +44,7 @@ public final class ArchiveView {
         file.textProperty().bind(Bindings.createStringBinding(() -> String.valueOf(model.fileProperty().get()),
                 model.fileProperty()));
         file.setMaxWidth(560);
-        file.setTextOverrun(javafx.scene.control.OverrunStyle.CENTER_ELLIPSIS);
+        file.setTextOverrun(OverrunStyle.CENTER_ELLIPSIS);
         Tooltip whole = new Tooltip();
         whole.textProperty().bind(file.textProperty());
         file.setTooltip(whole);
@@ -136,7 +138,7 @@ public final class ArchiveView {
         logButton.setId("archive-log-job");
         logButton.setOnAction(e -> log.run());
         logButton.disableProperty().bind(model.instrumentProperty().isEmpty());
-        var table = ToolLayout.entry("archive-job-table", model.jobTableProperty(), 20, log);
+        var table = ToolLayout.entry("archive-job-table", model.jobTableProperty(), 26, log);
         table.setTooltip(new Tooltip("the strength table the job used; starts as the one chosen above"));
         var a4 = ToolLayout.entry("archive-job-a4", model.jobA4Property(), 4, log);
         a4.setTooltip(new Tooltip("the pitch standard the job used (blank: not recorded); starts as the working A4"));
@@ -155,9 +157,9 @@ public final class ArchiveView {
                 ToolLayout.<ArchiveViewModel.JobRow>column("date", 84, false, ArchiveViewModel.JobRow::date),
                 ToolLayout.<ArchiveViewModel.JobRow>column("kind", 96, false, ArchiveViewModel.JobRow::kind),
                 ToolLayout.<ArchiveViewModel.JobRow>column("A4 Hz", 50, true, ArchiveViewModel.JobRow::a4),
-                ToolLayout.<ArchiveViewModel.JobRow>column("table", 250, false, ArchiveViewModel.JobRow::table),
+                ToolLayout.<ArchiveViewModel.JobRow>column("table", 280, false, ArchiveViewModel.JobRow::table),
                 ToolLayout.<ArchiveViewModel.JobRow>column("to ver.", 50, true, ArchiveViewModel.JobRow::version),
-                ToolLayout.<ArchiveViewModel.JobRow>column("notes", 220, false, ArchiveViewModel.JobRow::notes)));
+                ToolLayout.<ArchiveViewModel.JobRow>column("notes", 190, false, ArchiveViewModel.JobRow::notes)));
         VBox.setVgrow(list, Priority.ALWAYS);
         VBox box = new VBox(4, form, list);
         box.setPadding(ToolLayout.padding());
@@ -223,8 +225,7 @@ public final class ArchiveView {
         return l;
     }
 
-    private static <T> StringConverter<T> words(java.util.function.Function<T, String> word,
-                                                java.util.function.Function<String, T> of) {
+    private static <T> StringConverter<T> words(Function<T, String> word, Function<String, T> of) {
         return new StringConverter<>() {
             @Override
             public String toString(T t) {

@@ -2,6 +2,7 @@ package org.scalewright.app.archive;
 
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
@@ -112,13 +113,25 @@ public final class ArchiveViewModel {
         this.settleUnsaved = settleUnsaved;
         this.remember = remember;
         this.file = new SimpleObjectProperty<>(archive);
-        instrument.addListener((o, was, now) -> refreshInstrument());
+        instrument.addListener((o, was, now) -> {
+            jobVersion.set(VersionChoice.NONE); // a version number names a version of one instrument only
+            refreshInstrument();
+        });
         during.addListener((o, was, now) -> caution.set(now.underRisingTension() ? "Caution: a string breaking "
                 + "during a pitch raise or while being brought up can whip and its wire ends cut. Wear eye "
                 + "protection and raise a large pitch change in stages." : ""));
         workingA4 = Bindings.createObjectBinding(() -> session.scale().pitch().a4(), session.scaleProperty());
-        workingA4.addListener((o, was, now) -> jobA4.set(NumberText.plain(now)));
-        session.settingsProperty().addListener((o, was, now) -> jobTable.set(now.strength().name()));
+        // the job form follows the working A4 and table while it shows them, never over what was typed
+        workingA4.addListener((o, was, now) -> {
+            if (was == null || NumberText.plain(was).equals(jobA4.get().strip())) {
+                jobA4.set(NumberText.plain(now));
+            }
+        });
+        session.settingsProperty().addListener((o, was, now) -> {
+            if (was == null || was.strength().name().equals(jobTable.get().strip())) {
+                jobTable.set(now.strength().name());
+            }
+        });
         startJobForm();
     }
 
@@ -148,6 +161,7 @@ public final class ArchiveViewModel {
     public boolean useArchive(Path other) {
         Path before = file.get();
         file.set(other);
+        jobVersion.set(VersionChoice.NONE);
         if (refresh()) {
             remember.accept(other);
             return true;
@@ -187,11 +201,12 @@ public final class ArchiveViewModel {
             breaks.setAll(JudgedBreak.all(a, name, session.settingsProperty().get()).stream()
                     .map(ArchiveViewModel::row).toList());
             jobs.setAll(a.jobs(name).stream().map(ArchiveViewModel::row).toList());
+            // the list replaced at once, then the choice kept as the list's own entry: the box shows it
             VersionChoice chosen = jobVersion.get();
-            jobVersions.setAll(VersionChoice.NONE);
-            all.forEach(v -> jobVersions.add(new VersionChoice(OptionalInt.of(v.number()),
-                    v.number() + " (" + v.label() + ")")));
-            jobVersion.set(jobVersions.contains(chosen) ? chosen : VersionChoice.NONE);
+            List<VersionChoice> choices = new ArrayList<>(List.of(VersionChoice.NONE));
+            all.forEach(v -> choices.add(new VersionChoice(OptionalInt.of(v.number()), v.numberAndLabel())));
+            jobVersions.setAll(choices);
+            jobVersion.set(choices.contains(chosen) ? choices.get(choices.indexOf(chosen)) : VersionChoice.NONE);
             return true;
         }, null);
     }
@@ -247,8 +262,7 @@ public final class ArchiveViewModel {
         String name = instrument.get();
         Scale scale = session.scale();
         if (scale.notes().isEmpty()) {
-            problem.set("the working scale is empty: open a sheet or a version first");
-            return false;
+            return refuse("the working scale is empty: open a sheet or a version first");
         }
         return act(a -> {
             ScaleVersion v = a.saveVersion(name, scale, label.get(), openedVersion, LocalDate.now());
@@ -260,7 +274,7 @@ public final class ArchiveViewModel {
     }
 
     private static String versionName(String name, ScaleVersion v) {
-        return name + ", version " + v.number() + " (" + v.label() + ")";
+        return name + ", version " + v.numberAndLabel();
     }
 
     // ---- jobs
@@ -277,8 +291,7 @@ public final class ArchiveViewModel {
             job = new Job(WorkDate.parse(jobDate.get(), LocalDate.now()), jobKind.get(), jobNotes.get(), jobPitch(),
                     jobTable.get(), jobVersion.get() == null ? OptionalInt.empty() : jobVersion.get().number());
         } catch (InvalidInput e) {
-            problem.set(e.getMessage());
-            return false;
+            return refuse(e.getMessage());
         }
         return act(a -> {
             a.logJob(name, job);
@@ -286,15 +299,14 @@ public final class ArchiveViewModel {
             jobKind.set("");
             jobNotes.set("");
             startJobForm();
-            message.set("logged job '" + job.kind() + "' on '" + name + "', " + job.date());
+            message.set(job.loggedOn(name));
             return true;
         }, null);
     }
 
     private OptionalDouble jobPitch() {
-        String typed = jobA4.get() == null ? "" : jobA4.get().strip();
-        return typed.isEmpty() ? OptionalDouble.empty()
-                : OptionalDouble.of(PitchStandard.of(TypedEntry.parse(typed, "A4", "Hz")).a4());
+        OptionalDouble typed = TypedEntry.optional(jobA4.get(), "A4", "Hz");
+        return typed.isEmpty() ? typed : OptionalDouble.of(PitchStandard.of(typed.getAsDouble()).a4());
     }
 
     /** The job form's pitch standard and strength table as the working ones. */
@@ -309,8 +321,7 @@ public final class ArchiveViewModel {
     public boolean logBreakOnSelectedKey() {
         Integer key = session.selectedKeyProperty().get();
         if (key == null) {
-            problem.set("select the key of the broken string in the note table first");
-            return false;
+            return refuse("select the key of the broken string in the note table first");
         }
         String name = instrument.get();
         StringBreak b;
@@ -318,8 +329,7 @@ public final class ArchiveViewModel {
             b = new StringBreak(WorkDate.parse(date.get(), LocalDate.now()), key, parseString(), parsePitch(),
                     during.get(), place.get(), "", remark.get());
         } catch (InvalidInput e) {
-            problem.set(e.getMessage());
-            return false;
+            return refuse(e.getMessage());
         }
         return act(a -> {
             ArchivedBreak kept = a.logBreak(name, b, OptionalInt.empty());
@@ -345,8 +355,7 @@ public final class ArchiveViewModel {
     }
 
     private OptionalDouble parsePitch() {
-        String s = pitch.get() == null ? "" : pitch.get().strip();
-        return s.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(TypedEntry.parse(s, "pitch at break", "Hz"));
+        return TypedEntry.optional(pitch.get(), "pitch at break", "Hz");
     }
 
     /** Runs one action on the archive; a refusal is shown as the panel's problem and changes nothing. */
@@ -366,12 +375,17 @@ public final class ArchiveViewModel {
             }
             return ok;
         } catch (InvalidInput e) {
-            problem.set(e.getMessage());
-            return false;
+            return refuse(e.getMessage());
         } catch (RuntimeException e) {
-            problem.set("the archive failed: " + e.getMessage());
-            return false;
+            return refuse("the archive failed: " + e.getMessage());
         }
+    }
+
+    /** Shows a refusal as the panel's problem, in place of the last success line; @return false */
+    private boolean refuse(String why) {
+        message.set("");
+        problem.set(why);
+        return false;
     }
 
     // ---- properties
@@ -483,7 +497,7 @@ public final class ArchiveViewModel {
     /** @return the key selected in the note table, as the break form names it */
     public ReadOnlyStringProperty selectedKeyText() {
         ReadOnlyStringWrapper text = new ReadOnlyStringWrapper();
-        text.bind(javafx.beans.binding.Bindings.createStringBinding(() -> {
+        text.bind(Bindings.createStringBinding(() -> {
             Integer k = session.selectedKeyProperty().get();
             return k == null ? "(select a key in the note table)" : k + " " + KeyNames.name(k);
         }, session.selectedKeyProperty()));

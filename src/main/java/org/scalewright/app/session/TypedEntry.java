@@ -2,6 +2,7 @@ package org.scalewright.app.session;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.scalewright.model.InvalidInput;
@@ -44,6 +45,16 @@ public final class TypedEntry {
         }
         throw new InvalidInput(what + ": expected a number" + unitWords(unit) + ", was '"
                 + (text == null ? "" : text.strip()) + "'");
+    }
+
+    /**
+     * Reads a number typed into a field that may be left blank.
+     *
+     * @return empty when nothing (or only blanks) was typed, else the number as {@link #parse} reads it
+     * @throws InvalidInput as {@link #parse} does
+     */
+    public static OptionalDouble optional(String text, String what, String unit) {
+        return text == null || text.isBlank() ? OptionalDouble.empty() : OptionalDouble.of(parse(text, what, unit));
     }
 
     /** @return the number in {@code text} (see {@link #parse}), or null with the problem added to {@code bad} */

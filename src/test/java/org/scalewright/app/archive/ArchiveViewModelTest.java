@@ -2,6 +2,7 @@ package org.scalewright.app.archive;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -198,5 +199,46 @@ class ArchiveViewModelTest {
         assertEquals("Marrowby & Fenn, 190, serial 40117, at the hall", archive.descriptionProperty().get());
         archive.instrumentProperty().set("upright");
         assertEquals("", archive.descriptionProperty().get(), "an instrument given by name alone");
+    }
+
+    @Test
+    void theVersionChosenForAJobStaysShownAndIsForgottenWithItsInstrument() {
+        aGrandWithOneVersion();
+        archive.jobVersionProperty().set(archive.jobVersions().get(1));
+        archive.jobKindProperty().set("restringing");
+        assertTrue(archive.logJob(), archive.problemProperty().get());
+        assertSame(archive.jobVersions().get(1), archive.jobVersionProperty().get(),
+                "after the list is made anew the choice is its own entry, so the box can show it");
+        archive.newInstrumentProperty().set("upright");
+        assertTrue(archive.addInstrument(), archive.problemProperty().get());
+        assertEquals(OptionalInt.empty(), archive.jobVersionProperty().get().number(),
+                "another instrument's version 1 is another version");
+        archive.instrumentProperty().set("grand-190");
+        assertEquals(OptionalInt.empty(), archive.jobVersionProperty().get().number());
+    }
+
+    @Test
+    void aRefusalTakesThePlaceOfTheLastSuccessLine() {
+        aGrandWithOneVersion();
+        archive.jobKindProperty().set("tuning");
+        assertTrue(archive.logJob(), archive.problemProperty().get());
+        assertFalse(archive.messageProperty().get().isEmpty());
+        assertFalse(archive.logJob(), "the kind was cleared for the next job");
+        assertEquals("", archive.messageProperty().get(), "no success line beside the refusal");
+        assertFalse(archive.problemProperty().get().isEmpty());
+    }
+
+    @Test
+    void aTypedPitchOrTableIsNeverOverwrittenByTheWorkingOne() {
+        aGrandWithOneVersion();
+        archive.jobA4Property().set("435");
+        archive.jobTableProperty().set("the maker's table of 1962");
+        assertTrue(window.session().setA4(442));
+        assertEquals("435", archive.jobA4Property().get(), "typed, so kept");
+        window.session().setStrength(org.scalewright.app.session.StrengthChoice.maximum());
+        assertEquals("the maker's table of 1962", archive.jobTableProperty().get(), "typed, so kept");
+        archive.jobA4Property().set("442");
+        assertTrue(window.session().setA4(443));
+        assertEquals("443", archive.jobA4Property().get(), "showing the working A4, so it follows");
     }
 }
