@@ -1,5 +1,8 @@
 package org.scalewright.archive;
 
+import java.util.ArrayList;
+import java.util.List;
+
 /**
  * An instrument in the archive, with free-text description fields ("" when not given).
  *
@@ -39,7 +42,7 @@ public record Instrument(String name, String maker, String model, String serial,
      *         (maker, model, serial, owner, place); "" when none is given
      */
     public String description() {
-        java.util.List<String> parts = new java.util.ArrayList<>();
+        List<String> parts = new ArrayList<>();
         for (String[] field : new String[][] {{"", maker}, {"", model}, {"serial ", serial}, {"owner ", owner},
                 {"at ", location}}) {
             if (!field[1].isEmpty()) {

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.function.BooleanSupplier;
@@ -123,12 +124,12 @@ public final class ArchiveViewModel {
         workingA4 = Bindings.createObjectBinding(() -> session.scale().pitch().a4(), session.scaleProperty());
         // the job form follows the working A4 and table while it shows them, never over what was typed
         workingA4.addListener((o, was, now) -> {
-            if (was == null || NumberText.plain(was).equals(jobA4.get().strip())) {
+            if (was == null || NumberText.plain(was).equals(Objects.toString(jobA4.get(), "").strip())) {
                 jobA4.set(NumberText.plain(now));
             }
         });
         session.settingsProperty().addListener((o, was, now) -> {
-            if (was == null || was.strength().name().equals(jobTable.get().strip())) {
+            if (was == null || was.strength().name().equals(Objects.toString(jobTable.get(), "").strip())) {
                 jobTable.set(now.strength().name());
             }
         });
